@@ -1,0 +1,173 @@
+/**
+ * The public API of the core. SI units everywhere: K, Pa (absolute), kg, m³, mol.
+ * Every function validates its input and throws `InputError` naming the argument and its
+ * valid range; solvers that cannot converge throw `ConvergenceError`, never a silent value.
+ */
+import { FLUIDS } from './data/fluids.js';
+import { InputError } from './errors.js';
+import type { ModelId } from './eos/model.js';
+import { resolveProduct, T_MAX_K, type ModelOptions, type Product, type ResolvedProduct } from './product.js';
+import { closedTankState, type ClosedTankState, type Phase } from './solvers/closedTank.js';
+import { mixtureAtT, phaseAt, saturationPressure } from './solvers/mixture.js';
+import { pureSaturation, pureCoefficients, pureZ } from './solvers/pure.js';
+
+export interface FluidSummary {
+  id: string;
+  name: string;
+  formula: string;
+  /** kg/mol */
+  molarMass: number;
+  /** K */
+  Tc: number;
+  /** Pa */
+  Pc: number;
+  omega: number;
+  /** Triple-point temperature, K. */
+  Ttriple: number;
+  /** Critical density, kg/m³. */
+  rhoc: number;
+}
+
+/** The listed fluids with their main constants. */
+export function listFluids(): FluidSummary[] {
+  return FLUIDS.map((f) => ({
+    id: f.id,
+    name: f.name,
+    formula: f.formula,
+    molarMass: f.molarMass,
+    Tc: f.Tc,
+    Pc: f.pc,
+    omega: f.omega,
+    Ttriple: f.Ttriple,
+    rhoc: f.rhoc,
+  }));
+}
+
+function checkTemperature(r: ResolvedProduct, T: unknown, field = 'T'): asserts T is number {
+  const range = `from ${fmt(r.Tmin)} K (the triple point) to ${T_MAX_K} K`;
+  if (typeof T !== 'number' || !Number.isFinite(T) || T <= 0 || T < r.Tmin || T > T_MAX_K) throw new InputError(field, range, T);
+}
+
+function fmt(x: number): string {
+  return String(Number(x.toPrecision(6)));
+}
+
+/** Saturation state. For a blend: bubble point of that liquid. */
+export interface SaturationState {
+  /** Vapour (pure) or bubble-point (blend) pressure, Pa absolute. */
+  p: number;
+  /** Saturated (bubble) liquid density, kg/m³. */
+  rhoL: number;
+  /** Saturated (incipient) vapour density, kg/m³. */
+  rhoV: number;
+  /** Mole fractions of the incipient vapour (equal to the liquid for a pure fluid). */
+  y: number[];
+  /** The model actually used. */
+  model: ModelId;
+}
+
+/** Critical temperature of a pure product, K (for a blend: Kay's-rule pseudo-critical). */
+export function criticalTemperature(product: Product, options?: ModelOptions): number {
+  const r = resolveProduct(product, options);
+  return r.components.reduce((s, m, i) => s + r.z[i]! * m.Tc, 0);
+}
+
+/**
+ * Saturation at T: vapour pressure with saturated liquid and vapour densities; for a blend,
+ * the bubble-point pressure of that liquid, its density and the incipient vapour's density.
+ * Valid from the triple point to 0.5 K below the critical temperature (pure fluids), or up to
+ * the blend's critical region (an `InputError` names T when the blend has no bubble point).
+ */
+export function saturation(product: Product, T: number, options?: ModelOptions): SaturationState {
+  const r = resolveProduct(product, options);
+  checkTemperature(r, T);
+  if (r.components.length === 1) {
+    const m = r.components[0]!;
+    if (T > m.Tc - 0.5) throw new InputError('T', `from ${fmt(r.Tmin)} K to ${fmt(m.Tc - 0.5)} K (0.5 K below the critical temperature)`, T);
+    const s = pureSaturation(m, T);
+    return { p: s.p, rhoL: m.molarMass / s.vL, rhoV: m.molarMass / s.vV, y: [1], model: r.model };
+  }
+  const mx = mixtureAtT(r, T);
+  let b;
+  try {
+    b = saturationPressure(mx, r.z, 'bubble');
+  } catch {
+    throw new InputError('T', `below the blend's critical region (no bubble point at ${fmt(T)} K)`, T);
+  }
+  const My = b.incipient.reduce((s, y, i) => s + y * mx.M[i]!, 0);
+  return { p: b.p, rhoL: r.molarMass / b.vBulk, rhoV: My / b.vIncipient, y: Array.from(b.incipient), model: r.model };
+}
+
+/**
+ * Density of the liquid at T and p, kg/m³. p must be at or above the saturation (bubble)
+ * pressure at T, and T below the critical temperature (pure) or the blend's critical region.
+ */
+export function liquidDensity(product: Product, T: number, p: number, options?: ModelOptions): number {
+  const r = resolveProduct(product, options);
+  checkTemperature(r, T);
+  if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9) throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p);
+  const sat = saturation(product, T, options);
+  if (p < sat.p * (1 - 1e-9)) {
+    throw new InputError('p', `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.p)} Pa) for a liquid`, p);
+  }
+  if (r.components.length === 1) {
+    const m = r.components[0]!;
+    const k = pureCoefficients(m, T);
+    const z = pureZ(m, k, T, p, 'liquid');
+    return m.molarMass / ((z.Z * 8.314462618 * T) / p - k.c);
+  }
+  const mx = mixtureAtT(r, T);
+  return r.molarMass / phaseAt(mx, p, r.z, 'liquid').v;
+}
+
+export interface ClosedTankResult {
+  phase: Phase;
+  /** Absolute pressure, Pa. */
+  p: number;
+  /** Liquid volume ÷ tank volume, 0…1 (1 when liquid-full). */
+  liquidFraction: number;
+  /** Density of the liquid present, kg/m³, or null. */
+  rhoL: number | null;
+  /** Density of the vapour present, kg/m³, or null. */
+  rhoV: number | null;
+  /** Vapour mass ÷ contents mass. */
+  vapourMassFraction: number;
+  /** Liquid and vapour mole fractions, in the product's component order. */
+  x: number[];
+  y: number[];
+  model: ModelId;
+}
+
+/** Highest overall density accepted, kg/m³: 95 % of the model's close-packed limit M/(b − c). */
+export function maxDensity(product: Product, T: number, options?: ModelOptions): number {
+  const r = resolveProduct(product, options);
+  let vmin = 0;
+  r.components.forEach((m, i) => {
+    vmin += r.z[i]! * (m.b - m.shift(T));
+  });
+  return (0.95 * r.molarMass) / vmin;
+}
+
+/**
+ * The state of contents of overall density `density` (kg/m³ = mass ÷ tank volume) at T.
+ */
+export function closedTank(product: Product, T: number, density: number, options?: ModelOptions): ClosedTankResult {
+  const r = resolveProduct(product, options);
+  checkTemperature(r, T);
+  const dmax = maxDensity(product, T, options);
+  if (typeof density !== 'number' || !Number.isFinite(density) || density <= 0 || density > dmax) {
+    throw new InputError('density', `above 0 and at most ${fmt(dmax)} kg/m³ for this product at this temperature`, density);
+  }
+  const s: ClosedTankState = closedTankState(r, T, density);
+  return {
+    phase: s.phase,
+    p: s.p,
+    liquidFraction: s.liquidFraction,
+    rhoL: s.rhoL,
+    rhoV: s.rhoV,
+    vapourMassFraction: s.vapourMassFraction,
+    x: s.x,
+    y: s.y,
+    model: r.model,
+  };
+}

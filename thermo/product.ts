@@ -1,0 +1,149 @@
+/**
+ * What the caller calls a product — a listed fluid id, a blend of listed fluids, or a custom
+ * fluid given by its constants — resolved and validated into component models.
+ */
+import { fluidById, FLUIDS } from './data/fluids.js';
+import { interactionParameter } from './data/kij.js';
+import { componentModel, MODEL_IDS, type ComponentModel, type ModelId } from './eos/model.js';
+import { InputError } from './errors.js';
+
+/** A custom fluid: an engineer's escape hatch. Textbook models apply (PR under the default). */
+export interface CustomFluid {
+  name: string;
+  /** kg/mol */
+  molarMass: number;
+  /** K */
+  Tc: number;
+  /** Pa */
+  Pc: number;
+  /** Acentric factor. */
+  omega: number;
+}
+
+export interface BlendComponent {
+  id: string;
+  moleFraction: number;
+}
+
+export type Product = string | { components: BlendComponent[] } | { custom: CustomFluid };
+
+export interface ModelOptions {
+  /** `'PR'` (1976) or `'SRK'` (1972), untranslated; omitted means the tuned default. */
+  model?: ModelId;
+}
+
+/** A product resolved into component models and mole fractions. */
+export interface ResolvedProduct {
+  readonly label: string;
+  readonly components: readonly ComponentModel[];
+  /** Mole fractions, summing to 1 (normalised after validation). */
+  readonly z: readonly number[];
+  /** Binary interaction parameters k_ij (symmetric, zero diagonal). */
+  readonly kij: readonly (readonly number[])[];
+  /** Lowest temperature accepted, K: the highest triple point of the components. */
+  readonly Tmin: number;
+  /** Mixture molar mass, kg/mol. */
+  readonly molarMass: number;
+  readonly model: ModelId;
+}
+
+/** Highest temperature accepted by the API, K. The models are fitted well below it. */
+export const T_MAX_K = 600;
+
+const KNOWN_IDS = () => FLUIDS.map((f) => f.id).join(', ');
+
+export function resolveModel(options: ModelOptions | undefined): ModelId {
+  const model = options?.model ?? 'tuned';
+  if (!MODEL_IDS.includes(model)) throw new InputError('options.model', `one of ${MODEL_IDS.map((m) => `'${m}'`).join(', ')}`, model);
+  return model;
+}
+
+const cache = new Map<string, ResolvedProduct>();
+
+export function resolveProduct(product: Product, options?: ModelOptions): ResolvedProduct {
+  const model = resolveModel(options);
+  if (typeof product === 'string') {
+    const key = `${model}|${product}`;
+    const hit = cache.get(key);
+    if (hit) return hit;
+    const f = fluidById(product);
+    if (!f) throw new InputError('product', `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`, product);
+    const cm = componentModel(f, model);
+    const r: ResolvedProduct = {
+      label: f.name,
+      components: [cm],
+      z: [1],
+      kij: [[0]],
+      Tmin: f.Ttriple,
+      molarMass: f.molarMass,
+      model: cm.model,
+    };
+    cache.set(key, r);
+    return r;
+  }
+  if (product === null || typeof product !== 'object') {
+    throw new InputError('product', `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`, product);
+  }
+  if ('custom' in product) return resolveCustom(product.custom, model);
+  if ('components' in product) return resolveBlend(product.components, model);
+  throw new InputError('product', 'a fluid id, { components: [...] } or { custom: {...} }', product);
+}
+
+function resolveCustom(c: CustomFluid, model: ModelId): ResolvedProduct {
+  if (c === null || typeof c !== 'object') throw new InputError('product.custom', 'an object { name, molarMass, Tc, Pc, omega }', c);
+  const check = (field: keyof CustomFluid, lo: number, hi: number, unit: string) => {
+    const x = c[field];
+    if (typeof x !== 'number' || !Number.isFinite(x) || x < lo || x > hi) {
+      throw new InputError(`product.custom.${field}`, `a number from ${lo} to ${hi} ${unit}`, x);
+    }
+  };
+  check('molarMass', 0.002, 1, 'kg/mol');
+  check('Tc', 5, 1000, 'K');
+  check('Pc', 1e5, 1e8, 'Pa');
+  check('omega', -0.4, 1.5, '(acentric factor)');
+  if (typeof c.name !== 'string' || c.name.trim() === '') throw new InputError('product.custom.name', 'a non-empty name', c.name);
+  const cm = componentModel({ id: `custom:${c.name}`, molarMass: c.molarMass, Tc: c.Tc, pc: c.Pc, omega: c.omega }, model);
+  return {
+    label: c.name,
+    components: [cm],
+    z: [1],
+    kij: [[0]],
+    // No triple point is known for a custom fluid: accept down to 0.3·Tc, where cubic alphas are still sane.
+    Tmin: 0.3 * c.Tc,
+    molarMass: c.molarMass,
+    model: cm.model,
+  };
+}
+
+function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
+  if (!Array.isArray(list) || list.length === 0) throw new InputError('product.components', 'a non-empty array of { id, moleFraction }', list);
+  if (list.length > 12) throw new InputError('product.components', 'at most 12 components', list.length);
+  const seen = new Set<string>();
+  let sum = 0;
+  list.forEach((c, i) => {
+    const f = c && typeof c === 'object' ? fluidById(c.id) : undefined;
+    if (!f) throw new InputError(`product.components[${i}].id`, `a listed fluid id (${KNOWN_IDS()})`, c?.id);
+    if (seen.has(c.id)) throw new InputError(`product.components[${i}].id`, 'an id not already in the blend', c.id);
+    seen.add(c.id);
+    const x = c.moleFraction;
+    if (typeof x !== 'number' || !Number.isFinite(x) || x < 0 || x > 1) {
+      throw new InputError(`product.components[${i}].moleFraction`, 'a number from 0 to 1', x);
+    }
+    sum += x;
+  });
+  if (Math.abs(sum - 1) > 1e-6) throw new InputError('product.components[].moleFraction', 'fractions that sum to 1 (within 1e-6)', sum);
+  const kept = list.filter((c) => c.moleFraction > 0);
+  const fluids = kept.map((c) => fluidById(c.id)!);
+  const components = fluids.map((f) => componentModel(f, model));
+  const z = kept.map((c) => c.moleFraction / sum);
+  const kij = fluids.map((fi) => fluids.map((fj) => (fi === fj ? 0 : interactionParameter(fi.id, fj.id, model))));
+  return {
+    label: kept.map((c, i) => `${fluids[i]!.name} ${(c.moleFraction * 100).toFixed(1)} %`).join(' + '),
+    components,
+    z,
+    kij,
+    Tmin: Math.max(...fluids.map((f) => f.Ttriple)),
+    molarMass: fluids.reduce((s, f, i) => s + f.molarMass * z[i]!, 0),
+    model: components.every((c) => c.model === 'tuned') ? 'tuned' : (components[0]?.model ?? model),
+  };
+}

@@ -1,0 +1,191 @@
+/**
+ * The closed-tank state: given T and the overall density of the contents (mass ÷ tank
+ * volume), the phase state, pressure and liquid volume fraction. This is an isochoric
+ * (T, V, n) flash.
+ *
+ * Pure fluid, T < Tc: with ρ_L and ρ_V the saturated densities,
+ *   ρ ≥ ρ_L → liquid-full, p = p(T, v) on the liquid branch;
+ *   ρ ≤ ρ_V → vapour only, p = p(T, v);
+ *   otherwise two-phase at p_sat, liquid fraction (ρ − ρ_V)/(ρ_L − ρ_V).
+ * Blend: the same three cases, bounded by the bubble point (liquid side) and the dew point
+ * (vapour side); inside, the pressure is found by bracketed secant in ln p such that the PT
+ * flash reproduces the overall molar volume: (1 − β)·v_L + β·v_V = v.
+ * Above the critical temperature (pure) or above the blend's critical region: one
+ * supercritical phase, p = p(T, v); its "liquid fraction" is 1 at or above the model's
+ * critical density (the dense fluid fills the tank) and 0 below.
+ */
+import { ConvergenceError } from '../errors.js';
+import type { ResolvedProduct } from '../product.js';
+import { flashPT, mixtureAtT, mixturePressure, saturationPressure, type MixtureAtT } from './mixture.js';
+import { pureSaturation, purePressure } from './pure.js';
+
+export type Phase = 'two-phase' | 'liquid' | 'vapour' | 'supercritical';
+
+export interface ClosedTankState {
+  phase: Phase;
+  /** Absolute pressure, Pa. */
+  p: number;
+  /** Liquid volume ÷ tank volume (1 when liquid-full). */
+  liquidFraction: number;
+  /** Density of the liquid present, kg/m³ (null when there is none). */
+  rhoL: number | null;
+  /** Density of the vapour present, kg/m³ (null when there is none). */
+  rhoV: number | null;
+  /** Mass of vapour ÷ total mass. */
+  vapourMassFraction: number;
+  /** Mole fractions of the liquid and vapour (equal to the feed in one phase). */
+  x: number[];
+  y: number[];
+  /** Outer iterations of the solver (0 for direct evaluations). */
+  iterations: number;
+}
+
+function molarMassOf(mx: MixtureAtT, x: ArrayLike<number>): number {
+  let s = 0;
+  for (let i = 0; i < mx.n; i++) s += x[i]! * mx.M[i]!;
+  return s;
+}
+
+export function closedTankState(product: ResolvedProduct, T: number, rho: number): ClosedTankState {
+  if (product.components.length === 1) return closedTankPure(product, T, rho);
+  return closedTankBlend(product, T, rho);
+}
+
+function closedTankPure(product: ResolvedProduct, T: number, rho: number): ClosedTankState {
+  const m = product.components[0]!;
+  const v = m.molarMass / rho;
+  const one = [1];
+  if (T < m.Tc) {
+    let sat;
+    try {
+      sat = pureSaturation(m, T);
+    } catch (e) {
+      // Within a few mK of Tc the two roots merge numerically: treat as critical.
+      if (!(e instanceof ConvergenceError) || T < m.Tc - 0.05) throw e;
+    }
+    if (sat) {
+      const rhoL = m.molarMass / sat.vL;
+      const rhoV = m.molarMass / sat.vV;
+      if (rho >= rhoL) {
+        return { phase: 'liquid', p: Math.max(purePressure(m, T, v), sat.p), liquidFraction: 1, rhoL: rho, rhoV: null, vapourMassFraction: 0, x: one, y: one, iterations: 0 };
+      }
+      if (rho <= rhoV) {
+        return { phase: 'vapour', p: Math.min(purePressure(m, T, v), sat.p), liquidFraction: 0, rhoL: null, rhoV: rho, vapourMassFraction: 1, x: one, y: one, iterations: 0 };
+      }
+      const lf = (rho - rhoV) / (rhoL - rhoV);
+      return {
+        phase: 'two-phase',
+        p: sat.p,
+        liquidFraction: lf,
+        rhoL,
+        rhoV,
+        vapourMassFraction: ((1 - lf) * rhoV) / rho,
+        x: one,
+        y: one,
+        iterations: sat.iterations,
+      };
+    }
+  }
+  const dense = rho >= m.rhoc;
+  return {
+    phase: 'supercritical',
+    p: purePressure(m, T, v),
+    liquidFraction: dense ? 1 : 0,
+    rhoL: dense ? rho : null,
+    rhoV: dense ? null : rho,
+    vapourMassFraction: dense ? 0 : 1,
+    x: one,
+    y: one,
+    iterations: 0,
+  };
+}
+
+function singlePhase(mx: MixtureAtT, z: readonly number[], rho: number, v: number, phase: 'liquid' | 'vapour' | 'supercritical', dense: boolean): ClosedTankState {
+  const p = mixturePressure(mx, z, v);
+  const liquid = phase === 'liquid' || (phase === 'supercritical' && dense);
+  return {
+    phase,
+    p,
+    liquidFraction: liquid ? 1 : 0,
+    rhoL: liquid ? rho : null,
+    rhoV: liquid ? null : rho,
+    vapourMassFraction: liquid ? 0 : 1,
+    x: [...z],
+    y: [...z],
+    iterations: 0,
+  };
+}
+
+function closedTankBlend(product: ResolvedProduct, T: number, rho: number): ClosedTankState {
+  const mx = mixtureAtT(product, T);
+  const z = product.z;
+  const M = molarMassOf(mx, z);
+  const v = M / rho;
+  let bubble;
+  try {
+    bubble = saturationPressure(mx, z, 'bubble');
+  } catch (e) {
+    if (!(e instanceof ConvergenceError)) throw e;
+  }
+  // Pseudo-critical density by Kay's rule on the models' critical densities.
+  const rhoPc = M / product.components.reduce((s, m, i) => s + z[i]! * (m.molarMass / m.rhoc), 0);
+  if (!bubble) return singlePhase(mx, z, rho, v, 'supercritical', rho >= rhoPc);
+  if (v <= bubble.vBulk) return singlePhase(mx, z, rho, v, 'liquid', true);
+  let dew;
+  try {
+    dew = saturationPressure(mx, z, 'dew');
+  } catch (e) {
+    if (!(e instanceof ConvergenceError)) throw e;
+  }
+  if (!dew) return singlePhase(mx, z, rho, v, 'supercritical', rho >= rhoPc);
+  if (v >= dew.vBulk) return singlePhase(mx, z, rho, v, 'vapour', false);
+
+  // Two-phase: find ln p in (ln p_dew, ln p_bubble) with v_flash(p) = v. v_flash falls with p.
+  let lo = Math.log(dew.p);
+  let hi = Math.log(bubble.p);
+  let fLo = Math.log(dew.vBulk / v); // > 0
+  let fHi = Math.log(bubble.vBulk / v); // < 0
+  // Start K from the bubble point (K = y/x there), then warm-start each flash from the last.
+  let K = Float64Array.from(bubble.incipient, (yi, i) => yi / z[i]!);
+  let best: { p: number; f: ReturnType<typeof flashPT>; g: number } | undefined;
+  let side = 0;
+  for (let it = 1; it <= 100; it++) {
+    // Illinois variant of regula falsi in ln p.
+    let lnP = (lo * fHi - hi * fLo) / (fHi - fLo);
+    if (!(lnP > lo && lnP < hi)) lnP = 0.5 * (lo + hi);
+    const p = Math.exp(lnP);
+    const fl = flashPT(mx, z, p, K);
+    K = fl.K;
+    const vFlash = (1 - fl.beta) * fl.vL + fl.beta * fl.vV;
+    const g = Math.log(vFlash / v);
+    best = { p, f: fl, g };
+    if (Math.abs(g) < 1e-11 || hi - lo < 1e-13) {
+      const nL = 1 - fl.beta;
+      const massL = nL * molarMassOf(mx, fl.x);
+      const massV = fl.beta * molarMassOf(mx, fl.y);
+      return {
+        phase: 'two-phase',
+        p,
+        liquidFraction: Math.min(1, Math.max(0, (nL * fl.vL) / v)),
+        rhoL: molarMassOf(mx, fl.x) / fl.vL,
+        rhoV: molarMassOf(mx, fl.y) / fl.vV,
+        vapourMassFraction: massV / (massL + massV),
+        x: Array.from(fl.x),
+        y: Array.from(fl.y),
+        iterations: it,
+      };
+    }
+    if (g > 0) {
+      lo = lnP;
+      fLo = g;
+      if (side === -1) fHi /= 2;
+      side = -1;
+    } else {
+      hi = lnP;
+      fHi = g;
+      if (side === 1) fLo /= 2;
+      side = 1;
+    }
+  }
+  throw new ConvergenceError('closed-tank blend', `no pressure reproduces the overall density at T = ${T} K`, 100, Math.abs(best?.g ?? NaN));
+}
