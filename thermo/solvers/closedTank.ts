@@ -146,7 +146,7 @@ function closedTankBlend(product: ResolvedProduct, T: number, rho: number): Clos
   let fLo = Math.log(dew.vBulk / v); // > 0
   let fHi = Math.log(bubble.vBulk / v); // < 0
   // Start K from the bubble point (K = y/x there), then warm-start each flash from the last.
-  let K = Float64Array.from(bubble.incipient, (yi, i) => yi / z[i]!);
+  let K: Float64Array<ArrayBufferLike> = Float64Array.from(bubble.incipient, (yi, i) => yi / z[i]!);
   let best: { p: number; f: ReturnType<typeof flashPT>; g: number } | undefined;
   let side = 0;
   for (let it = 1; it <= 100; it++) {
