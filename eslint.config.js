@@ -1,8 +1,9 @@
 import js from '@eslint/js';
+import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'node_modules/**', 'coverage/**', 'dev-dist/**'] },
+  { ignores: ['dist/**', 'node_modules/**', 'coverage/**', 'dev-dist/**', '.reports/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
@@ -10,5 +11,15 @@ export default tseslint.config(
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_' }],
     },
+  },
+  // Plain JavaScript run by Node: scripts and tool configs.
+  {
+    files: ['**/*.mjs', '**/*.cjs', '*.config.js'],
+    languageOptions: { globals: globals.node },
+  },
+  // Plain JavaScript service-worker fixtures used by the browser tests.
+  {
+    files: ['test/components/fixtures/*.js'],
+    languageOptions: { globals: globals.serviceworker },
   },
 );
