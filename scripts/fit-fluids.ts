@@ -6,10 +6,12 @@
  * 1. Mathias–Copeman c1, c2, c3 (Peng–Robinson family): least squares on ln p_sat against the
  *    reference saturation tables in test/reference/sat/ (computed from each fluid's published
  *    reference equation of state, see test/reference/README.md).
- * 2. Volume translation c(T) = c_c + Σ d_k τ^e_k: c_c from the reference critical density;
- *    d_k by weighted linear least squares on c_needed = v_L,cubic − M/ρ_L,ref over the same
- *    tables plus the liquid-full points of test/reference/liquid-full.csv (where the tank
- *    holds only saturated liquid, so ρ_L(T) equals the overall density).
+ * 2. The volume correction of eos/volumeCorrection.ts, linear in its parameters, by weighted
+ *    least squares on relative volume error over: saturated liquid and vapour (the same
+ *    tables), compressed liquid (test/reference/liquid/), and the closed-tank points of
+ *    test/reference/liquid-full.csv (at a liquid-full transition the tank holds only saturated
+ *    liquid, so ρ_L(T) equals the overall density; 2 K and 5 K above it the liquid is compressed
+ *    at that density to the tabulated pressure). The critical density is held exact.
  * Chlorine has no reference table: its psat is fitted to the normal boiling point, the
  * acentric-factor point (Tr = 0.7) and the critical point, and its liquid density to the
  * Rackett equation with Z_RA from Hankinson & Thomson (1979); the checks then compare it with
@@ -19,10 +21,10 @@ import { writeFileSync } from 'node:fs';
 import { R_J_molK } from '../thermo/constants.js';
 import { FLUIDS, type FluidConstants } from '../thermo/data/fluids.js';
 import { componentModel } from '../thermo/eos/model.js';
-import { SHIFT_EXPONENTS, type ShiftParams } from '../thermo/eos/translation.js';
+import { DISTANCE_KAPPA, NO_CORRECTION, SHIFT_EXPONENTS, vapourBump, type VolumeCorrectionParams } from '../thermo/eos/volumeCorrection.js';
 import { mPengRobinson1976 } from '../thermo/eos/alpha.js';
-import { PENG_ROBINSON } from '../thermo/eos/cubic.js';
-import { pureSaturation } from '../thermo/solvers/pure.js';
+import { dPdv, PENG_ROBINSON } from '../thermo/eos/cubic.js';
+import { pureCoefficients, pureSaturation, pureZ } from '../thermo/solvers/pure.js';
 import { readCsv } from './lib/csv.js';
 import { leastSquares, levenbergMarquardt } from './lib/linalg.js';
 
@@ -65,7 +67,7 @@ function fitAlpha(f: FluidConstants, pts: Point[]): [number, number, number] {
   const pp = pts.filter((x) => x.p !== undefined);
   const residuals = (c: number[]) =>
     pp.map((x) => {
-      const m = componentModel(f, 'tuned', { mathiasCopeman: [c[0]!, c[1]!, c[2]!], shift: { cc: 0, d: [] } });
+      const m = componentModel(f, 'tuned', { mathiasCopeman: [c[0]!, c[1]!, c[2]!], volume: NO_CORRECTION });
       return Math.log(pureSaturation(m, x.T, x.p).p / x.p!);
     });
   const start = [mPengRobinson1976(f.omega), 0, 0];
@@ -79,34 +81,114 @@ function fitAlpha(f: FluidConstants, pts: Point[]): [number, number, number] {
   return [params[0]!, params[1]!, params[2]!];
 }
 
-function fitShift(f: FluidConstants, mc: [number, number, number], pts: Point[]): ShiftParams {
-  const vcCubic = (PENG_ROBINSON.Zc * R * f.Tc) / f.pc;
-  const cc = vcCubic - f.molarMass / f.rhoc;
-  const m = componentModel(f, 'tuned', { mathiasCopeman: mc, shift: { cc: 0, d: [] } });
-  const X: number[][] = [];
-  const y: number[] = [];
-  const w: number[] = [];
+interface VolumePoint {
+  T: number;
+  /** The cubic's molar volume at the state, m³/mol. */
+  vCub: number;
+  /** Reference molar volume, m³/mol. */
+  vRef: number;
+  /** Relative weight (the targets: 0.5 % liquid, 2 % vapour). */
+  weight: number;
+}
+
+/** The states the volume correction is fitted to, each as (T, cubic volume, reference volume). */
+function volumePoints(f: FluidConstants, mc: [number, number, number], pts: Point[]): VolumePoint[] {
+  const m = componentModel(f, 'tuned', { mathiasCopeman: mc, volume: NO_CORRECTION });
+  const out: VolumePoint[] = [];
+  const liquidAt = (T: number, p: number) => (pureZ(m, pureCoefficients(m, T), T, p, 'liquid').Z * R * T) / p;
   for (const x of pts) {
     if (x.rhoL === undefined || x.T >= f.Tc) continue;
-    const sat = pureSaturation(m, x.T);
-    const vRef = f.molarMass / x.rhoL;
-    const tau = 1 - x.T / f.Tc;
-    X.push(SHIFT_EXPONENTS.map((e) => Math.pow(tau, e)));
-    y.push(sat.vL - vRef - cc);
-    // Relative error in density is what the targets measure: weight by 1/v².
-    w.push(1 / (vRef * vRef));
+    out.push({ T: x.T, vCub: pureSaturation(m, x.T).vLCub, vRef: f.molarMass / x.rhoL, weight: 1 });
   }
-  const d = leastSquares(X, y, w, 1e-10);
-  return { cc, d };
+  if (f.id === 'chlorine') return out;
+  for (const r of readCsv(`${REF}sat/${f.id}.csv`)) {
+    const T = +r.T_K!;
+    out.push({ T, vCub: pureSaturation(m, T).vVCub, vRef: f.molarMass / +r.rhoV_kg_m3!, weight: 0.1 });
+  }
+  for (const r of readCsv(`${REF}liquid/${f.id}.csv`)) {
+    const T = +r.T_K!;
+    out.push({ T, vCub: liquidAt(T, +r.p_Pa!), vRef: f.molarMass / +r.rho_kg_m3!, weight: 1 });
+  }
+  for (const r of readCsv(`${REF}liquid-full.csv`)) {
+    if (r.fluid !== f.id) continue;
+    const rho = +r.rho_overall_kg_m3!;
+    const T0 = +r.T_transition_K!;
+    if (r.transition === 'vapour-full' && T0 < f.Tc - 0.5) {
+      out.push({ T: T0, vCub: pureSaturation(m, T0).vVCub, vRef: f.molarMass / rho, weight: 0.1 });
+    }
+    if (r.transition !== 'liquid-full') continue;
+    for (const [dT, key] of [[2, 'p_T_plus_2K_Pa'], [5, 'p_T_plus_5K_Pa']] as const) {
+      const T = T0 + dT;
+      if (T >= f.Tc) continue;
+      out.push({ T, vCub: liquidAt(T, +r[key]!), vRef: f.molarMass / rho, weight: 0.5 });
+    }
+  }
+  return out;
+}
+
+/** Basis of the linear fit: y = v_cub − v_ref − K = Σ d_k τ^e_k + δ(g − 1) + v_cub·s(r)·(e0 + e1 τ + e2 τ²). */
+function volumeBasis(f: FluidConstants, vcCub: number, x: VolumePoint, withDistance: boolean): number[] {
+  const tau = Math.max(0, 1 - x.T / f.Tc);
+  const row = SHIFT_EXPONENTS.map((e) => Math.pow(tau, e));
+  if (!withDistance) return row;
+  const s = vapourBump(vcCub / x.vCub);
+  return [...row, distanceFunction(f, x) - 1, x.vCub * s, x.vCub * s * tau, x.vCub * s * tau * tau];
+}
+
+const mcCache = new Map<string, [number, number, number]>();
+function distanceFunction(f: FluidConstants, x: VolumePoint): number {
+  const mc = mcCache.get(f.id)!;
+  const m = componentModel(f, 'tuned', { mathiasCopeman: mc, volume: NO_CORRECTION });
+  const k = pureCoefficients(m, x.T);
+  const d = -((x.vCub * x.vCub) / (R * x.T)) * dPdv(m.family, R, x.T, x.vCub, k.a, k.b);
+  return DISTANCE_KAPPA / (DISTANCE_KAPPA + Math.max(d, 0));
+}
+
+/** Generalised δ/v_c,cub and ε for a fluid with no vapour or compressed-liquid data (chlorine). */
+const generalised = { deltaOverVc: [] as number[], eps: [] as number[][] };
+
+function fitVolume(f: FluidConstants, mc: [number, number, number], pts: Point[]): VolumeCorrectionParams {
+  mcCache.set(f.id, mc);
+  const vcCub = (PENG_ROBINSON.Zc * R * f.Tc) / f.pc;
+  const K = vcCub - f.molarMass / f.rhoc;
+  const data = volumePoints(f, mc, pts);
+  // States past 0.97·Tc count less: the cubic cannot follow the critical region closely, and
+  // letting it try there costs accuracy where tanks actually operate.
+  const w = data.map((x) => (x.weight * (x.T > 0.97 * f.Tc ? 0.2 : 1)) / (x.vRef * x.vRef));
+  if (f.id === 'chlorine') {
+    // No data for the distance and vapour terms: take the mean of the fitted fluids, scaled by v_c.
+    const mean = (a: number[]) => a.reduce((s, x) => s + x, 0) / a.length;
+    const delta = mean(generalised.deltaOverVc) * vcCub;
+    const eps = [0, 1, 2].map((k) => mean(generalised.eps.map((e) => e[k]!)));
+    const y = data.map((x) => {
+      const tau = Math.max(0, 1 - x.T / f.Tc);
+      const s = vapourBump(vcCub / x.vCub);
+      return x.vCub - x.vRef - K - delta * (distanceFunction(f, x) - 1) - x.vCub * s * (eps[0]! + eps[1]! * tau + eps[2]! * tau * tau);
+    });
+    const d = leastSquares(data.map((x) => volumeBasis(f, vcCub, x, false)), y, w, 1e-10);
+    return { cc: K - delta, d, delta, eps };
+  }
+  const X = data.map((x) => volumeBasis(f, vcCub, x, true));
+  const y = data.map((x) => x.vCub - x.vRef - K);
+  const beta = leastSquares(X, y, w, 1e-10);
+  const nd = SHIFT_EXPONENTS.length;
+  const delta = beta[nd]!;
+  const eps = beta.slice(nd + 1);
+  generalised.deltaOverVc.push(delta / vcCub);
+  generalised.eps.push(eps);
+  return { cc: K - delta, d: beta.slice(0, nd), delta, eps };
 }
 
 const out: string[] = [];
-for (const f of FLUIDS) {
+// Chlorine last: its distance and vapour terms are the mean of the others.
+const ordered = [...FLUIDS.filter((f) => f.id !== 'chlorine'), ...FLUIDS.filter((f) => f.id === 'chlorine')];
+for (const f of ordered) {
   const { points, note } = referencePoints(f);
   const mc = fitAlpha(f, points);
-  const shift = fitShift(f, mc, points);
+  const vol = fitVolume(f, mc, points);
+  const num = (x: number) => x.toPrecision(10);
   out.push(
-    `  '${f.id}': {\n    mathiasCopeman: [${mc.map((x) => x.toPrecision(10)).join(', ')}],\n    shift: { cc: ${shift.cc.toPrecision(10)}, d: [${shift.d.map((x) => x.toPrecision(10)).join(', ')}] },\n    fittedTo: '${note}',\n  },`,
+    `  '${f.id}': {\n    mathiasCopeman: [${mc.map(num).join(', ')}],\n    volume: { cc: ${num(vol.cc)}, d: [${vol.d.map(num).join(', ')}], delta: ${num(vol.delta)}, eps: [${vol.eps.map(num).join(', ')}] },\n    fittedTo: '${note}',\n  },`,
   );
   console.error(`fitted ${f.id}`);
 }
@@ -116,13 +198,13 @@ const file = `/**
  * (\`npm run fit\`) — do not edit by hand; change the script or its data and run it again.
  * Each entry says what it was fitted to.
  */
-import type { ShiftParams } from '../eos/translation.js';
+import type { VolumeCorrectionParams } from '../eos/volumeCorrection.js';
 
 export interface FittedParams {
   /** Mathias–Copeman c1, c2, c3 for the Peng–Robinson family. */
   readonly mathiasCopeman: readonly [number, number, number];
-  /** Volume translation c(T); see eos/translation.ts. m³/mol. */
-  readonly shift: ShiftParams;
+  /** Volume correction; see eos/volumeCorrection.ts. Volumes in m³/mol. */
+  readonly volume: VolumeCorrectionParams;
   /** What the parameters were fitted to. */
   readonly fittedTo: string;
 }

@@ -9,7 +9,7 @@ import type { ModelId } from './eos/model.js';
 import { resolveProduct, T_MAX_K, type ModelOptions, type Product, type ResolvedProduct } from './product.js';
 import { closedTankState, type ClosedTankState, type Phase } from './solvers/closedTank.js';
 import { mixtureAtT, phaseAt, saturationPressure } from './solvers/mixture.js';
-import { pureSaturation, pureCoefficients, pureZ } from './solvers/pure.js';
+import { pureSaturation, pureVolume } from './solvers/pure.js';
 
 export interface FluidSummary {
   id: string;
@@ -112,9 +112,7 @@ export function liquidDensity(product: Product, T: number, p: number, options?: 
   }
   if (r.components.length === 1) {
     const m = r.components[0]!;
-    const k = pureCoefficients(m, T);
-    const z = pureZ(m, k, T, p, 'liquid');
-    return m.molarMass / ((z.Z * 8.314462618 * T) / p - k.c);
+    return m.molarMass / pureVolume(m, T, p, 'liquid');
   }
   const mx = mixtureAtT(r, T);
   return r.molarMass / phaseAt(mx, p, r.z, 'liquid').v;
@@ -138,14 +136,14 @@ export interface ClosedTankResult {
   model: ModelId;
 }
 
-/** Highest overall density accepted, kg/m³: 95 % of the model's close-packed limit M/(b − c). */
+/**
+ * Highest overall density accepted, kg/m³: the model's liquid density at T and 100 MPa
+ * (far beyond any tank's strength; the closed-tank pressure there is 100 MPa).
+ */
 export function maxDensity(product: Product, T: number, options?: ModelOptions): number {
   const r = resolveProduct(product, options);
-  let vmin = 0;
-  r.components.forEach((m, i) => {
-    vmin += r.z[i]! * (m.b - m.shift(T));
-  });
-  return (0.95 * r.molarMass) / vmin;
+  if (r.components.length === 1) return r.molarMass / pureVolume(r.components[0]!, T, 1e8, 'liquid');
+  return r.molarMass / phaseAt(mixtureAtT(r, T), 1e8, r.z, 'liquid').v;
 }
 
 /**

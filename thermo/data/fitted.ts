@@ -3,122 +3,255 @@
  * (`npm run fit`) — do not edit by hand; change the script or its data and run it again.
  * Each entry says what it was fitted to.
  */
-import type { ShiftParams } from '../eos/translation.js';
+import type { VolumeCorrectionParams } from '../eos/volumeCorrection.js';
 
 export interface FittedParams {
   /** Mathias–Copeman c1, c2, c3 for the Peng–Robinson family. */
   readonly mathiasCopeman: readonly [number, number, number];
-  /** Volume translation c(T); see eos/translation.ts. m³/mol. */
-  readonly shift: ShiftParams;
+  /** Volume correction; see eos/volumeCorrection.ts. Volumes in m³/mol. */
+  readonly volume: VolumeCorrectionParams;
   /** What the parameters were fitted to. */
   readonly fittedTo: string;
 }
 
 export const FITTED: Readonly<Record<string, FittedParams>> = {
-  'propane': {
-    mathiasCopeman: [0.6232621994, -0.2783343979, 0.8851585843],
-    shift: { cc: 0.00002238258449, d: [0.0002448436183, -0.0005478783579, 0.0004574385023, -0.0003382919001, 0.0001980089407] },
-    fittedTo: 'reference saturation table test/reference/sat/propane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  propane: {
+    mathiasCopeman: [0.6232621913, -0.27833429, 0.8851582594],
+    volume: {
+      cc: -0.00001369462865,
+      d: [
+        0.00007648805626, -0.0001318163196, 0.00009960533054, -0.00004165158181, 0.00001555085681,
+      ],
+      delta: 0.00003607721314,
+      eps: [-0.4824548025, 3.526813586, -5.137708541],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/propane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'n-butane': {
-    mathiasCopeman: [0.6806976001, -0.1223544455, 0.4147586552],
-    shift: { cc: 0.00003131808013, d: [0.0002634853123, -0.0006055194071, 0.0004836388920, -0.0002915331702, 0.0001375991755] },
-    fittedTo: 'reference saturation table test/reference/sat/n-butane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+    mathiasCopeman: [0.680697598, -0.1223544248, 0.4147586083],
+    volume: {
+      cc: -0.0000241264044,
+      d: [0.0001035061172, -0.0001285074653, 0.00006805055733, -0.00003327240198, 0.00002208472153],
+      delta: 0.00005544448453,
+      eps: [-0.2162267119, 0.1898372516, 4.310377119],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/n-butane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'isobutane': {
-    mathiasCopeman: [0.6507991360, -0.09963135237, 0.4663671914],
-    shift: { cc: 0.00002947425010, d: [0.0002590046475, -0.0005913301455, 0.0004689793355, -0.0002827788852, 0.0001362442236] },
-    fittedTo: 'reference saturation table test/reference/sat/isobutane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  isobutane: {
+    mathiasCopeman: [0.6507991396, -0.09963139305, 0.4663672952],
+    volume: {
+      cc: -0.00002752624924,
+      d: [-0.00007960702922, 0.0004088182979, -0.0006185552631, 0.0003324279699, -0.00001052695267],
+      delta: 0.00005700049934,
+      eps: [-0.2981152216, 1.039068384, 1.529681091],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/isobutane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'propylene': {
-    mathiasCopeman: [0.6151869556, -0.3028342955, 1.004921015],
-    shift: { cc: 0.00002111310144, d: [0.0002474793988, -0.0005477670285, 0.0004653927267, -0.0003700939828, 0.0002320030001] },
-    fittedTo: 'reference saturation table test/reference/sat/propylene.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  propylene: {
+    mathiasCopeman: [0.6151869414, -0.3028341034, 1.004920425],
+    volume: {
+      cc: -0.00001094402391,
+      d: [0.0001180429276, -0.0002710319404, 0.0003001260207, -0.0001590564451, 0.00002992658148],
+      delta: 0.00003205712535,
+      eps: [-0.5701922363, 4.777766553, -8.405294405],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/propylene.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'ethane': {
-    mathiasCopeman: [0.5648214623, -0.5690635375, 2.023761892],
-    shift: { cc: 0.00001432816197, d: [0.0002528683529, -0.0005494869985, 0.0005168440373, -0.0005936051991, 0.0005441607416] },
-    fittedTo: 'reference saturation table test/reference/sat/ethane.csv (19 points, 213.15–303.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  ethane: {
+    mathiasCopeman: [0.5648214542, -0.5690633706, 2.023761133],
+    volume: {
+      cc: -0.00001001745733,
+      d: [0.0002030175506, -0.0005608668855, 0.0007648774366, -0.0004634376526, 0.00008309188727],
+      delta: 0.0000243456193,
+      eps: [-0.616720005, 5.661899166, -12.74317646],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/ethane.csv (19 points, 213.15–303.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'ammonia': {
-    mathiasCopeman: [0.7650892583, -0.1427058740, 0.2793427982],
-    shift: { cc: 0.00001820534915, d: [0.00006636428765, -0.0001784764839, 0.0001569384100, -0.0001037959176, 0.00005200852441] },
-    fittedTo: 'reference saturation table test/reference/sat/ammonia.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  ammonia: {
+    mathiasCopeman: [0.7650892553, -0.1427058417, 0.2793427174],
+    volume: {
+      cc: 0.000005547062298,
+      d: [
+        -0.000005205955803, 0.00001590372666, -0.00005313737955, 0.00004597476321,
+        -0.000004468934574,
+      ],
+      delta: 0.00001265828685,
+      eps: [0.4533321296, -3.931677407, 20.22226044],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/ammonia.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'carbon-dioxide': {
-    mathiasCopeman: [0.7221735494, -0.5249265012, 2.648953647],
-    shift: { cc: 0.00001124719536, d: [0.0001835096597, -0.0004068212608, 0.0004129133812, -0.0005517774687, 0.0005741353101] },
-    fittedTo: 'reference saturation table test/reference/sat/carbon-dioxide.csv (18 points, 217.592–302.592 K) and liquid-full points of test/reference/liquid-full.csv',
+    mathiasCopeman: [0.7221735146, -0.5249257994, 2.648950428],
+    volume: {
+      cc: -0.000004689706744,
+      d: [0.0002524302838, -0.0007641639978, 0.001143165367, -0.0007384698934, 0.0001516677248],
+      delta: 0.0000159369021,
+      eps: [-0.5698098233, 5.868198616, -13.74568184],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/carbon-dioxide.csv (18 points, 217.592–302.592 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'dimethyl-ether': {
-    mathiasCopeman: [0.6822876974, -0.2283135880, 0.7595576799],
-    shift: { cc: 0.00002339738236, d: [0.0001634223707, -0.0003910755834, 0.0003235648262, -0.0002041126579, 0.0001010236287] },
-    fittedTo: 'reference saturation table test/reference/sat/dimethyl-ether.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+    mathiasCopeman: [0.6822876982, -0.2283135999, 0.759557715],
+    volume: {
+      cc: -0.000008524146052,
+      d: [-0.0000223591123, 0.0001309930116, -0.0002302451809, 0.0001393787633, -0.000004594543443],
+      delta: 0.00003192152842,
+      eps: [-0.07402585776, -0.3556946332, 7.593265947],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/dimethyl-ether.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'r134a': {
-    mathiasCopeman: [0.8678721394, -0.2675074174, 0.8939641683],
-    shift: { cc: 0.00003629663314, d: [0.0003389797427, -0.0007785411075, 0.0007201131107, -0.0006600966385, 0.0004501749680] },
-    fittedTo: 'reference saturation table test/reference/sat/r134a.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  r134a: {
+    mathiasCopeman: [0.8678721435, -0.2675074664, 0.8939643031],
+    volume: {
+      cc: -0.000006547152525,
+      d: [0.0003614191522, -0.0009960557463, 0.001316177237, -0.000764409521, 0.0001157898894],
+      delta: 0.00004284378567,
+      eps: [-0.3023691119, 2.584593911, 0.8474092915],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/r134a.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'r32': {
-    mathiasCopeman: [0.8273281882, -0.4961659022, 1.190130957],
-    shift: { cc: 0.00003257073264, d: [0.0002461292155, -0.0005755957151, 0.0005608666201, -0.0005947215900, 0.0004640657462] },
-    fittedTo: 'reference saturation table test/reference/sat/r32.csv (28 points, 213.15–348.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  r32: {
+    mathiasCopeman: [0.8273281824, -0.4961658207, 1.190130693],
+    volume: {
+      cc: 0.00000566574034,
+      d: [0.0002392634956, -0.000716233825, 0.001013673554, -0.0006183009836, 0.0001041652666],
+      delta: 0.0000269049923,
+      eps: [-0.1971920071, 3.632581915, 0.5676059899],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/r32.csv (28 points, 213.15–348.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'r125': {
-    mathiasCopeman: [0.8402570331, -0.3718087140, 1.416767124],
-    shift: { cc: 0.00003037417010, d: [0.0004237711820, -0.0009455529306, 0.0009226512333, -0.001033512272, 0.0008571016260] },
-    fittedTo: 'reference saturation table test/reference/sat/r125.csv (26 points, 213.15–338.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  r125: {
+    mathiasCopeman: [0.8402570215, -0.3718085361, 1.416766507],
+    volume: {
+      cc: -0.00001122193879,
+      d: [0.0003490396332, -0.0009839947788, 0.001373296878, -0.0008434708516, 0.0001514692448],
+      delta: 0.00004159610889,
+      eps: [-0.6353918202, 6.470142251, -13.13609123],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/r125.csv (26 points, 213.15–338.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'r143a': {
-    mathiasCopeman: [0.7981607226, -0.4805147682, 1.372287343],
-    shift: { cc: 0.00004004460229, d: [0.0003738002468, -0.0008580972096, 0.0008279882899, -0.0008802802626, 0.0006977155589] },
-    fittedTo: 'reference saturation table test/reference/sat/r143a.csv (27 points, 213.15–343.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  r143a: {
+    mathiasCopeman: [0.798160696, -0.4805143931, 1.372286123],
+    volume: {
+      cc: -0.000002417101787,
+      d: [0.0003035357133, -0.0008750646453, 0.001238706035, -0.0007672601267, 0.0001382740036],
+      delta: 0.00004246170408,
+      eps: [-0.38592795, 4.48517392, -4.465564165],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/r143a.csv (27 points, 213.15–343.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'r1234yf': {
-    mathiasCopeman: [0.8063452877, -0.3512871948, 1.074601684],
-    shift: { cc: 0.00003856351461, d: [0.0004157340498, -0.0009418307616, 0.0008771294675, -0.0008393662589, 0.0005965760213] },
-    fittedTo: 'reference saturation table test/reference/sat/r1234yf.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  r1234yf: {
+    mathiasCopeman: [0.8063452784, -0.3512870752, 1.074601332],
+    volume: {
+      cc: -0.00001082894347,
+      d: [0.0004397060048, -0.001235818351, 0.00168753971, -0.001005622714, 0.0001583923975],
+      delta: 0.00004939245807,
+      eps: [-0.434931464, 3.892036521, -4.908515001],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/r1234yf.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'r1234ze-e': {
-    mathiasCopeman: [0.8474439246, -0.2497412310, 0.8448240701],
-    shift: { cc: 0.00003583292302, d: [0.0005960853317, -0.001269269414, 0.001146269548, -0.001081898859, 0.0007368611023] },
-    fittedTo: 'reference saturation table test/reference/sat/r1234ze-e.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+    mathiasCopeman: [0.8474439172, -0.2497411446, 0.8448238369],
+    volume: {
+      cc: -0.00001909051785,
+      d: [0.0007010864906, -0.001883055064, 0.002423649984, -0.001373889033, 0.0001828520584],
+      delta: 0.00005492344087,
+      eps: [-0.3505636664, 2.423111616, -1.005227285],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/r1234ze-e.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'r22': {
-    mathiasCopeman: [0.7132104843, -0.2131460761, 0.7888365987],
-    shift: { cc: 0.00002408776335, d: [0.0002715841094, -0.0006069186424, 0.0005459746490, -0.0004909456070, 0.0003340543137] },
-    fittedTo: 'reference saturation table test/reference/sat/r22.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  r22: {
+    mathiasCopeman: [0.7132104833, -0.2131460625, 0.7888365548],
+    volume: {
+      cc: -0.000007261002265,
+      d: [0.000285834888, -0.000794533196, 0.001056809684, -0.0006152596253, 0.00009318834483],
+      delta: 0.00003134876561,
+      eps: [-0.4339355265, 3.627342665, -3.740763649],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/r22.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'nitrous-oxide': {
-    mathiasCopeman: [0.6469280827, -0.5718518110, 2.347272686],
-    shift: { cc: 0.00001182076830, d: [0.0001984854556, -0.0004340308393, 0.0004204987120, -0.0004923777598, 0.0004448109461] },
-    fittedTo: 'reference saturation table test/reference/sat/nitrous-oxide.csv (20 points, 213.15–308.15 K) and liquid-full points of test/reference/liquid-full.csv',
+    mathiasCopeman: [0.6469280766, -0.5718517026, 2.34727224],
+    volume: {
+      cc: -0.000005367070304,
+      d: [0.0002630598655, -0.0007787770235, 0.001119817751, -0.0006943317798, 0.0001241473568],
+      delta: 0.0000171878386,
+      eps: [-0.6262190537, 6.303751314, -13.78059902],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/nitrous-oxide.csv (20 points, 213.15–308.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'sulfur-dioxide': {
-    mathiasCopeman: [0.7430966600, -0.0005809319830, 0.2583247610],
-    shift: { cc: 0.00001753575211, d: [0.00002931437007, -0.0001230952383, 0.0001136155716, -0.00005165879335, 0.00002178636558] },
-    fittedTo: 'reference saturation table test/reference/sat/sulfur-dioxide.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
-  },
-  'chlorine': {
-    mathiasCopeman: [0.4453983973, 0.2256093345, 0.000000000],
-    shift: { cc: 0.00001534454078, d: [0.0001587253662, -0.0003432102286, 0.0002617112422, -0.0001575208721, 0.00007255558482] },
-    fittedTo: 'p_sat: normal boiling point, acentric-factor point and critical point (Thol et al. 2021 EOS constants); rho_L: Rackett equation with Z_RA (Hankinson & Thomson 1979)',
+    mathiasCopeman: [0.7430966586, -0.0005809184748, 0.2583247303],
+    volume: {
+      cc: 2.446906755e-7,
+      d: [
+        -0.00002932822981, 0.00008620891925, -0.0001329942204, 0.0000812374077, 0.000001039276475,
+      ],
+      delta: 0.00001729106144,
+      eps: [-1.056011981, 7.288435097, -6.307960273],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/sulfur-dioxide.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   '1-butene': {
-    mathiasCopeman: [0.6724042177, -0.1821157077, 0.6218910855],
-    shift: { cc: 0.00003172337459, d: [0.0002529144623, -0.0005911918662, 0.0004853264276, -0.0003080068990, 0.0001527692340] },
-    fittedTo: 'reference saturation table test/reference/sat/1-butene.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+    mathiasCopeman: [0.6724042217, -0.1821157477, 0.6218911793],
+    volume: {
+      cc: -0.0000167940416,
+      d: [0.0001163103644, -0.0002284210017, 0.0002321009233, -0.0001241710078, 0.00003044928114],
+      delta: 0.00004851741619,
+      eps: [-0.0778420697, -0.9823526965, 8.006656612],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/1-butene.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
-  'isobutene': {
-    mathiasCopeman: [0.6657384245, -0.1139080128, 0.4874030227],
-    shift: { cc: 0.00002668519500, d: [0.0002791659042, -0.0006103069844, 0.0004755306816, -0.0002940564763, 0.0001450703836] },
-    fittedTo: 'reference saturation table test/reference/sat/isobutene.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  isobutene: {
+    mathiasCopeman: [0.6657384253, -0.1139080207, 0.4874030405],
+    volume: {
+      cc: -0.00002131483737,
+      d: [0.0001435794552, -0.0002452223138, 0.0002086422336, -0.0001068740305, 0.00003038120392],
+      delta: 0.00004800003237,
+      eps: [0.02220906282, -1.669997003, 9.544589888],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/isobutene.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'n-pentane': {
-    mathiasCopeman: [0.7397451095, -0.02210130815, 0.2329792371],
-    shift: { cc: 0.00004550638351, d: [0.0002796317653, -0.0006782886468, 0.0005408958846, -0.0002943139277, 0.0001251323577] },
-    fittedTo: 'reference saturation table test/reference/sat/n-pentane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+    mathiasCopeman: [0.7397451097, -0.02210130981, 0.2329792405],
+    volume: {
+      cc: -0.00001891679625,
+      d: [0.0002611790538, -0.0005775173488, 0.0005954769429, -0.0002901919507, 0.00004274779084],
+      delta: 0.00006442317976,
+      eps: [0.1108987224, -2.520705974, 9.566919889],
+    },
+    fittedTo:
+      'reference saturation table test/reference/sat/n-pentane.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
+  },
+  chlorine: {
+    mathiasCopeman: [0.4453983973, 0.2256093345, 0.0],
+    volume: {
+      cc: -0.000008358182396,
+      d: [-0.00003910438866, 0.0001714949405, -0.0002654048675, 0.0001504378864, -0.00000856015593],
+      delta: 0.00002370272318,
+      eps: [-0.3370744697, 2.615516253, -1.25939078],
+    },
+    fittedTo:
+      'p_sat: normal boiling point, acentric-factor point and critical point (Thol et al. 2021 EOS constants); rho_L: Rackett equation with Z_RA (Hankinson & Thomson 1979)',
   },
 };
 

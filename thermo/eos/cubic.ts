@@ -83,37 +83,58 @@ export function compressibilityRoots(fam: CubicFamily, A: number, B: number): nu
   return cubicRealRoots(c2, c1, c0).filter((z) => z > B);
 }
 
-/** Real roots of x³ + c2·x² + c1·x + c0, ascending, Newton-polished. */
+/**
+ * Real roots of x³ + c2·x² + c1·x + c0, ascending.
+ * The root of largest magnitude comes from the closed form (trigonometric or Cardano), which
+ * gives it to full relative precision; the other two come from the deflated quadratic solved
+ * in its cancellation-free form. This keeps a liquid root of order 1e-9 (a liquid far below
+ * its boiling point) accurate where the plain closed form would lose every digit. Each root
+ * is then polished by Newton steps on the original cubic.
+ */
 export function cubicRealRoots(c2: number, c1: number, c0: number): number[] {
   const shift = c2 / 3;
   const p = c1 - c2 * shift;
   const q = 2 * shift * shift * shift - c1 * shift + c0;
   const disc = (q * q) / 4 + (p * p * p) / 27;
-  let roots: number[];
+  let big: number;
   if (disc > 0) {
     const s = Math.sqrt(disc);
-    const r = Math.cbrt(-q / 2 + s) + Math.cbrt(-q / 2 - s);
-    roots = [r - shift];
+    const u = -q / 2 + (q > 0 ? -s : s); // same sign as −q/2, no cancellation
+    const cu = Math.cbrt(u);
+    big = cu === 0 ? -shift : cu - p / (3 * cu) - shift;
   } else if (p === 0) {
-    roots = [-shift];
+    big = -shift;
   } else {
     const m = 2 * Math.sqrt(-p / 3);
-    const arg = Math.min(1, Math.max(-1, ((3 * q) / (p * m)) * 1));
+    const arg = Math.min(1, Math.max(-1, (3 * q) / (p * m)));
     const theta = Math.acos(arg) / 3;
-    roots = [0, 1, 2].map((k) => m * Math.cos(theta - (2 * Math.PI * k) / 3) - shift);
-    roots.sort((x, y) => x - y);
+    const cands = [0, 1, 2].map((k) => m * Math.cos(theta - (2 * Math.PI * k) / 3) - shift);
+    big = cands.reduce((a, b) => (Math.abs(b) > Math.abs(a) ? b : a));
   }
-  return roots.map((x) => {
-    for (let i = 0; i < 2; i++) {
-      const f = ((x + c2) * x + c1) * x + c0;
-      const df = (3 * x + 2 * c2) * x + c1;
-      if (df === 0) break;
-      const step = f / df;
-      if (!Number.isFinite(step)) break;
-      x -= step;
-    }
-    return x;
-  });
+  big = polish(big, c2, c1, c0);
+  // Deflate: x³ + c2x² + c1x + c0 = (x − big)(x² + e1·x + e0).
+  const e1 = c2 + big;
+  const e0 = big !== 0 ? -c0 / big : c1 + big * e1;
+  const dq = e1 * e1 - 4 * e0;
+  const roots = [big];
+  if (dq >= 0) {
+    const qq = -0.5 * (e1 + (e1 >= 0 ? 1 : -1) * Math.sqrt(dq));
+    if (qq !== 0) roots.push(polish(qq, c2, c1, c0), polish(e0 / qq, c2, c1, c0));
+    else roots.push(0);
+  }
+  return roots.sort((x, y) => x - y);
+}
+
+function polish(x: number, c2: number, c1: number, c0: number): number {
+  for (let i = 0; i < 3; i++) {
+    const f = ((x + c2) * x + c1) * x + c0;
+    const df = (3 * x + 2 * c2) * x + c1;
+    if (df === 0 || f === 0) break;
+    const step = f / df;
+    if (!Number.isFinite(step) || Math.abs(step) > 0.5 * Math.abs(x) + 1e-300) break;
+    x -= step;
+  }
+  return x;
 }
 
 /**

@@ -1,6 +1,6 @@
 /**
  * A model of one component: the cubic family, a_c and b from the critical point, an alpha
- * function and a volume shift. Built from fluid constants and a model id; the solvers see only
+ * function and a volume correction. Built from fluid constants and a model id; the solvers see only
  * this record and never ask which fluid it came from.
  */
 import { R_J_molK } from '../constants.js';
@@ -8,11 +8,12 @@ import { fittedParams, type FittedParams } from '../data/fitted.js';
 import type { FluidConstants } from '../data/fluids.js';
 import { mathiasCopemanAlpha, mPengRobinson1976, mSoave1972, soaveAlpha, type AlphaFunction } from './alpha.js';
 import { PENG_ROBINSON, SOAVE_REDLICH_KWONG, type CubicFamily } from './cubic.js';
-import { NO_SHIFT, temperatureShift, type ShiftFunction } from './translation.js';
+import { NO_CORRECTION, type VolumeCorrectionParams } from './volumeCorrection.js';
 
 /**
  * - `tuned` (the default): Peng–Robinson with a Mathias–Copeman alpha and a
- *   temperature-dependent volume translation, both fitted per fluid to reference data.
+ *   temperature-dependent volume translation with distance-function and vapour-side terms,
+ *   all fitted per fluid to reference data (see eos/volumeCorrection.ts).
  * - `PR`: Peng & Robinson (1976), untranslated.
  * - `SRK`: Soave (1972), untranslated.
  */
@@ -35,8 +36,10 @@ export interface ComponentModel {
   /** Co-volume, m³/mol. */
   readonly b: number;
   readonly alpha: AlphaFunction;
-  /** Volume translation c(T), m³/mol: v = v_cubic − c. */
-  readonly shift: ShiftFunction;
+  /** From the cubic's volume to the model's (see eos/volumeCorrection.ts). */
+  readonly correction: VolumeCorrectionParams;
+  /** Critical molar volume of the cubic, m³/mol. */
+  readonly vcCub: number;
   /** Critical density of the model, kg/m³. */
   readonly rhoc: number;
 }
@@ -56,7 +59,7 @@ export interface ComponentSpec {
 export function componentModel(
   spec: ComponentSpec | FluidConstants,
   model: ModelId,
-  override?: Pick<FittedParams, 'mathiasCopeman' | 'shift'>,
+  override?: Pick<FittedParams, 'mathiasCopeman' | 'volume'>,
 ): ComponentModel {
   const fitted = model === 'tuned' ? (override ?? fittedParams(spec.id)) : undefined;
   const applied: ModelId = model === 'tuned' && !fitted ? 'PR' : model;
@@ -65,18 +68,18 @@ export function componentModel(
   const ac = (family.omegaA * R * R * spec.Tc * spec.Tc) / spec.pc;
   const b = (family.omegaB * R * spec.Tc) / spec.pc;
   let alpha: AlphaFunction;
-  let shift: ShiftFunction = NO_SHIFT;
+  let correction: VolumeCorrectionParams = NO_CORRECTION;
   if (applied === 'tuned' && fitted) {
     const [c1, c2, c3] = fitted.mathiasCopeman;
     alpha = mathiasCopemanAlpha(spec.Tc, c1, c2, c3);
-    shift = temperatureShift(spec.Tc, fitted.shift);
+    correction = fitted.volume;
   } else if (applied === 'SRK') {
     alpha = soaveAlpha(spec.Tc, mSoave1972(spec.omega));
   } else {
     alpha = soaveAlpha(spec.Tc, mPengRobinson1976(spec.omega));
   }
   const vcCubic = (family.Zc * R * spec.Tc) / spec.pc;
-  const rhoc = spec.molarMass / (vcCubic - shift(spec.Tc));
+  const rhoc = spec.molarMass / (vcCubic - correction.cc - correction.delta);
   return {
     id: spec.id,
     family,
@@ -88,7 +91,8 @@ export function componentModel(
     ac,
     b,
     alpha,
-    shift,
+    correction,
+    vcCub: vcCubic,
     rhoc,
   };
 }

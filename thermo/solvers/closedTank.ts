@@ -16,8 +16,10 @@
  */
 import { ConvergenceError } from '../errors.js';
 import type { ResolvedProduct } from '../product.js';
-import { flashPT, mixtureAtT, mixturePressure, saturationPressure, type MixtureAtT } from './mixture.js';
-import { pureSaturation, purePressure } from './pure.js';
+import { R_J_molK } from '../constants.js';
+import { pressureForVolume } from './inverse.js';
+import { flashPT, mixtureAtT, phaseAt, saturationPressure, type MixtureAtT } from './mixture.js';
+import { pureSaturation, volumeAlong } from './pure.js';
 
 export type Phase = 'two-phase' | 'liquid' | 'vapour' | 'supercritical';
 
@@ -67,10 +69,12 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
       const rhoL = m.molarMass / sat.vL;
       const rhoV = m.molarMass / sat.vV;
       if (rho >= rhoL) {
-        return { phase: 'liquid', p: Math.max(purePressure(m, T, v), sat.p), liquidFraction: 1, rhoL: rho, rhoV: null, vapourMassFraction: 0, x: one, y: one, iterations: 0 };
+        const p = pressureForVolume(volumeAlong(m, T, 'liquid'), v, sat.p * 1.05, sat.p).p;
+        return { phase: 'liquid', p: Math.max(p, sat.p), liquidFraction: 1, rhoL: rho, rhoV: null, vapourMassFraction: 0, x: one, y: one, iterations: 0 };
       }
       if (rho <= rhoV) {
-        return { phase: 'vapour', p: Math.min(purePressure(m, T, v), sat.p), liquidFraction: 0, rhoL: null, rhoV: rho, vapourMassFraction: 1, x: one, y: one, iterations: 0 };
+        const p = pressureForVolume(volumeAlong(m, T, 'vapour'), v, (R_J_molK * T) / v, undefined, sat.p).p;
+        return { phase: 'vapour', p: Math.min(p, sat.p), liquidFraction: 0, rhoL: null, rhoV: rho, vapourMassFraction: 1, x: one, y: one, iterations: 0 };
       }
       const lf = (rho - rhoV) / (rhoL - rhoV);
       return {
@@ -89,7 +93,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
   const dense = rho >= m.rhoc;
   return {
     phase: 'supercritical',
-    p: purePressure(m, T, v),
+    p: pressureForVolume(volumeAlong(m, T, 'stable'), v, (R_J_molK * T) / v).p,
     liquidFraction: dense ? 1 : 0,
     rhoL: dense ? rho : null,
     rhoV: dense ? null : rho,
@@ -100,8 +104,18 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
   };
 }
 
-function singlePhase(mx: MixtureAtT, z: readonly number[], rho: number, v: number, phase: 'liquid' | 'vapour' | 'supercritical', dense: boolean): ClosedTankState {
-  const p = mixturePressure(mx, z, v);
+function singlePhase(
+  mx: MixtureAtT,
+  z: readonly number[],
+  rho: number,
+  v: number,
+  phase: 'liquid' | 'vapour' | 'supercritical',
+  dense: boolean,
+  bounds: { pLo?: number; pHi?: number } = {},
+): ClosedTankState {
+  const choice = phase === 'liquid' ? 'liquid' : phase === 'vapour' ? 'vapour' : 'stable';
+  const guess = bounds.pLo ? bounds.pLo * 1.05 : (R_J_molK * mx.T) / v;
+  const p = pressureForVolume((pp) => phaseAt(mx, pp, z, choice).v, v, guess, bounds.pLo, bounds.pHi).p;
   const liquid = phase === 'liquid' || (phase === 'supercritical' && dense);
   return {
     phase,
@@ -130,7 +144,7 @@ function closedTankBlend(product: ResolvedProduct, T: number, rho: number): Clos
   // Pseudo-critical density by Kay's rule on the models' critical densities.
   const rhoPc = M / product.components.reduce((s, m, i) => s + z[i]! * (m.molarMass / m.rhoc), 0);
   if (!bubble) return singlePhase(mx, z, rho, v, 'supercritical', rho >= rhoPc);
-  if (v <= bubble.vBulk) return singlePhase(mx, z, rho, v, 'liquid', true);
+  if (v <= bubble.vBulk) return singlePhase(mx, z, rho, v, 'liquid', true, { pLo: bubble.p });
   let dew;
   try {
     dew = saturationPressure(mx, z, 'dew');
@@ -138,7 +152,7 @@ function closedTankBlend(product: ResolvedProduct, T: number, rho: number): Clos
     if (!(e instanceof ConvergenceError)) throw e;
   }
   if (!dew) return singlePhase(mx, z, rho, v, 'supercritical', rho >= rhoPc);
-  if (v >= dew.vBulk) return singlePhase(mx, z, rho, v, 'vapour', false);
+  if (v >= dew.vBulk) return singlePhase(mx, z, rho, v, 'vapour', false, { pHi: dew.p });
 
   // Two-phase: find ln p in (ln p_dew, ln p_bubble) with v_flash(p) = v. v_flash falls with p.
   let lo = Math.log(dew.p);

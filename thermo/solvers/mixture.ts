@@ -8,7 +8,8 @@
  */
 import { R_J_molK } from '../constants.js';
 import { ConvergenceError } from '../errors.js';
-import { compressibilityRoots, logTerm, pressure } from '../eos/cubic.js';
+import { compressibilityRoots, dPdv, logTerm } from '../eos/cubic.js';
+import { correctedVolume, correctionAtT } from '../eos/volumeCorrection.js';
 import type { ResolvedProduct } from '../product.js';
 import type { RootChoice } from './pure.js';
 import { pureSaturation } from './pure.js';
@@ -23,7 +24,11 @@ export interface MixtureAtT {
   /** a_ij = √(a_i a_j)(1 − k_ij), row-major n×n. */
   readonly aij: Float64Array;
   readonly b: Float64Array;
+  /** Volume-correction terms per component at T: c_i(T), δ_i, ε_i(T), v_c,cub,i. */
   readonly c: Float64Array;
+  readonly delta: Float64Array;
+  readonly eps: Float64Array;
+  readonly vcCub: Float64Array;
   readonly M: Float64Array;
   readonly product: ResolvedProduct;
 }
@@ -33,25 +38,34 @@ export function mixtureAtT(product: ResolvedProduct, T: number): MixtureAtT {
   const a = new Float64Array(n);
   const b = new Float64Array(n);
   const c = new Float64Array(n);
+  const delta = new Float64Array(n);
+  const eps = new Float64Array(n);
+  const vcCub = new Float64Array(n);
   const M = new Float64Array(n);
   product.components.forEach((m, i) => {
     a[i] = m.ac * m.alpha(T).alpha;
     b[i] = m.b;
-    c[i] = m.shift(T);
+    const k = correctionAtT(m.correction, m.Tc, m.vcCub, T);
+    c[i] = k.c;
+    delta[i] = k.delta;
+    eps[i] = k.eps;
+    vcCub[i] = m.vcCub;
     M[i] = m.molarMass;
   });
   const aij = new Float64Array(n * n);
   for (let i = 0; i < n; i++)
     for (let j = 0; j < n; j++) aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - (product.kij[i]?.[j] ?? 0));
-  return { T, n, aij, b, c, M, product };
+  return { T, n, aij, b, c, delta, eps, vcCub, M, product };
 }
 
 export interface PhaseState {
   Z: number;
   /** ln φ_i without the translation term. */
   lnPhi: Float64Array;
-  /** Translated molar volume, m³/mol. */
+  /** The model's molar volume, m³/mol. */
   v: number;
+  /** The cubic's molar volume, m³/mol. */
+  vCub: number;
   /** Number of real roots the cubic had (1 or 3). */
   nRoots: number;
 }
@@ -60,11 +74,10 @@ const family = (mx: MixtureAtT) => mx.product.components[0]!.family;
 
 /** Phase properties at (T, p) for composition x on the chosen root. */
 export function phaseAt(mx: MixtureAtT, p: number, x: ArrayLike<number>, choice: RootChoice): PhaseState {
-  const { n, aij, b, c, T } = mx;
+  const { n, aij, b, T } = mx;
   const fam = family(mx);
   let am = 0;
   let bm = 0;
-  let cm = 0;
   const s = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     let si = 0;
@@ -72,7 +85,6 @@ export function phaseAt(mx: MixtureAtT, p: number, x: ArrayLike<number>, choice:
     s[i] = si;
     am += x[i]! * si;
     bm += x[i]! * b[i]!;
-    cm += x[i]! * c[i]!;
   }
   const A = (am * p) / (R * R * T * T);
   const B = (bm * p) / (R * T);
@@ -109,21 +121,25 @@ export function phaseAt(mx: MixtureAtT, p: number, x: ArrayLike<number>, choice:
     }
     [Z, lnPhi] = gL <= gV ? [zL, fL] : [zV, fV];
   }
-  return { Z, lnPhi, v: (Z * R * T) / p - cm, nRoots: roots.length };
+  const vCub = (Z * R * T) / p;
+  return { Z, lnPhi, v: mixtureModelVolume(mx, x, vCub, am, bm), vCub, nRoots: roots.length };
 }
 
-/** Mixture pressure at T and translated molar volume v, Pa. */
-export function mixturePressure(mx: MixtureAtT, x: ArrayLike<number>, v: number): number {
-  const { n, aij, b, c, T } = mx;
-  let am = 0;
-  let bm = 0;
-  let cm = 0;
-  for (let i = 0; i < n; i++) {
-    for (let j = 0; j < n; j++) am += x[i]! * x[j]! * aij[i * n + j]!;
-    bm += x[i]! * b[i]!;
-    cm += x[i]! * c[i]!;
+/** The model's molar volume from the cubic's vCub for composition x (a_mix, b_mix given). */
+export function mixtureModelVolume(mx: MixtureAtT, x: ArrayLike<number>, vCub: number, am: number, bm: number): number {
+  let c = 0;
+  let delta = 0;
+  let eps = 0;
+  let vc = 0;
+  for (let i = 0; i < mx.n; i++) {
+    c += x[i]! * mx.c[i]!;
+    delta += x[i]! * mx.delta[i]!;
+    eps += x[i]! * mx.eps[i]!;
+    vc += x[i]! * mx.vcCub[i]!;
   }
-  return pressure(family(mx), R, T, v + cm, am, bm);
+  const T = mx.T;
+  const d = -((vCub * vCub) / (R * T)) * dPdv(family(mx), R, T, vCub, am, bm);
+  return correctedVolume({ c, delta, eps, vcCub: vc }, vCub, d);
 }
 
 /** Wilson's K-value estimate: K_i = (pc_i/p)·exp(5.373(1 + ω_i)(1 − Tc_i/T)). */

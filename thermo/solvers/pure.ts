@@ -4,7 +4,8 @@
  */
 import { R_J_molK } from '../constants.js';
 import { ConvergenceError } from '../errors.js';
-import { compressibilityRoots, lnPhiPure, logTerm, pressure } from '../eos/cubic.js';
+import { compressibilityRoots, dPdv, lnPhiPure, logTerm, pressure } from '../eos/cubic.js';
+import { correctedVolume, correctionAtT, type CorrectionAtT } from '../eos/volumeCorrection.js';
 import type { ComponentModel } from '../eos/model.js';
 import type { SolverReport } from './result.js';
 
@@ -16,13 +17,19 @@ export interface PureCoefficients {
   /** da/dT, Pa·m⁶/(mol²·K) */
   da_dT: number;
   b: number;
-  /** c(T), m³/mol */
-  c: number;
+  /** Volume-correction parameters at T. */
+  corr: CorrectionAtT;
 }
 
 export function pureCoefficients(m: ComponentModel, T: number): PureCoefficients {
   const { alpha, dAlpha_dT } = m.alpha(T);
-  return { a: m.ac * alpha, da_dT: m.ac * dAlpha_dT, b: m.b, c: m.shift(T) };
+  return { a: m.ac * alpha, da_dT: m.ac * dAlpha_dT, b: m.b, corr: correctionAtT(m.correction, m.Tc, m.vcCub, T) };
+}
+
+/** The model's molar volume (m³/mol) from the cubic's molar volume vCub at T. */
+export function modelVolume(m: ComponentModel, k: PureCoefficients, T: number, vCub: number): number {
+  const d = -((vCub * vCub) / (R * T)) * dPdv(m.family, R, T, vCub, k.a, k.b);
+  return correctedVolume(k.corr, vCub, d);
 }
 
 export type RootChoice = 'liquid' | 'vapour' | 'stable';
@@ -51,9 +58,12 @@ export function pureZ(m: ComponentModel, k: PureCoefficients, T: number, p: numb
 export interface PureSaturation extends SolverReport {
   /** Saturation pressure, Pa. */
   p: number;
-  /** Translated molar volumes, m³/mol. */
+  /** The model's molar volumes, m³/mol. */
   vL: number;
   vV: number;
+  /** The cubic's own molar volumes, m³/mol (before the volume correction). */
+  vLCub: number;
+  vVCub: number;
   ZL: number;
   ZV: number;
   /** Molar enthalpy of vaporization, J/mol (from the residual enthalpies of both phases). */
@@ -94,8 +104,10 @@ export function pureSaturation(m: ComponentModel, T: number, pGuess?: number): P
         const dHvap = residualEnthalpy(m, k, T, ZV, B) - residualEnthalpy(m, k, T, ZL, B);
         return {
           p,
-          vL: vL - k.c,
-          vV: vV - k.c,
+          vL: modelVolume(m, k, T, vL),
+          vV: modelVolume(m, k, T, vV),
+          vLCub: vL,
+          vVCub: vV,
           ZL,
           ZV,
           dHvap,
@@ -132,8 +144,21 @@ export function residualEnthalpy(m: ComponentModel, k: PureCoefficients, T: numb
   return R * T * (Z - 1) + ((T * k.da_dT - k.a) / k.b) * logTerm(m.family, Z, B);
 }
 
-/** Pressure, Pa, of the model at T and translated molar volume v (m³/mol). */
-export function purePressure(m: ComponentModel, T: number, v: number): number {
+/** The model's molar volume at (T, p) on the chosen branch, m³/mol. */
+export function pureVolume(m: ComponentModel, T: number, p: number, choice: RootChoice): number {
+  return volumeAlong(m, T, choice)(p);
+}
+
+/** p ↦ the model's molar volume (m³/mol) along one branch of the isotherm T. */
+export function volumeAlong(m: ComponentModel, T: number, choice: RootChoice): (p: number) => number {
   const k = pureCoefficients(m, T);
-  return pressure(m.family, R, T, v + k.c, k.a, k.b);
+  return (p) => {
+    const z = pureZ(m, k, T, p, choice);
+    return modelVolume(m, k, T, (z.Z * R * T) / p);
+  };
+}
+
+/** Pressure of the cubic at T and the cubic's molar volume vCub, Pa. */
+export function cubicPressure(m: ComponentModel, k: PureCoefficients, T: number, vCub: number): number {
+  return pressure(m.family, R, T, vCub, k.a, k.b);
 }
