@@ -54,6 +54,9 @@ function referencePoints(f: FluidConstants): { points: Point[]; note: string } {
   }
   const rows = readCsv(`${REF}sat/${f.id}.csv`);
   const points: Point[] = rows.map((r) => ({ T: +r.T_K!, p: +r.p_Pa!, rhoL: +r.rhoL_kg_m3! }));
+  // Below the table (ethane, nitrous oxide) the normal boiling point of the same reference
+  // equation anchors the vapour-pressure curve, so the alpha function does not wander there.
+  if (f.Tb !== null && f.Tb < +rows[0]!.T_K! - 1) points.push({ T: f.Tb, p: 101_325 });
   for (const r of readCsv(`${REF}liquid-full.csv`)) {
     if (r.fluid === f.id && r.transition === 'liquid-full') points.push({ T: +r.T_transition_K!, rhoL: +r.rho_overall_kg_m3! });
   }

@@ -83,7 +83,7 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
   checkTemperature(r, T);
   if (r.components.length === 1) {
     const m = r.components[0]!;
-    if (T > m.Tc - 0.5) throw new InputError('T', `from ${fmt(r.Tmin)} K to ${fmt(m.Tc - 0.5)} K (0.5 K below the critical temperature)`, T);
+    if (T > m.Tc - 0.5 + 1e-9) throw new InputError('T', `from ${fmt(r.Tmin)} K to ${fmt(m.Tc - 0.5)} K (0.5 K below the critical temperature)`, T);
     const s = pureSaturation(m, T);
     return { p: s.p, rhoL: m.molarMass / s.vL, rhoV: m.molarMass / s.vV, y: [1], model: r.model };
   }

@@ -20,11 +20,27 @@ const DIR = new URL('./', import.meta.url);
 export function readTable(name: string): Record<string, string>[] {
   const text = readFileSync(new URL(name, DIR), 'utf8');
   const lines = text.split(/\r?\n/).filter((l) => l.trim() !== '' && !l.startsWith('#'));
-  const head = lines[0]!.split(',');
+  const head = splitCsvLine(lines[0]!);
   return lines.slice(1).map((l) => {
-    const cells = l.split(',');
+    const cells = splitCsvLine(l);
     return Object.fromEntries(head.map((h, i) => [h, cells[i] ?? '']));
   });
+}
+
+/** Splits one CSV line, honouring double quotes around cells that contain commas. */
+function splitCsvLine(line: string): string[] {
+  const out: string[] = [];
+  let cur = '';
+  let quoted = false;
+  for (const ch of line) {
+    if (ch === '"') quoted = !quoted;
+    else if (ch === ',' && !quoted) {
+      out.push(cur);
+      cur = '';
+    } else cur += ch;
+  }
+  out.push(cur);
+  return out;
 }
 
 export const REFERENCE_FLUIDS = readTable('fluids.csv').map((r) => r.fluid!);

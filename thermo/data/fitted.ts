@@ -62,12 +62,12 @@ export const FITTED: Readonly<Record<string, FittedParams>> = {
       'reference saturation table test/reference/sat/propylene.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   ethane: {
-    mathiasCopeman: [0.5648214542, -0.5690633706, 2.023761133],
+    mathiasCopeman: [0.555065628, -0.3678676646, 1.100823063],
     volume: {
-      cc: -0.00001001745733,
-      d: [0.0002030175506, -0.0005608668855, 0.0007648774366, -0.0004634376526, 0.00008309188727],
-      delta: 0.0000243456193,
-      eps: [-0.616720005, 5.661899166, -12.74317646],
+      cc: -0.00001010150081,
+      d: [0.0002033532084, -0.0005604618419, 0.0007641238875, -0.0004643187876, 0.0000855190424],
+      delta: 0.00002442966279,
+      eps: [-0.6546595543, 6.129658143, -13.98946556],
     },
     fittedTo:
       'reference saturation table test/reference/sat/ethane.csv (19 points, 213.15–303.15 K) and liquid-full points of test/reference/liquid-full.csv',
@@ -186,12 +186,12 @@ export const FITTED: Readonly<Record<string, FittedParams>> = {
       'reference saturation table test/reference/sat/r22.csv (29 points, 213.15–353.15 K) and liquid-full points of test/reference/liquid-full.csv',
   },
   'nitrous-oxide': {
-    mathiasCopeman: [0.6469280766, -0.5718517026, 2.34727224],
+    mathiasCopeman: [0.6344803809, -0.3239422664, 1.248226182],
     volume: {
-      cc: -0.000005367070304,
-      d: [0.0002630598655, -0.0007787770235, 0.001119817751, -0.0006943317798, 0.0001241473568],
-      delta: 0.0000171878386,
-      eps: [-0.6262190537, 6.303751314, -13.78059902],
+      cc: -0.000005437210188,
+      d: [0.0002636030941, -0.0007792049535, 0.001120212841, -0.0006956185151, 0.0001261096682],
+      delta: 0.00001725797848,
+      eps: [-0.6707413707, 6.822259999, -15.07030053],
     },
     fittedTo:
       'reference saturation table test/reference/sat/nitrous-oxide.csv (20 points, 213.15–308.15 K) and liquid-full points of test/reference/liquid-full.csv',
@@ -245,10 +245,12 @@ export const FITTED: Readonly<Record<string, FittedParams>> = {
   chlorine: {
     mathiasCopeman: [0.4453983973, 0.2256093345, 0.0],
     volume: {
-      cc: -0.000008358182396,
-      d: [-0.00003910438866, 0.0001714949405, -0.0002654048675, 0.0001504378864, -0.00000856015593],
-      delta: 0.00002370272318,
-      eps: [-0.3370744697, 2.615516253, -1.25939078],
+      cc: -0.000008366317758,
+      d: [
+        -0.00003925640754, 0.0001719351295, -0.0002658954182, 0.0001506584226, -0.000008570262928,
+      ],
+      delta: 0.00002371085854,
+      eps: [-0.341197563, 2.664829636, -1.386190311],
     },
     fittedTo:
       'p_sat: normal boiling point, acentric-factor point and critical point (Thol et al. 2021 EOS constants); rho_L: Rackett equation with Z_RA (Hankinson & Thomson 1979)',
