@@ -1,0 +1,288 @@
+/**
+ * The tank check: from nameplate and readings to contents, fill limit, peak-day pressure,
+ * a gauge diagnosis and ranked cautions. Pure and synchronous; SI in and out (see types.ts).
+ *
+ * Heating a closed tank keeps the overall density ρ = m/V constant, so the peak state is the
+ * core's closed-tank state at the peak temperature and the same ρ. The liquid-full temperature
+ * is where the saturated liquid density falls to ρ; the relief temperature is where the
+ * closed-tank pressure, raised by the model allowance, reaches the relief set pressure.
+ */
+import { InputError } from '../errors.js';
+import { T_60F_K } from '../constants.js';
+import { MODEL_ALLOWANCE } from '../rules/allowance.js';
+import { fillingRule, isLpGas, referenceRules } from '../rules/gases.js';
+import { maxLiquidVolumePercent } from '../rules/lpgas.js';
+import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
+import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../tank/geometry.js';
+import { buildCautions } from './cautions.js';
+import { diagnose } from './diagnosis.js';
+import { findCrossing, ProductModel, type State } from './model.js';
+import { STANDING_CAUTION } from './standing.js';
+import type { FillLimitResult, LimitEntry, PeakResult, TankCheckInput, TankCheckResult } from './types.js';
+import { validateInput, type CleanInput } from './validate.js';
+
+/** x rounded down / up to a multiple of step (steps are powers of ten; dividing by 1/step keeps 0.01 steps exact). */
+const floorTo = (x: number, step: number) => (step < 1 ? Math.floor(x * (1 / step) + 1e-9) / (1 / step) : Math.floor(x / step + 1e-9) * step);
+const ceilTo = (x: number, step: number) => (step < 1 ? Math.ceil(x * (1 / step) - 1e-9) / (1 / step) : Math.ceil(x / step - 1e-9) * step);
+/** Pressures are rounded to 100 Pa (0.015 psi): up for pressures, down for headroom. */
+const P_STEP = 100;
+
+/** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
+export function checkTank(input: TankCheckInput): TankCheckResult {
+  const c = validateInput(input);
+  const model = new ProductModel(input.product);
+  const b = model.basics;
+  const Tlo = Math.max(b.Tmin + 0.01, 150);
+  const tRange = `from ${Tlo.toFixed(2)} K (this product's lower limit) to 400 K`;
+  if (c.T < Tlo) throw new InputError('liquidTemperature', tRange, c.T);
+  if (c.Tpeak < Tlo) throw new InputError('peakTemperature', tRange, c.Tpeak);
+
+  const lpGas = isLpGas(input.product);
+  const sgModel = b.rho60 / WATER_SG_KG_M3;
+  const sg = c.specificGravity ?? sgModel;
+
+  // --- Contents now: overall density ρ = m / V. ---
+  const satNow = model.sat(c.T);
+  const shape = input.tank.shape;
+  let rho: number;
+  let shapeVolume: number | null = null;
+  const contents = input.contents;
+  if ('netMass' in contents) {
+    const cap = netMassCap(model, c);
+    if (contents.netMass > cap) {
+      throw new InputError('contents.netMass', `from 0 to ${Math.floor(cap)} kg for this tank (110 % of a liquid-full tank at the entered temperature)`, contents.netMass);
+    }
+    // An empty tank still holds a trace of vapour; 1e-6 kg/m³ keeps the state defined.
+    rho = Math.max(contents.netMass / c.V, 1e-6);
+  } else {
+    if (!satNow) {
+      const field = 'gaugePercent' in contents ? 'contents.gaugePercent' : 'contents.levelHeight';
+      throw new InputError(field, `not usable above the critical temperature (${b.Tc.toFixed(1)} K): there is no liquid level; give contents.netMass`, c.T);
+    }
+    let f: number;
+    if ('gaugePercent' in contents) f = contents.gaugePercent / 100;
+    else {
+      const H = tankHeight(shape!);
+      if (contents.levelHeight > H) throw new InputError('contents.levelHeight', `from 0 to ${H.toFixed(3)} m (the inside height of this tank)`, contents.levelHeight);
+      f = fractionAtLevel(shape!, contents.levelHeight);
+    }
+    rho = f * satNow.rhoL + (1 - f) * satNow.rhoV;
+  }
+  if (shape) shapeVolume = totalVolume(shape);
+
+  const now = model.state(c.T, rho);
+  const totalMass = rho * c.V;
+  const liquidMass = now.rhoL !== null ? now.lf * c.V * now.rhoL : 0;
+  const vapourMass = Math.max(0, totalMass - liquidMass);
+  const waterWeight = c.V * WATER_FD_KG_M3;
+
+  // --- Fill limit. ---
+  const limits: LimitEntry[] = [];
+  const rule = fillingRule({
+    product: input.product,
+    containerClass: c.containerClass,
+    placement: c.placement,
+    insulated: c.insulated,
+    fixedDipTube: c.fixedDipTube,
+    waterCapacity: c.V,
+    specificGravity: sg,
+  });
+  if (rule) {
+    limits.push({
+      id: rule.id,
+      kind: 'rule',
+      description: rule.description,
+      citation: rule.citation,
+      maxMass: floorTo(rule.fillingDensity * waterWeight, 0.01),
+      fillingDensity: rule.fillingDensity,
+      referenceTemperature: null,
+      modelAllowance: 0,
+    });
+  }
+  const refs = referenceRules(input.product, c.containerClass).map((r) => ({ ...r, kind: r.id === 'refrigerant-130F' ? ('rule' as const) : ('physical' as const) }));
+  refs.push({
+    id: 'not-liquid-full-at-peak',
+    kind: 'physical',
+    description: 'The tank must not become liquid-full at the forecast peak liquid temperature',
+    citation: 'physics of a closed tank (a liquid-full tank’s pressure climbs steeply with temperature); the same principle as 49 CFR 173.304(b) — common practice for storage',
+    referenceTemperature: c.Tpeak,
+  });
+  const skippedRefs: number[] = [];
+  for (const r of refs) {
+    const s = model.sat(r.referenceTemperature);
+    if (!s) {
+      skippedRefs.push(r.referenceTemperature);
+      continue;
+    }
+    const mass = floorTo(c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
+    limits.push({
+      id: r.id,
+      kind: r.kind,
+      description: r.description,
+      citation: r.citation,
+      maxMass: mass,
+      fillingDensity: mass / waterWeight,
+      referenceTemperature: r.referenceTemperature,
+      modelAllowance: MODEL_ALLOWANCE.liquidDensity,
+    });
+  }
+  limits.sort((p, q) => p.maxMass - q.maxMass);
+  const fillLimit = buildFillLimit(limits, totalMass, waterWeight, c, satNow, b.rho60, rule?.fillingDensity ?? null, sg);
+
+  // --- Peak. ---
+  const peakState = c.Tpeak === c.T ? now : model.state(c.Tpeak, rho);
+  const peak = buildPeak(peakState, c);
+
+  // --- Liquid-full and relief temperatures. ---
+  const liquidFullTemperature = findLiquidFull(model, rho, c, now, peakState, Tlo);
+  const reliefTemperature = findRelief(model, rho, c, now, peakState, Tlo);
+
+  // --- Diagnosis. ---
+  const diagnosis = c.gaugePressure === null ? null : diagnose(model, c, now, lpGas, Tlo);
+
+  const contentsResult = {
+    liquidVolume: now.lf * c.V,
+    liquidPercent: now.lf * 100,
+    levelHeight: shape && now.phase !== 'supercritical' ? levelAtFraction(shape, now.lf) : null,
+    liquidMass,
+    vapourMass,
+    totalMass,
+    fillingDensity: totalMass / waterWeight,
+    liquidVolumeAt60F: liquidMass / b.rho60,
+    overallDensity: rho,
+  };
+
+  const result: TankCheckResult = {
+    phase: now.phase,
+    pressure: ceilTo(now.pAbs - c.baro, P_STEP),
+    pressureAbsolute: now.pAbs,
+    barometricPressure: c.baro,
+    product: {
+      label: b.label,
+      lpGas,
+      specificGravity: sg,
+      specificGravitySource: c.specificGravity === null ? 'model' : 'entered',
+      liquidDensityAt60F: b.rho60,
+      criticalTemperature: b.Tc,
+    },
+    contents: contentsResult,
+    fillLimit,
+    peak,
+    liquidFullTemperature,
+    reliefTemperature,
+    diagnosis,
+    cautions: [],
+    standingCaution: STANDING_CAUTION,
+  };
+  result.cautions = buildCautions(result, {
+    input,
+    clean: c,
+    now,
+    model,
+    rule: rule !== null,
+    sgModel,
+    skippedRefs,
+    shapeVolume,
+    T60: T_60F_K,
+  });
+  return result;
+}
+
+function netMassCap(model: ProductModel, c: CleanInput): number {
+  const s = model.sat(c.T);
+  if (s) return 1.1 * s.rhoL * c.V;
+  // Above the critical point: up to 110 % of the liquid density at 60 °F.
+  return 1.1 * model.basics.rho60 * c.V;
+}
+
+function buildFillLimit(
+  limits: LimitEntry[],
+  totalMass: number,
+  waterWeight: number,
+  c: CleanInput,
+  satNow: { rhoL: number; rhoV: number } | null,
+  rho60: number,
+  ruleFd: number | null,
+  sg: number,
+): FillLimitResult {
+  const binding = limits[0];
+  // With no limit at all (no rule, no liquid at any reference temperature) the check claims no room.
+  const maxMass = binding ? binding.maxMass : floorTo(totalMass, 0.01);
+  const roomLeftMass = floorTo(maxMass - totalMass, 0.01);
+  const rhoLiquidNow = satNow?.rhoL ?? rho60;
+  let stop = 0;
+  if (satNow) {
+    const target = maxMass / c.V;
+    stop = ((target - satNow.rhoV) / (satNow.rhoL - satNow.rhoV)) * 100;
+    stop = Math.min(100, Math.max(0, floorTo(stop, 0.1)));
+  }
+  let volumetric: number | null = null;
+  if (ruleFd !== null && satNow) {
+    const vcf = satNow.rhoL / rho60;
+    volumetric = maxLiquidVolumePercent(ruleFd * 100, sg, vcf);
+  }
+  return {
+    maxMass,
+    maxFillingDensity: floorTo(maxMass / waterWeight, 1e-5),
+    binding: binding ? binding.id : 'none',
+    limits,
+    roomLeftMass,
+    roomLeftVolume: floorTo(roomLeftMass / rhoLiquidNow, 1e-6),
+    roomLeftVolumeAt60F: floorTo(roomLeftMass / rho60, 1e-6),
+    stopAtGaugePercent: stop,
+    volumetricMaxPercent: volumetric,
+  };
+}
+
+function buildPeak(s: State, c: CleanInput): PeakResult {
+  const raised = s.pAbs * (1 + MODEL_ALLOWANCE.vapourPressure) - c.baro;
+  return {
+    temperature: c.Tpeak,
+    phase: s.phase,
+    p: ceilTo(s.pAbs - c.baro, P_STEP),
+    pAbsolute: s.pAbs,
+    liquidFraction: s.lf,
+    headroomToDesign: floorTo(c.designPressure - raised, P_STEP),
+    headroomToRelief: floorTo(c.reliefSetPressure - raised, P_STEP),
+  };
+}
+
+/** Highest temperature searched for the liquid-full and relief temperatures, K. */
+const T_SEARCH_MAX = 400;
+
+function findLiquidFull(model: ProductModel, rho: number, c: CleanInput, now: State, peak: State, Tlo: number): number | null {
+  const b = model.basics;
+  const Thi = Math.min(T_SEARCH_MAX, b.pure ? b.Tc - 0.5 : T_SEARCH_MAX);
+  // g(T) = ρ − ρL,sat(T): rises with T, crosses zero where the liquid fills the tank.
+  const g = (T: number): number => {
+    const s = model.sat(T);
+    if (s) return rho - s.rhoL;
+    // No saturated liquid (above the critical point/region): the dense fluid fills the tank when
+    // the closed-tank state says so; a small signed value keeps the search bracketing.
+    return model.state(T, rho).lf >= 1 ? 1e-3 * rho : -1e-3 * rho;
+  };
+  if (Thi <= Tlo) return null;
+  const known: [number, number][] = [];
+  for (const [T, s] of [
+    [c.T, now],
+    [c.Tpeak, peak],
+  ] as const) {
+    if (T <= Thi && T >= Tlo) known.push([T, s.rhoL !== null && s.phase === 'two-phase' ? rho - s.rhoL : g(T)]);
+  }
+  if (known.length === 0) known.push([Math.min(Thi, c.T), g(Math.min(Thi, c.T))]);
+  const T = findCrossing(g, known, Tlo, Thi, 0.005);
+  if (T === null) return null;
+  // A crossing found only through the "no saturated liquid" stand-in is the critical point, not a liquid-full state.
+  return model.sat(T) ? T : null;
+}
+
+function findRelief(model: ProductModel, rho: number, c: CleanInput, now: State, peak: State, Tlo: number): number | null {
+  const pRelAbs = c.reliefSetPressure + c.baro;
+  const grow = 1 + MODEL_ALLOWANCE.vapourPressure;
+  const h = (T: number) => Math.log((model.state(T, rho).pAbs * grow) / pRelAbs);
+  const known: [number, number][] = [
+    [c.T, Math.log((now.pAbs * grow) / pRelAbs)],
+    [c.Tpeak, Math.log((peak.pAbs * grow) / pRelAbs)],
+  ];
+  return findCrossing(h, known, Tlo, T_SEARCH_MAX, 0.005);
+}

@@ -1,0 +1,277 @@
+/**
+ * Input and result of `checkTank`: from a tank's nameplate and today's readings to its
+ * contents, fill limit, peak-day pressure, a gauge diagnosis and ranked cautions.
+ *
+ * Units: SI everywhere — K, Pa, kg, m³, m, kg/m³. Pressures named `…Pressure` or `p` are
+ * **gauge** (Pa above the site barometric pressure) unless the name ends in `Absolute`.
+ * Convert user units with `thermo/units.ts` only.
+ */
+import type { Product } from '../product.js';
+
+/** Where the container sits. A partly buried container counts as aboveground (29 CFR 1910.110(d)(7)(iv)(e)). */
+export type Placement = 'aboveground' | 'underground';
+
+/**
+ * The class of container, which picks the filling-density rule:
+ * - `storage`: a stationary (ASME) storage container, 29 CFR 1910.110 / 1910.111;
+ * - `cylinder`: a DOT specification cylinder, 49 CFR 173.304a;
+ * - `cargo`: a DOT cargo tank, 49 CFR 173.315;
+ * - `portable`: a DOT portable tank, 49 CFR 173.315 (same tables as cargo tanks).
+ */
+export type ContainerClass = 'storage' | 'cylinder' | 'cargo' | 'portable';
+
+/** Head shape of a cylindrical tank. `ellipsoidal` is the 2:1 semi-ellipsoidal head (depth = D/4). */
+export type HeadKind = 'hemispherical' | 'ellipsoidal' | 'flat';
+
+/** Inside dimensions, needed only to turn a level height into a volume. */
+export type TankShape =
+  | {
+      kind: 'horizontal-cylinder';
+      heads: HeadKind;
+      /** Inside diameter, m. */
+      diameter: number;
+      /** Straight shell length between the head tangent lines, m (0 for a hemispherical-headed tank means a sphere). */
+      shellLength: number;
+    }
+  | {
+      kind: 'vertical-cylinder';
+      heads: HeadKind;
+      /** Inside diameter, m. */
+      diameter: number;
+      /** Straight shell height between the head tangent lines, m. */
+      shellLength: number;
+    }
+  | {
+      kind: 'sphere';
+      /** Inside diameter, m. */
+      diameter: number;
+    };
+
+/** The tank's nameplate and fittings. */
+export interface TankInput {
+  /** Water capacity, m³ (volume of the container; nameplate "W.C." converted from US gal or lb of water). */
+  waterCapacity: number;
+  /** Design pressure / MAWP, Pa gauge. */
+  designPressure: number;
+  /** Relief-valve start-to-discharge set pressure, Pa gauge. Default: the design pressure. */
+  reliefSetPressure?: number;
+  /** Default `aboveground`. */
+  placement?: Placement;
+  /** Insulated shell (changes the ammonia rule). Default false. */
+  insulated?: boolean;
+  /** Default `storage`. */
+  containerClass?: ContainerClass;
+  /** A fixed maximum-level gauge (dip tube) is used to fill: DOT cargo/portable tanks then take 97 % of the weight limit (49 CFR 173.315(b) Note 1). Default false. */
+  fixedDipTube?: boolean;
+  /** Shape and inside dimensions; needed only for `contents.levelHeight`. */
+  shape?: TankShape;
+  /** Minimum design metal temperature from the nameplate, K. Optional. */
+  minDesignMetalTemperature?: number;
+}
+
+/** One contents reading. */
+export type ContentsInput =
+  /** Float (or rotary / slip-tube) gauge reading, percent of the tank volume filled by liquid, 0…100. */
+  | { gaugePercent: number }
+  /** Net mass of product from a scale (gross − tare), kg. */
+  | { netMass: number }
+  /** Liquid level height above the tank bottom (inside), m. Needs `tank.shape`. */
+  | { levelHeight: number };
+
+/** The pressure gauge that gave `gaugePressure`. */
+export interface PressureGaugeInput {
+  /** Full-scale reading, Pa gauge. Default: the tank's design pressure (a gauge reads at least to the MAWP — common practice). */
+  fullScale?: number;
+  /** Accuracy as a fraction of full scale. Default 0.02 (±2 % of full scale). */
+  accuracy?: number;
+}
+
+export interface TankCheckInput {
+  tank: TankInput;
+  /** Fluid id, blend or custom fluid, as in the core (see `LPG_PRESETS` for commercial LP-gas blends). */
+  product: Product;
+  /** Measured liquid specific gravity at 60/60 °F (hydrometer or supplier ticket). Optional; default from the model. Used only to pick the filling-density band. */
+  specificGravity?: number;
+  /** Liquid temperature now, K (thermometer well or surface probe). */
+  liquidTemperature: number;
+  /** One contents reading. */
+  contents: ContentsInput;
+  /** Pressure gauge reading now, Pa gauge. Optional; enables the diagnosis. */
+  gaugePressure?: number;
+  /** The gauge's full scale and accuracy (for the diagnosis tolerance). */
+  pressureGauge?: PressureGaugeInput;
+  /** Site barometric pressure, Pa absolute. Default: from `elevation`, else 101 325 Pa. */
+  barometricPressure?: number;
+  /** Site elevation, m (standard atmosphere), used when no barometric pressure is given. */
+  elevation?: number;
+  /** Forecast peak liquid temperature, K (the app adds a sun allowance to the peak air temperature). */
+  peakTemperature: number;
+}
+
+/** Phase state of the tank contents. */
+export type TankPhase = 'two-phase' | 'liquid-full' | 'vapour-only' | 'supercritical';
+
+/** Signal words of the ANSI Z535 convention, most severe first. */
+export type CautionLevel = 'danger' | 'warning' | 'caution' | 'notice';
+
+/** Quantity of the number behind a caution (to format it with `thermo/units.ts`). */
+export type CautionQuantity = 'gaugePressure' | 'pressure' | 'pressureDifference' | 'temperature' | 'mass' | 'volume' | 'fraction';
+
+export interface Caution {
+  level: CautionLevel;
+  /** Stable machine code, e.g. `relief-at-peak`, `vacuum`, `standing`. */
+  code: string;
+  /** Plain-language message with the number in it (°F/psig and °C/kPa). Never permission to fill. */
+  message: string;
+  /** The number behind the caution, SI (unit per `quantity`), or null when the caution has none. */
+  value: number | null;
+  /** What `value` measures. */
+  quantity: CautionQuantity | null;
+}
+
+/** The product as the check saw it. */
+export interface ProductSummary {
+  /** Display name. */
+  label: string;
+  /** True for LP-gas (propane, propylene, butanes, butylenes and their mixtures, 29 CFR 1910.110(a)(7)). */
+  lpGas: boolean;
+  /** Liquid specific gravity at 60/60 °F used for the rule (entered, or model ÷ 999.016 kg/m³), dimensionless. */
+  specificGravity: number;
+  /** Where `specificGravity` came from. */
+  specificGravitySource: 'entered' | 'model';
+  /** Saturated liquid density at 60 °F from the model, kg/m³. */
+  liquidDensityAt60F: number;
+  /** Critical temperature (pure) or pseudo-critical (blend, Kay's rule), K. */
+  criticalTemperature: number;
+}
+
+export interface ContentsResult {
+  /** Liquid volume now, m³. */
+  liquidVolume: number;
+  /** Liquid volume ÷ tank volume now, percent 0…100 (what a float gauge should read). */
+  liquidPercent: number;
+  /** Liquid level height now, m, or null when the tank shape is not given or there is no liquid surface. */
+  levelHeight: number | null;
+  /** Liquid mass, kg. */
+  liquidMass: number;
+  /** Vapour mass, kg. */
+  vapourMass: number;
+  /** Total product mass in the tank, kg. */
+  totalMass: number;
+  /** Total mass ÷ water weight capacity at 60 °F (water 8.32828 lb/US gal, in air), fraction (0.42 = 42 %). */
+  fillingDensity: number;
+  /** Liquid volume corrected to 60 °F (15.6 °C): liquid mass ÷ liquid density at 60 °F, m³. */
+  liquidVolumeAt60F: number;
+  /** Overall density of the contents (total mass ÷ tank volume), kg/m³. */
+  overallDensity: number;
+}
+
+/** One limit considered for the fill. */
+export interface LimitEntry {
+  /** Stable id, e.g. `osha-h27`, `dot-173.315b`, `nh3-1910.111b11`, `not-liquid-full`. */
+  id: string;
+  /** `rule`: a filling-density rule; `physical`: never liquid-full up to a reference temperature. */
+  kind: 'rule' | 'physical';
+  /** What the limit is, in words. */
+  description: string;
+  /** Where it comes from (regulation, table, edition) or "common practice". */
+  citation: string;
+  /** Maximum permitted mass, kg (rounded down to 0.01 kg). */
+  maxMass: number;
+  /** The same as a filling density, fraction of the water weight capacity at 60 °F. */
+  fillingDensity: number;
+  /** For a not-liquid-full limit: the temperature up to which the tank must not become liquid-full, K. Else null. */
+  referenceTemperature: number | null;
+  /** Fraction taken off the model's liquid density for this limit (0 for a table rule; see rules/allowance.ts). */
+  modelAllowance: number;
+}
+
+export interface FillLimitResult {
+  /** Maximum permitted mass: the lowest of `limits`, kg (rounded down). */
+  maxMass: number;
+  /** `maxMass` as a filling density, fraction of the water weight capacity at 60 °F (rounded down). */
+  maxFillingDensity: number;
+  /** The id of the limit that binds (one of `limits`). */
+  binding: string;
+  /** Every limit considered, lowest first. */
+  limits: LimitEntry[];
+  /** maxMass − totalMass, kg (rounded down; negative when over the limit). */
+  roomLeftMass: number;
+  /** Room left as liquid volume at the current liquid temperature, m³ (rounded down; negative when over). */
+  roomLeftVolume: number;
+  /** Room left as liquid volume at 60 °F, m³ (rounded down; negative when over). */
+  roomLeftVolumeAt60F: number;
+  /** Float-gauge percent at which the tank holds `maxMass` at the current liquid temperature, percent (rounded down to 0.1; 100 when even a liquid-full tank would hold less). */
+  stopAtGaugePercent: number;
+  /**
+   * The regulation's volumetric maximum at the current temperature, percent of the container:
+   * FD·100 / (SG · VCF), VCF = ρL(T)/ρL(60 °F) (29 CFR 1910.110(b)(19)(v), generalised from 40/50 °F).
+   * It ignores the vapour's mass, so it is a little above `stopAtGaugePercent`. Null when no
+   * filling-density rule applies.
+   */
+  volumetricMaxPercent: number | null;
+}
+
+export interface PeakResult {
+  /** The forecast peak liquid temperature, K. */
+  temperature: number;
+  /** Phase state at the peak (closed tank, same contents). */
+  phase: TankPhase;
+  /** Expected pressure at the peak, Pa gauge (rounded up to 100 Pa). */
+  p: number;
+  /** Same, Pa absolute. */
+  pAbsolute: number;
+  /** Liquid volume ÷ tank volume at the peak, fraction 0…1. */
+  liquidFraction: number;
+  /** Design pressure − peak pressure raised by the model's vapour-pressure allowance, Pa (rounded down; negative when exceeded). */
+  headroomToDesign: number;
+  /** Relief set pressure − the same raised peak pressure, Pa (rounded down; negative when exceeded). */
+  headroomToRelief: number;
+}
+
+export interface DiagnosisResult {
+  /** The entered reading, Pa gauge. */
+  reading: number;
+  /** Expected pressure at the entered liquid temperature, Pa gauge. */
+  expected: number;
+  /** reading − expected, Pa. */
+  difference: number;
+  /** Allowed band, ± Pa (gauge accuracy × full scale plus the model's vapour-pressure allowance). */
+  tolerance: number;
+  /** `fits`, `high` (above the band) or `low` (below the band). */
+  verdict: 'fits' | 'high' | 'low';
+  /** Likely causes in words, most likely first (empty when the reading fits). */
+  causes: string[];
+  /**
+   * LP-gas only: the propane mole fraction of a propane/n-butane mix whose vapour pressure at the
+   * entered temperature equals the reading (ideal-solution estimate), fraction 0…1, or null.
+   */
+  propaneFraction: number | null;
+  /** The liquid temperature at which the product's expected pressure equals the reading, K, or null. */
+  temperatureForReading: number | null;
+}
+
+export interface TankCheckResult {
+  /** Phase state now. */
+  phase: TankPhase;
+  /** Expected pressure now, Pa gauge (model, at the entered liquid temperature; rounded up to 100 Pa). */
+  pressure: number;
+  /** Expected pressure now, Pa absolute. */
+  pressureAbsolute: number;
+  /** The barometric pressure used, Pa absolute. */
+  barometricPressure: number;
+  product: ProductSummary;
+  contents: ContentsResult;
+  fillLimit: FillLimitResult;
+  peak: PeakResult;
+  /** Temperature at which the tank (same contents, closed) becomes liquid-full, K, or null when it cannot (contents below the critical density, or above the critical temperature first). */
+  liquidFullTemperature: number | null;
+  /** Temperature at which the pressure reaches the relief set pressure, K (model, raised by the vapour-pressure allowance), or null when not below 400 K. */
+  reliefTemperature: number | null;
+  /** Present when a gauge pressure was entered. */
+  diagnosis: DiagnosisResult | null;
+  /** Ranked, most severe first; the last is always the standing caution (`code: 'standing'`). */
+  cautions: Caution[];
+  /** The standing caution, in full, for every result. */
+  standingCaution: string;
+}

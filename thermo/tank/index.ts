@@ -1,0 +1,1 @@
+export { headDepth, validateShape, tankHeight, totalVolume, volumeAtLevel, fractionAtLevel, levelAtFraction } from './geometry.js';
