@@ -9,7 +9,7 @@
  * The same measurement backs test/thermo/reference.test.ts, which fails on any miss.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
-import { measureAccuracy, TARGETS } from '../test/reference/measure.js';
+import { measureAccuracy, measureBlends, TARGETS } from '../test/reference/measure.js';
 
 const rows = measureAccuracy();
 const pct = (x: number | null) => (x === null ? '–' : `${(x * 100).toFixed(3)} %`);
@@ -21,6 +21,13 @@ const lines = [
   ...rows.map(
     (r) =>
       `| ${r.fluid} | ${pct(r.psat)}${mark(r.psat, TARGETS.psat)} | ${pct(r.rhoL)}${mark(r.rhoL, TARGETS.rhoL)} | ${pct(r.rhoV)}${mark(r.rhoV, TARGETS.rhoV)} | ${pct(r.compressed)}${mark(r.compressed, TARGETS.compressed)} | ${kel(r.liquidFullK)}${mark(r.liquidFullK, TARGETS.liquidFullK)} | ${r.points} |`,
+  ),
+  '',
+  `| blend (mole fractions), 233–333 K | bubble pressure | bubble liquid ρ | incipient vapour ρ | points |`,
+  `|---|---|---|---|---|`,
+  ...measureBlends().map(
+    (b) =>
+      `| ${b.mixture} | ${pct(b.bubble)}${mark(b.bubble, TARGETS.bubble)} | ${pct(b.rhoL)} | ${pct(b.rhoV)} | ${b.points} |`,
   ),
   '',
   `Targets: p_sat ${TARGETS.psat * 100} %, ρ_L ${TARGETS.rhoL * 100} %, ρ_V ${TARGETS.rhoV * 100} %, compressed liquid ${TARGETS.compressed * 100} %, liquid-full temperature ${TARGETS.liquidFullK} K; blends: bubble pressure ${TARGETS.bubble * 100} %. ✗ marks a miss.`,

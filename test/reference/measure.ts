@@ -7,7 +7,14 @@ import { readFileSync } from 'node:fs';
 import { closedTank, liquidDensity, saturation } from '../../thermo/index.js';
 import { fluidById } from '../../thermo/data/fluids.js';
 
-export const TARGETS = { psat: 0.005, rhoL: 0.005, rhoV: 0.02, compressed: 0.01, liquidFullK: 1, bubble: 0.02 } as const;
+export const TARGETS = {
+  psat: 0.005,
+  rhoL: 0.005,
+  rhoV: 0.02,
+  compressed: 0.01,
+  liquidFullK: 1,
+  bubble: 0.02,
+} as const;
 
 /** The range the targets apply to: −40 °C … +50 °C, capped at 0.97·Tc. */
 export function targetRange(id: string): [number, number] {
@@ -102,10 +109,49 @@ export function measureAccuracy(): AccuracyRow[] {
     for (const r of lf) {
       if (r.fluid !== id || r.transition !== 'liquid-full') continue;
       const Tref = +r.T_transition_K!;
-      const T = liquidFullT(id, +r.rho_overall_kg_m3!, Tref - 15, Math.min(Tref + 15, fluidById(id)!.Tc + 20));
+      const T = liquidFullT(
+        id,
+        +r.rho_overall_kg_m3!,
+        Tref - 15,
+        Math.min(Tref + 15, fluidById(id)!.Tc + 20),
+      );
       lfk = Math.max(lfk ?? 0, Math.abs(T - Tref));
       points++;
     }
     return { fluid: id, psat, rhoL, rhoV, compressed, liquidFullK: lfk, points };
   });
+}
+
+export interface BlendAccuracyRow {
+  mixture: string;
+  bubble: number;
+  rhoL: number;
+  rhoV: number;
+  points: number;
+}
+
+/** Worst deviations per blend of test/reference/bubble.csv (GERG-2008 reference). */
+export function measureBlends(): BlendAccuracyRow[] {
+  const byName = new Map<string, BlendAccuracyRow>();
+  for (const r of readTable('bubble.csv')) {
+    const comps = [
+      { id: 'propane', moleFraction: +r.x_propane! },
+      { id: 'ethane', moleFraction: +r.x_ethane! },
+      { id: 'n-butane', moleFraction: +r.x_n_butane! },
+    ].filter((c) => c.moleFraction > 0);
+    const s = saturation({ components: comps }, +r.T_K!);
+    const row = byName.get(r.mixture!) ?? {
+      mixture: r.mixture!,
+      bubble: 0,
+      rhoL: 0,
+      rhoV: 0,
+      points: 0,
+    };
+    row.bubble = Math.max(row.bubble, rel(s.p, +r.p_bubble_Pa!));
+    row.rhoL = Math.max(row.rhoL, rel(s.rhoL, +r.rhoL_kg_m3!));
+    row.rhoV = Math.max(row.rhoV, rel(s.rhoV, +r.rhoV_incipient_kg_m3!));
+    row.points++;
+    byName.set(r.mixture!, row);
+  }
+  return [...byName.values()];
 }
