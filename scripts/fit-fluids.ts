@@ -21,7 +21,13 @@ import { writeFileSync } from 'node:fs';
 import { R_J_molK } from '../thermo/constants.js';
 import { FLUIDS, type FluidConstants } from '../thermo/data/fluids.js';
 import { componentModel } from '../thermo/eos/model.js';
-import { DISTANCE_KAPPA, NO_CORRECTION, SHIFT_EXPONENTS, vapourBump, type VolumeCorrectionParams } from '../thermo/eos/volumeCorrection.js';
+import {
+  DISTANCE_KAPPA,
+  NO_CORRECTION,
+  SHIFT_EXPONENTS,
+  vapourBump,
+  type VolumeCorrectionParams,
+} from '../thermo/eos/volumeCorrection.js';
 import { mPengRobinson1976 } from '../thermo/eos/alpha.js';
 import { dPdv, PENG_ROBINSON } from '../thermo/eos/cubic.js';
 import { pureCoefficients, pureSaturation, pureZ } from '../thermo/solvers/pure.js';
@@ -58,7 +64,8 @@ function referencePoints(f: FluidConstants): { points: Point[]; note: string } {
   // equation anchors the vapour-pressure curve, so the alpha function does not wander there.
   if (f.Tb !== null && f.Tb < +rows[0]!.T_K! - 1) points.push({ T: f.Tb, p: 101_325 });
   for (const r of readCsv(`${REF}liquid-full.csv`)) {
-    if (r.fluid === f.id && r.transition === 'liquid-full') points.push({ T: +r.T_transition_K!, rhoL: +r.rho_overall_kg_m3! });
+    if (r.fluid === f.id && r.transition === 'liquid-full')
+      points.push({ T: +r.T_transition_K!, rhoL: +r.rho_overall_kg_m3! });
   }
   return {
     points,
@@ -70,7 +77,10 @@ function fitAlpha(f: FluidConstants, pts: Point[]): [number, number, number] {
   const pp = pts.filter((x) => x.p !== undefined);
   const residuals = (c: number[]) =>
     pp.map((x) => {
-      const m = componentModel(f, 'tuned', { mathiasCopeman: [c[0]!, c[1]!, c[2]!], volume: NO_CORRECTION });
+      const m = componentModel(f, 'tuned', {
+        mathiasCopeman: [c[0]!, c[1]!, c[2]!],
+        volume: NO_CORRECTION,
+      });
       return Math.log(pureSaturation(m, x.T, x.p).p / x.p!);
     });
   const start = [mPengRobinson1976(f.omega), 0, 0];
@@ -95,10 +105,15 @@ interface VolumePoint {
 }
 
 /** The states the volume correction is fitted to, each as (T, cubic volume, reference volume). */
-function volumePoints(f: FluidConstants, mc: [number, number, number], pts: Point[]): VolumePoint[] {
+function volumePoints(
+  f: FluidConstants,
+  mc: [number, number, number],
+  pts: Point[],
+): VolumePoint[] {
   const m = componentModel(f, 'tuned', { mathiasCopeman: mc, volume: NO_CORRECTION });
   const out: VolumePoint[] = [];
-  const liquidAt = (T: number, p: number) => (pureZ(m, pureCoefficients(m, T), T, p, 'liquid').Z * R * T) / p;
+  const liquidAt = (T: number, p: number) =>
+    (pureZ(m, pureCoefficients(m, T), T, p, 'liquid').Z * R * T) / p;
   for (const x of pts) {
     if (x.rhoL === undefined || x.T >= f.Tc) continue;
     out.push({ T: x.T, vCub: pureSaturation(m, x.T).vLCub, vRef: f.molarMass / x.rhoL, weight: 1 });
@@ -106,7 +121,12 @@ function volumePoints(f: FluidConstants, mc: [number, number, number], pts: Poin
   if (f.id === 'chlorine') return out;
   for (const r of readCsv(`${REF}sat/${f.id}.csv`)) {
     const T = +r.T_K!;
-    out.push({ T, vCub: pureSaturation(m, T).vVCub, vRef: f.molarMass / +r.rhoV_kg_m3!, weight: 0.1 });
+    out.push({
+      T,
+      vCub: pureSaturation(m, T).vVCub,
+      vRef: f.molarMass / +r.rhoV_kg_m3!,
+      weight: 0.1,
+    });
   }
   for (const r of readCsv(`${REF}liquid/${f.id}.csv`)) {
     const T = +r.T_K!;
@@ -120,7 +140,10 @@ function volumePoints(f: FluidConstants, mc: [number, number, number], pts: Poin
       out.push({ T: T0, vCub: pureSaturation(m, T0).vVCub, vRef: f.molarMass / rho, weight: 0.1 });
     }
     if (r.transition !== 'liquid-full') continue;
-    for (const [dT, key] of [[2, 'p_T_plus_2K_Pa'], [5, 'p_T_plus_5K_Pa']] as const) {
+    for (const [dT, key] of [
+      [2, 'p_T_plus_2K_Pa'],
+      [5, 'p_T_plus_5K_Pa'],
+    ] as const) {
       const T = T0 + dT;
       if (T >= f.Tc) continue;
       out.push({ T, vCub: liquidAt(T, +r[key]!), vRef: f.molarMass / rho, weight: 0.5 });
@@ -130,7 +153,12 @@ function volumePoints(f: FluidConstants, mc: [number, number, number], pts: Poin
 }
 
 /** Basis of the linear fit: y = v_cub − v_ref − K = Σ d_k τ^e_k + δ(g − 1) + v_cub·s(r)·(e0 + e1 τ + e2 τ²). */
-function volumeBasis(f: FluidConstants, vcCub: number, x: VolumePoint, withDistance: boolean): number[] {
+function volumeBasis(
+  f: FluidConstants,
+  vcCub: number,
+  x: VolumePoint,
+  withDistance: boolean,
+): number[] {
   const tau = Math.max(0, 1 - x.T / f.Tc);
   const row = SHIFT_EXPONENTS.map((e) => Math.pow(tau, e));
   if (!withDistance) return row;
@@ -150,7 +178,11 @@ function distanceFunction(f: FluidConstants, x: VolumePoint): number {
 /** Generalised δ/v_c,cub and ε for a fluid with no vapour or compressed-liquid data (chlorine). */
 const generalised = { deltaOverVc: [] as number[], eps: [] as number[][] };
 
-function fitVolume(f: FluidConstants, mc: [number, number, number], pts: Point[]): VolumeCorrectionParams {
+function fitVolume(
+  f: FluidConstants,
+  mc: [number, number, number],
+  pts: Point[],
+): VolumeCorrectionParams {
   mcCache.set(f.id, mc);
   const vcCub = (PENG_ROBINSON.Zc * R * f.Tc) / f.pc;
   const K = vcCub - f.molarMass / f.rhoc;
@@ -166,9 +198,20 @@ function fitVolume(f: FluidConstants, mc: [number, number, number], pts: Point[]
     const y = data.map((x) => {
       const tau = Math.max(0, 1 - x.T / f.Tc);
       const s = vapourBump(vcCub / x.vCub);
-      return x.vCub - x.vRef - K - delta * (distanceFunction(f, x) - 1) - x.vCub * s * (eps[0]! + eps[1]! * tau + eps[2]! * tau * tau);
+      return (
+        x.vCub -
+        x.vRef -
+        K -
+        delta * (distanceFunction(f, x) - 1) -
+        x.vCub * s * (eps[0]! + eps[1]! * tau + eps[2]! * tau * tau)
+      );
     });
-    const d = leastSquares(data.map((x) => volumeBasis(f, vcCub, x, false)), y, w, 1e-10);
+    const d = leastSquares(
+      data.map((x) => volumeBasis(f, vcCub, x, false)),
+      y,
+      w,
+      1e-10,
+    );
     return { cc: K - delta, d, delta, eps };
   }
   const X = data.map((x) => volumeBasis(f, vcCub, x, true));
@@ -184,7 +227,10 @@ function fitVolume(f: FluidConstants, mc: [number, number, number], pts: Point[]
 
 const out: string[] = [];
 // Chlorine last: its distance and vapour terms are the mean of the others.
-const ordered = [...FLUIDS.filter((f) => f.id !== 'chlorine'), ...FLUIDS.filter((f) => f.id === 'chlorine')];
+const ordered = [
+  ...FLUIDS.filter((f) => f.id !== 'chlorine'),
+  ...FLUIDS.filter((f) => f.id === 'chlorine'),
+];
 for (const f of ordered) {
   const { points, note } = referencePoints(f);
   const mc = fitAlpha(f, points);

@@ -6,9 +6,21 @@
 import { FLUIDS } from './data/fluids.js';
 import { InputError } from './errors.js';
 import type { ModelId } from './eos/model.js';
-import { resolveProduct, T_MAX_K, type ModelOptions, type Product, type ResolvedProduct } from './product.js';
+import {
+  resolveProduct,
+  T_MAX_K,
+  type ModelOptions,
+  type Product,
+  type ResolvedProduct,
+} from './product.js';
 import { closedTankState, type ClosedTankState, type Phase } from './solvers/closedTank.js';
-import { mixtureAtT, phaseAt, saturationPressure } from './solvers/mixture.js';
+import {
+  flashPT,
+  mixtureAtT,
+  phaseAt,
+  saturationPressure,
+  stabilityTest,
+} from './solvers/mixture.js';
 import { pureSaturation, pureVolume } from './solvers/pure.js';
 
 export interface FluidSummary {
@@ -45,7 +57,8 @@ export function listFluids(): FluidSummary[] {
 
 function checkTemperature(r: ResolvedProduct, T: unknown, field = 'T'): asserts T is number {
   const range = `from ${fmt(r.Tmin)} K (the triple point) to ${T_MAX_K} K`;
-  if (typeof T !== 'number' || !Number.isFinite(T) || T <= 0 || T < r.Tmin || T > T_MAX_K) throw new InputError(field, range, T);
+  if (typeof T !== 'number' || !Number.isFinite(T) || T <= 0 || T < r.Tmin || T > T_MAX_K)
+    throw new InputError(field, range, T);
 }
 
 function fmt(x: number): string {
@@ -83,7 +96,12 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
   checkTemperature(r, T);
   if (r.components.length === 1) {
     const m = r.components[0]!;
-    if (T > m.Tc - 0.5 + 1e-9) throw new InputError('T', `from ${fmt(r.Tmin)} K to ${fmt(m.Tc - 0.5)} K (0.5 K below the critical temperature)`, T);
+    if (T > m.Tc - 0.5 + 1e-9)
+      throw new InputError(
+        'T',
+        `from ${fmt(r.Tmin)} K to ${fmt(m.Tc - 0.5)} K (0.5 K below the critical temperature)`,
+        T,
+      );
     const s = pureSaturation(m, T);
     return { p: s.p, rhoL: m.molarMass / s.vL, rhoV: m.molarMass / s.vV, y: [1], model: r.model };
   }
@@ -92,23 +110,43 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
   try {
     b = saturationPressure(mx, r.z, 'bubble');
   } catch {
-    throw new InputError('T', `below the blend's critical region (no bubble point at ${fmt(T)} K)`, T);
+    throw new InputError(
+      'T',
+      `below the blend's critical region (no bubble point at ${fmt(T)} K)`,
+      T,
+    );
   }
   const My = b.incipient.reduce((s, y, i) => s + y * mx.M[i]!, 0);
-  return { p: b.p, rhoL: r.molarMass / b.vBulk, rhoV: My / b.vIncipient, y: Array.from(b.incipient), model: r.model };
+  return {
+    p: b.p,
+    rhoL: r.molarMass / b.vBulk,
+    rhoV: My / b.vIncipient,
+    y: Array.from(b.incipient),
+    model: r.model,
+  };
 }
 
 /**
  * Density of the liquid at T and p, kg/m³. p must be at or above the saturation (bubble)
  * pressure at T, and T below the critical temperature (pure) or the blend's critical region.
  */
-export function liquidDensity(product: Product, T: number, p: number, options?: ModelOptions): number {
+export function liquidDensity(
+  product: Product,
+  T: number,
+  p: number,
+  options?: ModelOptions,
+): number {
   const r = resolveProduct(product, options);
   checkTemperature(r, T);
-  if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9) throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p);
+  if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9)
+    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p);
   const sat = saturation(product, T, options);
   if (p < sat.p * (1 - 1e-9)) {
-    throw new InputError('p', `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.p)} Pa) for a liquid`, p);
+    throw new InputError(
+      'p',
+      `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.p)} Pa) for a liquid`,
+      p,
+    );
   }
   if (r.components.length === 1) {
     const m = r.components[0]!;
@@ -142,19 +180,29 @@ export interface ClosedTankResult {
  */
 export function maxDensity(product: Product, T: number, options?: ModelOptions): number {
   const r = resolveProduct(product, options);
-  if (r.components.length === 1) return r.molarMass / pureVolume(r.components[0]!, T, 1e8, 'liquid');
+  if (r.components.length === 1)
+    return r.molarMass / pureVolume(r.components[0]!, T, 1e8, 'liquid');
   return r.molarMass / phaseAt(mixtureAtT(r, T), 1e8, r.z, 'liquid').v;
 }
 
 /**
  * The state of contents of overall density `density` (kg/m³ = mass ÷ tank volume) at T.
  */
-export function closedTank(product: Product, T: number, density: number, options?: ModelOptions): ClosedTankResult {
+export function closedTank(
+  product: Product,
+  T: number,
+  density: number,
+  options?: ModelOptions,
+): ClosedTankResult {
   const r = resolveProduct(product, options);
   checkTemperature(r, T);
   const dmax = maxDensity(product, T, options);
   if (typeof density !== 'number' || !Number.isFinite(density) || density <= 0 || density > dmax) {
-    throw new InputError('density', `above 0 and at most ${fmt(dmax)} kg/m³ for this product at this temperature`, density);
+    throw new InputError(
+      'density',
+      `above 0 and at most ${fmt(dmax)} kg/m³ for this product at this temperature`,
+      density,
+    );
   }
   const s: ClosedTankState = closedTankState(r, T, density);
   return {
@@ -166,6 +214,108 @@ export function closedTank(product: Product, T: number, density: number, options
     vapourMassFraction: s.vapourMassFraction,
     x: s.x,
     y: s.y,
+    model: r.model,
+  };
+}
+
+/** Dew point of a vapour of the product's composition at T. */
+export interface DewState {
+  /** Dew-point pressure, Pa absolute. */
+  p: number;
+  /** Density of the vapour at its dew point, kg/m³. */
+  rhoV: number;
+  /** Density of the incipient liquid, kg/m³. */
+  rhoL: number;
+  /** Mole fractions of the incipient liquid. */
+  x: number[];
+  model: ModelId;
+}
+
+/**
+ * Dew point at T: the pressure at which a vapour of the product's composition first
+ * condenses. For a pure fluid it equals the vapour pressure.
+ */
+export function dewPoint(product: Product, T: number, options?: ModelOptions): DewState {
+  const r = resolveProduct(product, options);
+  checkTemperature(r, T);
+  if (r.components.length === 1) {
+    const s = saturation(product, T, options);
+    return { p: s.p, rhoV: s.rhoV, rhoL: s.rhoL, x: [1], model: r.model };
+  }
+  const mx = mixtureAtT(r, T);
+  let d;
+  try {
+    d = saturationPressure(mx, r.z, 'dew');
+  } catch {
+    throw new InputError('T', `below the blend's critical region (no dew point at ${fmt(T)} K)`, T);
+  }
+  const Mx = d.incipient.reduce((s, x, i) => s + x * mx.M[i]!, 0);
+  return {
+    p: d.p,
+    rhoV: r.molarMass / d.vBulk,
+    rhoL: Mx / d.vIncipient,
+    x: Array.from(d.incipient),
+    model: r.model,
+  };
+}
+
+export interface FlashState {
+  /** 'two-phase', or the single phase found stable. */
+  phase: 'two-phase' | 'liquid' | 'vapour';
+  /** Vapour mole fraction, 0…1. */
+  beta: number;
+  x: number[];
+  y: number[];
+  /** Phase densities, kg/m³ (null where the phase is absent). */
+  rhoL: number | null;
+  rhoV: number | null;
+  model: ModelId;
+}
+
+/**
+ * Isothermal flash at (T, p): Michelsen's stability test, then successive substitution with
+ * Rachford–Rice when the feed splits. A pure fluid is liquid above its vapour pressure and
+ * vapour below it.
+ */
+export function flash(product: Product, T: number, p: number, options?: ModelOptions): FlashState {
+  const r = resolveProduct(product, options);
+  checkTemperature(r, T);
+  if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9)
+    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p);
+  const mx = mixtureAtT(r, T);
+  const z = r.z;
+  const single = (): FlashState => {
+    const ph = phaseAt(mx, p, z, 'stable');
+    const M = r.molarMass;
+    const liquidLike =
+      ph.nRoots > 1
+        ? ph.Z < 0.3
+        : ph.v <
+          z.reduce((s, zi, i) => s + zi * (r.components[i]!.molarMass / r.components[i]!.rhoc), 0);
+    return {
+      phase: liquidLike ? 'liquid' : 'vapour',
+      beta: liquidLike ? 0 : 1,
+      x: [...z],
+      y: [...z],
+      rhoL: liquidLike ? M / ph.v : null,
+      rhoV: liquidLike ? null : M / ph.v,
+      model: r.model,
+    };
+  };
+  if (r.components.length === 1) return single();
+  const st = stabilityTest(mx, z, p);
+  if (st.stable) return single();
+  const f = flashPT(mx, z, p, st.K);
+  if (f.beta <= 0 || f.beta >= 1) return single();
+  const Mx = f.x.reduce((s, x, i) => s + x * mx.M[i]!, 0);
+  const My = f.y.reduce((s, y, i) => s + y * mx.M[i]!, 0);
+  return {
+    phase: 'two-phase',
+    beta: f.beta,
+    x: Array.from(f.x),
+    y: Array.from(f.y),
+    rhoL: Mx / f.vL,
+    rhoV: My / f.vV,
     model: r.model,
   };
 }

@@ -5,7 +5,7 @@
  * experimental propane + n-butane bubble points (test/reference/README.md), so 2 % leaves room.
  */
 import { describe, expect, it } from 'vitest';
-import { closedTank, saturation, type Product } from '../../thermo/index.js';
+import { closedTank, dewPoint, flash, saturation, type Product } from '../../thermo/index.js';
 import { readTable, TARGETS } from '../reference/measure.js';
 import { checkClose } from '../helpers/check.js';
 
@@ -96,5 +96,65 @@ describe('closedTank of a blend', () => {
     expect(prev.phase).toBe('liquid');
     const hotter = closedTank(blend, T + 2, rho);
     expect(hotter.p - prev.p).toBeGreaterThan(2 * 1e5);
+  });
+});
+
+describe('dewPoint and flash', () => {
+  const blend: Product = {
+    components: [
+      { id: 'propane', moleFraction: 0.6 },
+      { id: 'n-butane', moleFraction: 0.4 },
+    ],
+  };
+  it('splits a feed between its dew and bubble pressures and closes the mass balance', () => {
+    const T = 290;
+    const bub = saturation(blend, T).p;
+    const dew = dewPoint(blend, T).p;
+    expect(dew).toBeLessThan(bub);
+    const f = flash(blend, T, Math.sqrt(bub * dew));
+    expect(f.phase).toBe('two-phase');
+    [0.6, 0.4].forEach((zi, i) =>
+      checkClose({
+        what: 'flash mass balance',
+        input: { T, i },
+        actual: (1 - f.beta) * f.x[i]! + f.beta * f.y[i]!,
+        expected: zi,
+        rtol: 1e-9,
+        kind: 'identity',
+        source: 'component balance',
+      }),
+    );
+  });
+  it('finds one liquid above the bubble pressure and one vapour below the dew pressure', () => {
+    const T = 290;
+    expect(flash(blend, T, saturation(blend, T).p * 1.2).phase).toBe('liquid');
+    expect(flash(blend, T, dewPoint(blend, T).p * 0.8).phase).toBe('vapour');
+  });
+  it('a blend that is nearly pure propane has dew ≈ bubble ≈ the propane vapour pressure (identity, 0.5 %)', () => {
+    const nearly: Product = {
+      components: [
+        { id: 'propane', moleFraction: 0.9999 },
+        { id: 'n-butane', moleFraction: 0.0001 },
+      ],
+    };
+    const p = saturation('propane', 280).p;
+    checkClose({
+      what: 'bubble → pure limit',
+      input: { T: 280 },
+      actual: saturation(nearly, 280).p,
+      expected: p,
+      rtol: 0.005,
+      kind: 'identity',
+      source: 'pure-fluid limit',
+    });
+    checkClose({
+      what: 'dew → pure limit',
+      input: { T: 280 },
+      actual: dewPoint(nearly, 280).p,
+      expected: p,
+      rtol: 0.005,
+      kind: 'identity',
+      source: 'pure-fluid limit',
+    });
   });
 });
