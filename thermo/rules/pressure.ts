@@ -1,0 +1,71 @@
+/**
+ * Design-pressure, relief-valve and product-pressure rules, pressures in psig as the rules print
+ * them (convert with units.ts). CFR 2015 annual edition text unless stated; check the current
+ * eCFR before release.
+ */
+
+/** Era of the container's construction code, which sets the relief range (Table H-26) and the design pressure for a container type (Table H-31). */
+export type CodeEra = 'asme-1949-and-earlier' | 'asme-1950-and-later';
+
+/**
+ * Relief-valve start-to-discharge range as fractions of the design pressure:
+ * LP-gas, 29 CFR 1910.110(b)(10)(iv) Table H-26: U-68/U-69 (1949 and earlier) 110–125 %;
+ * U-200/U-201, ASME 1950–1968, API-ASME 88–100 %.
+ * Ammonia, 29 CFR 1910.111(b)(9)(ii): U-68/U-69 110–125 %; U-200/U-201, ASME 1952–1962,
+ * API-ASME, USCG 95–100 %.
+ */
+export function reliefRange(service: 'lp-gas' | 'ammonia', era: CodeEra): { min: number; max: number; citation: string } {
+  if (era === 'asme-1949-and-earlier') {
+    return { min: 1.1, max: 1.25, citation: service === 'lp-gas' ? '29 CFR 1910.110(b)(10)(iv) Table H-26' : '29 CFR 1910.111(b)(9)(ii)' };
+  }
+  return service === 'lp-gas'
+    ? { min: 0.88, max: 1.0, citation: '29 CFR 1910.110(b)(10)(iv) Table H-26' }
+    : { min: 0.95, max: 1.0, citation: '29 CFR 1910.111(b)(9)(ii)' };
+}
+
+/**
+ * LP-gas container type for a product's vapour pressure at 100 °F (29 CFR 1910.110(d)(2)
+ * Table H-31 and its notes): types 80…200 in steps of 25 (type 200 may hold up to 215 psig),
+ * then raised in steps of 25. Minimum design pressure = type × 1.00 (ASME 1949 and earlier,
+ * U-68/U-69) or × 1.25 (later codes). Type 80 listed for completeness (not authorized new since 1947).
+ */
+export function containerTypeFor(vp100_psig: number, era: CodeEra): { type: number; minDesignPressure_psig: number } {
+  const types = [80, 100, 125, 150, 175, 200];
+  const maxVp: Record<number, number> = { 80: 80, 100: 100, 125: 125, 150: 150, 175: 175, 200: 215 };
+  let type = types.find((t) => vp100_psig <= maxVp[t]!);
+  if (type === undefined) type = 200 + 25 * Math.ceil((vp100_psig - 200) / 25);
+  return { type, minDesignPressure_psig: type * (era === 'asme-1949-and-earlier' ? 1 : 1.25) };
+}
+
+/** DOT cylinders in LP-gas service: marked service pressure ≥ 4/5 of the product's vapour pressure at 130 °F, psig (29 CFR 1910.110(c)(9)). */
+export function minCylinderServicePressure(vp130_psig: number): number {
+  return 0.8 * vp130_psig;
+}
+
+/** ASTM D1835 commercial PB mixtures: vapour pressure at 100 °F ≤ 1167 − 1880·(relative density 60/60 °F) and ≤ 208 psig (ASTM D1835, 1997 edition as incorporated by reference; public excerpt). */
+export function d1835PbMaxVapourPressure(relativeDensity: number): number {
+  return Math.min(208, 1167 - 1880 * relativeDensity);
+}
+
+/**
+ * Minimum relief-valve flow, ft³/min of air at 60 °F and 14.7 psia, for a container of outside
+ * surface area A (ft²): LP-gas 53.632·A^0.82 (29 CFR 1910.110(b)(10)(ii), the formula printed
+ * for areas above 2,000 ft², which reproduces the table rows below it to 0.1 %); ammonia
+ * 22.11·A^0.82 (29 CFR 1910.111 Table H-36, same way). The code's table governs where it lists
+ * the area.
+ */
+export function reliefFlowAir(area_ft2: number, service: 'lp-gas' | 'ammonia'): number {
+  return (service === 'lp-gas' ? 53.632 : 22.11) * area_ft2 ** 0.82;
+}
+
+/** Outside surface area for the relief flow when not stamped, ft² (29 CFR 1910.110(b)(10)(ii); 1910.111 Table H-36 notes). Lengths in ft, overall length L. */
+export function reliefSurfaceArea(shape: 'hemispherical-heads' | 'other-heads' | 'sphere', L_ft: number, D_ft: number): number {
+  if (shape === 'sphere') return D_ft * D_ft * 3.1416;
+  if (shape === 'hemispherical-heads') return L_ft * D_ft * 3.1416;
+  return (L_ft + 0.3 * D_ft) * D_ft * 3.1416;
+}
+
+/** Hydrostatic relief between shutoff valves on LP-gas liquid piping, psig: ≥ 140 % of the container relief setting (≥ 400 psig for DOT containers) and ≤ 500 psig (29 CFR 1910.110(b)(10)(xii)). */
+export function hydrostaticReliefRange(containerRelief_psig: number, dot: boolean): { min: number; max: number } {
+  return { min: dot ? Math.max(400, 1.4 * containerRelief_psig) : 1.4 * containerRelief_psig, max: 500 };
+}
