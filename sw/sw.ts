@@ -90,5 +90,15 @@ async function deleteOldCaches(): Promise<void> {
 }
 
 self.addEventListener('activate', (event: ExtendableEvent) => {
-  event.waitUntil(Promise.all([deleteOldCaches(), self.clients.claim()]));
+  // Old caches go first, so a page never sees the new worker next to a stale cache; the claim
+  // runs even if the clean-up fails, because control of the page matters more.
+  event.waitUntil(
+    (async () => {
+      try {
+        await deleteOldCaches();
+      } finally {
+        await self.clients.claim();
+      }
+    })(),
+  );
 });
