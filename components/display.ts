@@ -1,0 +1,165 @@
+/**
+ * The user's display units, bound once from the settings. A thin layer over `thermo/units.ts`
+ * (which does every conversion): it only picks which unit each quantity is shown in, so no
+ * component ever converts by hand.
+ *
+ * Gauge and absolute are always explicit: a gauge pressure is labelled psig / bar g / kPa g and
+ * an absolute one psia / bar a / kPa a, and a pressure difference (headroom, tolerance) psi /
+ * bar / kPa.
+ */
+import {
+  formatNumber,
+  formatQuantity,
+  fromSI,
+  toSI,
+  unitLabel,
+  barometricPressureAtElevation,
+  type Quantity,
+  type Rounding,
+  type UnitIds,
+} from '../thermo/units.js';
+import type { Settings, UnitPrefs } from './types.js';
+
+export type { Quantity, Rounding };
+
+const ABSOLUTE: Record<UnitPrefs['pressure'], UnitIds['pressure']> = {
+  psig: 'psia',
+  barg: 'bara',
+  kPag: 'kPaa',
+};
+const DIFFERENCE: Record<UnitPrefs['pressure'], UnitIds['pressureDifference']> = {
+  psig: 'psi',
+  barg: 'bar',
+  kPag: 'kPa',
+};
+
+/** Shown digits per quantity and unit, chosen for what a field reading needs. */
+function decimalsFor(q: Quantity, unit: string): number | undefined {
+  switch (q) {
+    case 'gaugePressure':
+    case 'pressure':
+    case 'pressureDifference':
+      return unit.startsWith('psi') || unit.startsWith('kPa') ? 0 : 2;
+    case 'temperature':
+    case 'temperatureDifference':
+      return 1;
+    case 'fraction':
+      return 1;
+    case 'mass':
+      return 1;
+    case 'length':
+      return unit === 'in' ? 1 : 0;
+    default:
+      return undefined;
+  }
+}
+
+export class DisplayUnits {
+  /** Site barometric pressure used across gauge and absolute, Pa absolute. */
+  readonly barometricPressure: number;
+
+  constructor(
+    readonly units: UnitPrefs,
+    barometricPressure = 101_325,
+  ) {
+    this.barometricPressure = barometricPressure;
+  }
+
+  static fromSettings(settings: Settings): DisplayUnits {
+    return new DisplayUnits(settings.units, siteBarometricPressure(settings));
+  }
+
+  /** The unit id shown for a quantity. */
+  unit<Q extends Quantity>(q: Q): UnitIds[Q] {
+    const u = this.units;
+    const map: { [K in Quantity]: UnitIds[K] } = {
+      gaugePressure: u.pressure,
+      pressure: ABSOLUTE[u.pressure],
+      pressureDifference: DIFFERENCE[u.pressure],
+      temperature: u.temperature,
+      temperatureDifference: u.temperature,
+      volume: u.volume,
+      mass: u.mass,
+      density: u.mass === 'lb' ? 'lb/usgal' : 'kg/m3',
+      length: u.length,
+      fraction: 'percent',
+    };
+    return map[q];
+  }
+
+  /** Display label of the unit of a quantity, e.g. `psig`, `°F`, `US gal`. */
+  label(q: Quantity): string {
+    return unitLabel(q, this.unit(q));
+  }
+
+  /** SI → display number. */
+  fromSI(q: Quantity, valueSI: number): number {
+    return fromSI(q, valueSI, this.unit(q), { barometricPressure: this.barometricPressure });
+  }
+
+  /** An absolute pressure (Pa) as a number in the user's gauge unit (psig, bar g, kPa g). */
+  gaugeFromAbsolute(pAbsolute: number): number {
+    return fromSI('pressure', pAbsolute, this.units.pressure, {
+      barometricPressure: this.barometricPressure,
+    });
+  }
+
+  /** Display number → SI. */
+  toSI(q: Quantity, value: number): number {
+    return toSI(q, value, this.unit(q), { barometricPressure: this.barometricPressure });
+  }
+
+  /**
+   * An SI value formatted with its unit. `round` is the direction of rounding at the last shown
+   * digit: `down` for limits and room left, `up` for pressures (toward safety).
+   */
+  format(
+    q: Quantity,
+    valueSI: number | null | undefined,
+    round: Rounding = 'nearest',
+    decimals?: number,
+  ): string {
+    const unit = this.unit(q);
+    return formatQuantity(q, valueSI, unit, {
+      barometricPressure: this.barometricPressure,
+      round,
+      decimals: decimals ?? decimalsFor(q, unit),
+    });
+  }
+
+  /** Display number without its unit (for an input's value). */
+  number(
+    q: Quantity,
+    valueSI: number | null | undefined,
+    round: Rounding = 'nearest',
+    decimals?: number,
+  ): string {
+    if (valueSI === null || valueSI === undefined || !Number.isFinite(valueSI)) return '';
+    const x = this.fromSI(q, valueSI);
+    const unit = this.unit(q);
+    return formatNumber(x, decimals ?? decimalsFor(q, unit) ?? 3, round);
+  }
+}
+
+/** The site barometric pressure the settings call for, Pa absolute. Falls back to the standard atmosphere. */
+export function siteBarometricPressure(settings: Settings): number {
+  const b = settings.barometer;
+  try {
+    if (b.mode === 'pressure' && Number.isFinite(b.pressure)) return b.pressure;
+    if (b.mode === 'elevation' && Number.isFinite(b.elevation))
+      return barometricPressureAtElevation(b.elevation);
+  } catch {
+    // An out-of-range elevation was refused when typed; fall through to the standard value.
+  }
+  return 101_325;
+}
+
+/** A plain percent (already 0…100) for display, rounded in the given direction. */
+export function formatPercent(
+  percent: number | null | undefined,
+  round: Rounding = 'nearest',
+  decimals = 1,
+): string {
+  if (percent === null || percent === undefined || !Number.isFinite(percent)) return '–';
+  return `${formatNumber(percent, decimals, round)} %`;
+}

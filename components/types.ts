@@ -1,0 +1,171 @@
+/**
+ * The app's own records: what is kept about a tank, a saved check and the user's settings.
+ * Every number is SI (K, Pa gauge unless the name ends in `Absolute`, kg, m³, m), exactly as the
+ * check engine takes it; display units live only in `Settings.units` and are applied through
+ * `thermo/units.ts`.
+ *
+ * These types are shared by the components (which show them) and by pwa/storage.ts (which
+ * keeps them), so they sit here, below the app shell in the import order pwa → components → thermo.
+ */
+import type { CautionLevel, TankInput, TankPhase } from '../thermo/check/types.js';
+
+/** A tank in the register. */
+export interface TankRecord {
+  /** Random id, stable for the life of the record. */
+  id: string;
+  /** Site the tank stands at (free text; the register groups by it). */
+  site: string;
+  /** Short name the user knows the tank by. */
+  name: string;
+  /** Free-text notes (location on site, serial number…). */
+  notes: string;
+  /** The nameplate, SI, as the check engine takes it. */
+  nameplate: TankInput;
+  /** What the tank holds: a product choice of the app (see components/products.ts). */
+  productId: string;
+  /** Part of the invented demo site (one tap clears every such record). */
+  demo: boolean;
+  /** ISO 8601 timestamps. */
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** How the contents were read. */
+export type ContentsMode = 'gaugePercent' | 'levelHeight' | 'netMass';
+
+/**
+ * What the user typed on the check screen, SI. `null` means "not entered". Kept as entered so a
+ * half-filled check can be saved as a draft and restored exactly.
+ */
+export interface Readings {
+  /** Liquid temperature now, K. */
+  liquidTemperature: number | null;
+  contentsMode: ContentsMode;
+  /** Float-gauge reading, percent 0…100. */
+  gaugePercent: number | null;
+  /** Liquid level height, m. */
+  levelHeight: number | null;
+  /** Net product mass on a scale, kg. */
+  netMass: number | null;
+  /** Pressure gauge reading, Pa gauge (optional). */
+  gaugePressure: number | null;
+  /** Forecast peak air temperature, K. */
+  peakAirTemperature: number | null;
+  /** Sun allowance added to the peak air temperature, K (a rule of thumb; see settings). */
+  sunAllowance: number | null;
+}
+
+/** The key figures of a check as the engine gave them, kept with the check for history and CSV. */
+export interface CheckSummary {
+  phase: TankPhase;
+  /** Expected pressure now, Pa gauge. */
+  pressure: number;
+  /** kg */
+  totalMass: number;
+  /** m³ */
+  liquidVolume: number;
+  /** fraction of the water weight capacity */
+  fillingDensity: number;
+  /** kg (rounded down by the engine) */
+  maxMass: number;
+  /** kg (rounded down; negative when over) */
+  roomLeftMass: number;
+  /** percent 0…100 */
+  stopAtGaugePercent: number;
+  /** Limit that binds (engine id). */
+  binding: string;
+  /** K */
+  peakTemperature: number;
+  /** Pa gauge (rounded up) */
+  peakPressure: number;
+  /** fraction 0…1 */
+  peakLiquidFraction: number;
+  /** Pa (negative when exceeded) */
+  headroomToDesign: number;
+  /** Pa (negative when exceeded) */
+  headroomToRelief: number;
+  /** K or null */
+  liquidFullTemperature: number | null;
+  /** Highest caution level other than the standing one, or null. */
+  topLevel: CautionLevel | null;
+  /** Caution messages in rank order, the standing caution last. */
+  cautions: { level: CautionLevel; code: string; message: string }[];
+}
+
+/** A saved check. */
+export interface CheckRecord {
+  id: string;
+  tankId: string;
+  /** ISO 8601 time the check was saved. */
+  at: string;
+  readings: Readings;
+  /** The product label at the time of the check. */
+  productLabel: string;
+  summary: CheckSummary;
+  demo: boolean;
+}
+
+/** An unsaved, half-filled check, kept per tank so a reload or an update never loses it. */
+export interface DraftRecord {
+  tankId: string;
+  readings: Readings;
+  /** ISO 8601 */
+  updatedAt: string;
+}
+
+/** Display units the user chose, one per quantity. Gauge/absolute is part of the pressure unit. */
+export interface UnitPrefs {
+  pressure: 'psig' | 'barg' | 'kPag';
+  temperature: 'F' | 'C';
+  volume: 'usgal' | 'L' | 'm3';
+  mass: 'lb' | 'kg';
+  length: 'in' | 'cm';
+}
+
+/** How the site's barometric pressure is known. */
+export type BarometerMode = 'standard' | 'pressure' | 'elevation';
+
+export interface Settings {
+  units: UnitPrefs;
+  barometer: {
+    mode: BarometerMode;
+    /** Site barometric pressure, Pa absolute (used when mode is `pressure`). */
+    pressure: number;
+    /** Site elevation, m (used when mode is `elevation`). */
+    elevation: number;
+  };
+  /** Pressure gauge accuracy, fraction of full scale (0.02 = ±2 %). */
+  gaugeAccuracy: number;
+  /** Pressure gauge full scale, Pa gauge, or null for "same as the tank's design pressure". */
+  gaugeFullScale: number | null;
+  /** Thermometer tolerance, K (±). Shown next to the temperature results. */
+  thermometerTolerance: number;
+  /** Default sun allowance for the peak, K (rule of thumb: +5 °C / 9 °F for an unshaded, uninsulated tank). */
+  sunAllowance: number;
+  /** `outdoor`: the high-contrast theme for sunlight. */
+  theme: 'standard' | 'outdoor';
+}
+
+export const DEFAULT_SETTINGS: Settings = {
+  units: { pressure: 'psig', temperature: 'F', volume: 'usgal', mass: 'lb', length: 'in' },
+  barometer: { mode: 'standard', pressure: 101_325, elevation: 0 },
+  gaugeAccuracy: 0.02,
+  gaugeFullScale: null,
+  thermometerTolerance: 1,
+  sunAllowance: 5,
+  theme: 'outdoor',
+};
+
+/** Empty readings for a new check. */
+export function emptyReadings(sunAllowance: number): Readings {
+  return {
+    liquidTemperature: null,
+    contentsMode: 'gaugePercent',
+    gaugePercent: null,
+    levelHeight: null,
+    netMass: null,
+    gaugePressure: null,
+    peakAirTemperature: null,
+    sunAllowance,
+  };
+}

@@ -1,0 +1,204 @@
+/// <reference types="mocha" />
+// pwa/storage.ts in real Chromium IndexedDB. Each test uses a random database name so tests
+// never share state. Kind: identity (what goes in comes back out; upgrades keep data).
+import { expect } from '@open-wc/testing';
+import { deleteDB } from 'idb';
+import { DB_VERSION, Store, UPGRADES, openAtVersion } from '../../pwa/storage.js';
+import type { CheckRecord, TankRecord } from '../../components/types.js';
+import { DEFAULT_SETTINGS } from '../../components/types.js';
+
+const names: string[] = [];
+function dbName(): string {
+  const n = `test-${Math.random().toString(36).slice(2)}`;
+  names.push(n);
+  return n;
+}
+
+after(async () => {
+  for (const n of names) await deleteDB(n);
+});
+
+// Test records: plain placeholders, not tank data of any kind.
+function tank(id: string, site = 'Site A', demo = false): TankRecord {
+  return {
+    id,
+    site,
+    name: `Tank ${id}`,
+    notes: '',
+    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+    productId: 'propane',
+    demo,
+    createdAt: '2024-01-01T00:00:00.000Z',
+    updatedAt: '2024-01-01T00:00:00.000Z',
+  };
+}
+
+function check(id: string, tankId: string, at: string, demo = false): CheckRecord {
+  return {
+    id,
+    tankId,
+    at,
+    demo,
+    productLabel: 'x',
+    readings: {
+      liquidTemperature: 290,
+      contentsMode: 'gaugePercent',
+      gaugePercent: 50,
+      levelHeight: null,
+      netMass: null,
+      gaugePressure: null,
+      peakAirTemperature: 300,
+      sunAllowance: 5,
+    },
+    summary: {
+      phase: 'two-phase',
+      pressure: 1,
+      totalMass: 1,
+      liquidVolume: 1,
+      fillingDensity: 0.1,
+      maxMass: 2,
+      roomLeftMass: 1,
+      stopAtGaugePercent: 80,
+      binding: 'r',
+      peakTemperature: 305,
+      peakPressure: 2,
+      peakLiquidFraction: 0.5,
+      headroomToDesign: 1,
+      headroomToRelief: 1,
+      liquidFullTemperature: null,
+      topLevel: null,
+      cautions: [],
+    },
+  };
+}
+
+/** Fixture data as each schema version could hold it, keyed by the version. */
+const SEED: Record<number, (db: Awaited<ReturnType<typeof openAtVersion>>) => Promise<void>> = {
+  1: async (db) => {
+    await db.put('tanks', tank('t1'));
+    await db.put('checks', check('c1', 't1', '2024-01-02T00:00:00.000Z'));
+    await db.put('drafts', {
+      tankId: 't1',
+      readings: check('x', 't1', '').readings,
+      updatedAt: '2024-01-03T00:00:00.000Z',
+    });
+    await db.put('settings', { ...DEFAULT_SETTINGS, sunAllowance: 3 }, 'settings');
+  },
+};
+
+describe('storage', () => {
+  it('UPGRADES has one step per schema version', () => {
+    expect(UPGRADES.length).to.equal(DB_VERSION);
+  });
+
+  // For every earlier version v (0 = no database yet): build the database at v with the
+  // upgrade steps, put data a user of v would have, then open the current version.
+  for (let v = 0; v < DB_VERSION + 1; v++) {
+    it(`Store.open upgrades from version ${v} and keeps the data`, async () => {
+      const name = dbName();
+      if (v > 0) {
+        const old = await openAtVersion(name, v);
+        await SEED[v]!(old);
+        old.close();
+      }
+      const store = await Store.open(name);
+      const tanks = await store.listTanks();
+      if (v === 0) {
+        expect(tanks).to.deep.equal([]);
+        expect(await store.getSettings()).to.equal(null);
+      } else {
+        expect(tanks.map((t) => t.id)).to.deep.equal(['t1']);
+        expect((await store.listChecks('t1')).map((c) => c.id)).to.deep.equal(['c1']);
+        expect((await store.getDraft('t1'))?.updatedAt).to.equal('2024-01-03T00:00:00.000Z');
+        expect((await store.getSettings())?.sunAllowance).to.equal(3);
+      }
+      // The current schema is fully usable after the upgrade.
+      await store.putTank(tank('t2'));
+      expect((await store.listTanks()).length).to.equal(v === 0 ? 1 : 2);
+      store.close();
+    });
+  }
+
+  it('Store.listChecks returns one tank’s checks, newest first', async () => {
+    const store = await Store.open(dbName());
+    await store.putTank(tank('a'));
+    await store.putTank(tank('b'));
+    await store.putCheck(check('c1', 'a', '2024-01-01T00:00:00.000Z'));
+    await store.putCheck(check('c2', 'a', '2024-03-01T00:00:00.000Z'));
+    await store.putCheck(check('c3', 'b', '2024-02-01T00:00:00.000Z'));
+    expect((await store.listChecks('a')).map((c) => c.id)).to.deep.equal(['c2', 'c1']);
+    expect((await store.listChecks()).map((c) => c.id)).to.deep.equal(['c2', 'c3', 'c1']);
+    store.close();
+  });
+
+  it('Store.deleteTank removes the tank with its checks and draft; restoreTank puts them back', async () => {
+    const store = await Store.open(dbName());
+    await store.putTank(tank('a'));
+    await store.putCheck(check('c1', 'a', '2024-01-01T00:00:00.000Z'));
+    await store.putDraft({ tankId: 'a', readings: check('x', 'a', '').readings, updatedAt: 'now' });
+    const removed = await store.deleteTank('a');
+    expect(removed?.checks.length).to.equal(1);
+    expect(await store.listTanks()).to.deep.equal([]);
+    expect(await store.listChecks()).to.deep.equal([]);
+    expect(await store.getDraft('a')).to.equal(undefined);
+    await store.restoreTank(removed!);
+    expect((await store.listTanks()).map((t) => t.id)).to.deep.equal(['a']);
+    expect((await store.listChecks('a')).map((c) => c.id)).to.deep.equal(['c1']);
+    expect((await store.getDraft('a'))?.updatedAt).to.equal('now');
+    expect(await store.deleteTank('missing')).to.equal(null);
+    store.close();
+  });
+
+  it('Store.exportAll then clearAll then importAll brings everything back', async () => {
+    const store = await Store.open(dbName());
+    await store.putTank(tank('a'));
+    await store.putCheck(check('c1', 'a', '2024-01-01T00:00:00.000Z'));
+    await store.putSettings({ ...DEFAULT_SETTINGS, theme: 'standard' });
+    const data = await store.exportAll();
+    await store.clearAll();
+    expect(await store.listTanks()).to.deep.equal([]);
+    await store.importAll(data);
+    expect(await store.exportAll()).to.deep.equal(data);
+    store.close();
+  });
+
+  it('Store.clearDemo removes only demo tanks and demo checks', async () => {
+    const store = await Store.open(dbName());
+    await store.putTank(tank('demo1', 'D', true));
+    await store.putTank(tank('mine'));
+    await store.putCheck(check('c1', 'demo1', '2024-01-01T00:00:00.000Z', true));
+    await store.putCheck(check('c2', 'mine', '2024-01-01T00:00:00.000Z'));
+    expect(await store.clearDemo()).to.equal(1);
+    expect((await store.listTanks()).map((t) => t.id)).to.deep.equal(['mine']);
+    expect((await store.listChecks()).map((c) => c.id)).to.deep.equal(['c2']);
+    store.close();
+  });
+
+  it('Store.getMeta fills defaults and putMeta keeps changes', async () => {
+    const store = await Store.open(dbName());
+    expect(await store.getMeta()).to.deep.equal({
+      demoSeeded: false,
+      offlineNoteShown: false,
+      persisted: null,
+    });
+    await store.putMeta({ demoSeeded: true, offlineNoteShown: false, persisted: true });
+    expect((await store.getMeta()).demoSeeded).to.equal(true);
+    store.close();
+  });
+
+  it('Store.importAll is all or nothing: a failing record leaves the data as it was', async () => {
+    const store = await Store.open(dbName());
+    await store.putTank(tank('keep'));
+    // A check without its key path makes the put throw inside the transaction.
+    const bad = { ...check('c', 'keep', 'x'), id: undefined } as unknown as CheckRecord;
+    let threw = false;
+    try {
+      await store.importAll({ tanks: [tank('new')], checks: [bad], settings: null });
+    } catch {
+      threw = true;
+    }
+    expect(threw).to.equal(true);
+    expect((await store.listTanks()).map((t) => t.id)).to.deep.equal(['keep']);
+    store.close();
+  });
+});
