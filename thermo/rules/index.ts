@@ -4,7 +4,7 @@ export { TABLE_H27, TABLE_173_315B, TABLE_173_304A_D1, lpgFillingDensity, sgForT
 export type { LpgColumn, LpgFillingDensity } from './lpgas.js';
 export { fillingRule, referenceRules, isLpGas, isRefrigerantNos, LPG_IDS, REFRIGERANT_NOS_IDS, T_130F_K, T_131F_K } from './gases.js';
 export type { RuleChoice, PhysicalRuleChoice, RuleContext } from './gases.js';
-export { reliefRange, containerTypeFor, minCylinderServicePressure, d1835PbMaxVapourPressure, reliefFlowAir, reliefSurfaceArea, hydrostaticReliefRange } from './pressure.js';
+export { reliefRange, containerTypeFor, minCylinderServicePressure, d1835PbMaxVapourPressure, reliefFlowAir, reliefFlowAirFormula, reliefSurfaceArea, hydrostaticReliefRange } from './pressure.js';
 export type { CodeEra } from './pressure.js';
 export { LPG_PRESETS } from './presets.js';
 export type { LpgPreset } from './presets.js';

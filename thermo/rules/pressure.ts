@@ -47,14 +47,27 @@ export function d1835PbMaxVapourPressure(relativeDensity: number): number {
   return Math.min(208, 1167 - 1880 * relativeDensity);
 }
 
+/** Rows of the relief-flow tables held here (ft² → ft³/min air): 29 CFR 1910.110(b)(10)(ii) and 1910.111 Table H-36 (excerpt). */
+const FLOW_ROWS: Record<'lp-gas' | 'ammonia', Record<number, number>> = {
+  'lp-gas': { 20: 626, 100: 2340, 500: 8760, 1000: 15470, 2000: 27310 },
+  ammonia: { 20: 258, 100: 965, 500: 3620, 1000: 6380, 2500: 13520 },
+};
+
 /**
  * Minimum relief-valve flow, ft³/min of air at 60 °F and 14.7 psia, for a container of outside
- * surface area A (ft²): LP-gas 53.632·A^0.82 (29 CFR 1910.110(b)(10)(ii), the formula printed
- * for areas above 2,000 ft², which reproduces the table rows below it to 0.1 %); ammonia
- * 22.11·A^0.82 (29 CFR 1910.111 Table H-36, same way). The code's table governs where it lists
- * the area.
+ * surface area A (ft²). A listed table row is returned as printed; otherwise the formula the
+ * regulation prints for areas beyond its table: LP-gas 53.632·A^0.82 (29 CFR 1910.110(b)(10)(ii)),
+ * ammonia 22.11·A^0.82 (29 CFR 1910.111 Table H-36). The formula reproduces the table rows held
+ * here within 0.2 %; between rows the code's full table governs.
  */
 export function reliefFlowAir(area_ft2: number, service: 'lp-gas' | 'ammonia'): number {
+  const row = FLOW_ROWS[service][area_ft2];
+  if (row !== undefined) return row;
+  return (service === 'lp-gas' ? 53.632 : 22.11) * area_ft2 ** 0.82;
+}
+
+/** The formula alone (for checking it against the table rows). */
+export function reliefFlowAirFormula(area_ft2: number, service: 'lp-gas' | 'ammonia'): number {
   return (service === 'lp-gas' ? 53.632 : 22.11) * area_ft2 ** 0.82;
 }
 
