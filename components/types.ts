@@ -169,3 +169,9 @@ export function emptyReadings(sunAllowance: number): Readings {
     sunAllowance,
   };
 }
+
+/** A random id for a new record (crypto where present). */
+export function newId(): string {
+  if (typeof crypto !== 'undefined' && 'randomUUID' in crypto) return crypto.randomUUID();
+  return `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 10)}`;
+}

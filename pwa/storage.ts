@@ -266,8 +266,4 @@ export async function requestPersistentStorage(): Promise<boolean | null> {
   }
 }
 
-/** A random id (crypto where present). */
-export function newId(): string {
-  if (typeof crypto !== 'undefined' && 'randomUUID' in crypto) return crypto.randomUUID();
-  return `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 10)}`;
-}
+export { newId } from '../components/types.js';

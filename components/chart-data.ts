@@ -1,0 +1,64 @@
+/**
+ * The series behind the heating chart: the same closed tank (same contents, so the same overall
+ * density) taken from today's liquid temperature to past the forecast peak, with the core's
+ * `closedTank`. Points the core refuses (beyond its range) are left out, never guessed.
+ */
+import { closedTank, type Product } from '../thermo/index.js';
+import type { TankCheckResult } from '../thermo/check/types.js';
+
+export interface CurvePoint {
+  /** K */
+  T: number;
+  /** Pa absolute */
+  pAbsolute: number;
+  /** Liquid volume ÷ tank volume, fraction 0…1. */
+  liquidFraction: number;
+}
+
+export interface HeatingCurve {
+  points: CurvePoint[];
+  /** Temperature span of the chart, K. */
+  Tmin: number;
+  Tmax: number;
+}
+
+/** Temperature span: a little below now, to past the peak and, when near, past liquid-full. K. */
+export function curveSpan(result: TankCheckResult, Tnow: number): { Tmin: number; Tmax: number } {
+  const Tpeak = result.peak.temperature;
+  const lo = Math.min(Tnow, Tpeak) - 5;
+  let hi = Math.max(Tnow, Tpeak) + 15;
+  const Tfull = result.liquidFullTemperature;
+  if (Tfull !== null && Tfull > hi && Tfull < hi + 20) hi = Tfull + 5;
+  return { Tmin: Math.max(150, lo), Tmax: Math.min(400, hi) };
+}
+
+/**
+ * `n` points of the closed-tank state between the span's ends (and the two marked states
+ * exactly, so the markers sit on the line).
+ */
+export function heatingCurve(
+  product: Product,
+  result: TankCheckResult,
+  Tnow: number,
+  n = 36,
+): HeatingCurve {
+  const { Tmin, Tmax } = curveSpan(result, Tnow);
+  const density = result.contents.overallDensity;
+  const temps = new Set<number>();
+  for (let i = 0; i < n; i++) temps.add(Tmin + ((Tmax - Tmin) * i) / (n - 1));
+  temps.add(Tnow);
+  temps.add(result.peak.temperature);
+  if (result.liquidFullTemperature !== null && result.liquidFullTemperature < Tmax)
+    temps.add(result.liquidFullTemperature);
+  const points: CurvePoint[] = [];
+  for (const T of [...temps].sort((a, b) => a - b)) {
+    try {
+      const s = closedTank(product, T, density);
+      if (Number.isFinite(s.p) && Number.isFinite(s.liquidFraction))
+        points.push({ T, pAbsolute: s.p, liquidFraction: s.liquidFraction });
+    } catch {
+      // Outside the core's range at this temperature: leave the point out.
+    }
+  }
+  return { points, Tmin, Tmax };
+}

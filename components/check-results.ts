@@ -1,0 +1,497 @@
+/**
+ * The figures of one tank check, laid out for a phone in the sun: the fill limit and the
+ * peak-day figures first, then the cautions, contents, diagnosis and the rest. It only lays out
+ * what `checkTank` returned; every number is formatted through `DisplayUnits` with the rounding
+ * the engine applied carried on toward safety (limits and room left down, pressures up).
+ *
+ * The standing caution is shown on every state of the element: with a result, with an error
+ * and with readings still missing. A short summary is announced politely to screen readers
+ * (a hidden `aria-live="polite"` region) once typing pauses, so each keystroke is not read out.
+ *
+ * No result is worded as permission: the element says what the figures are, never "go".
+ *
+ * data-testid: `results`, `standing-caution`, `fill-limit`, `fill-stop-percent`, `room-left`,
+ * `room-left-volume`, `room-left-volume-60f`, `fill-binding`, `result-phase`, `result-pressure`,
+ * `result-total-mass`, `result-liquid-volume`, `result-filling-density`, `result-volume-60f`,
+ * `peak-temperature`, `peak-pressure`, `peak-headroom-design`, `peak-headroom-relief`,
+ * `peak-liquid-percent`, `liquid-full-temperature`, `relief-temperature`, `diagnosis`,
+ * `caution` (with `data-level` and `data-code`), `results-missing`, `results-error`,
+ * `results-announcer`. Each figure carries its raw SI value in `data-si`.
+ */
+import { LitElement, html, css, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { baseStyles, levelStyles } from './styles.js';
+import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './display.js';
+import { DEFAULT_SETTINGS } from './types.js';
+import type { Caution, TankCheckResult, TankPhase } from '../thermo/check/types.js';
+
+/** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
+export const STANDING_FALLBACK =
+  'These figures come from a model and the entered readings. They support, and never replace, the site ' +
+  'procedures, the applicable code and the judgement of a licensed, trained person.';
+
+export const PHASE_WORDS: Record<TankPhase, string> = {
+  'two-phase': 'Liquid and vapour',
+  'liquid-full': 'Liquid-full: no vapour space',
+  'vapour-only': 'Vapour only: no liquid',
+  supercritical: 'Above the critical temperature: no liquid level',
+};
+
+/** The engine looks for the relief temperature up to this temperature, K (see `reliefTemperature`). */
+const RELIEF_SEARCH_MAX_K = 400;
+
+/** Delay before the polite summary is updated, ms: long enough that typing is not read out. */
+const ANNOUNCE_DELAY_MS = 1200;
+
+export class CheckResults extends LitElement {
+  static override properties = {
+    result: { attribute: false },
+    display: { attribute: false },
+    missing: { attribute: false },
+    error: { type: String },
+    peakEstimated: { type: Boolean, attribute: 'peak-estimated' },
+    thermometerTolerance: { type: Number, attribute: 'thermometer-tolerance' },
+    _announce: { state: true },
+  };
+
+  /** The check result, or null while readings are missing or invalid. */
+  declare result: TankCheckResult | null;
+  /** The user's display units. */
+  declare display: DisplayUnits;
+  /** Names of the readings still needed (shown instead of figures). */
+  declare missing: string[];
+  /** An error message from the check (shown instead of figures). */
+  declare error: string;
+  /** True when no forecast was entered and the peak figures are for today's liquid temperature. */
+  declare peakEstimated: boolean;
+  /** Thermometer tolerance, K (±), shown beside the temperatures. 0 hides it. */
+  declare thermometerTolerance: number;
+  declare _announce: string;
+
+  private _timer: ReturnType<typeof setTimeout> | undefined;
+
+  constructor() {
+    super();
+    this.result = null;
+    this.display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
+    this.missing = [];
+    this.error = '';
+    this.peakEstimated = false;
+    this.thermometerTolerance = 0;
+    this._announce = '';
+  }
+
+  static override styles = [
+    baseStyles,
+    levelStyles,
+    css`
+      .key {
+        display: grid;
+        grid-template-columns: repeat(auto-fit, minmax(14rem, 1fr));
+        gap: 0.75rem;
+        margin-bottom: 1rem;
+      }
+      .card {
+        border: var(--border-width) solid var(--ink);
+        border-radius: 0.6rem;
+        padding: 0.75rem;
+        background: var(--paper);
+        min-width: 0;
+      }
+      .card h3 {
+        font-size: 1rem;
+        margin: 0 0 0.25rem;
+      }
+      .big {
+        font-size: 1.6em;
+        font-weight: 800;
+        line-height: 1.2;
+        overflow-wrap: anywhere;
+      }
+      dl {
+        margin: 0;
+        display: grid;
+        grid-template-columns: minmax(0, 1fr) auto;
+        gap: 0.25rem 0.75rem;
+      }
+      dt {
+        min-width: 0;
+      }
+      dd {
+        margin: 0;
+        font-weight: 700;
+        text-align: right;
+        font-variant-numeric: tabular-nums;
+      }
+      .standing {
+        border: var(--border-width) solid var(--ink);
+        border-left-width: 0.6rem;
+        border-radius: 0.4rem;
+        padding: 0.6rem 0.75rem;
+        margin: 0 0 1rem;
+        background: var(--paper-2);
+      }
+      .cautions {
+        list-style: none;
+        padding: 0;
+        margin: 0 0 1rem;
+      }
+      .cautions li {
+        border: var(--border-width) solid var(--line);
+        border-radius: 0.4rem;
+        padding: 0.5rem 0.6rem;
+        margin-bottom: 0.5rem;
+        background: var(--paper);
+      }
+      .cautions li .level {
+        margin-right: 0.4rem;
+      }
+      .over {
+        color: var(--danger);
+      }
+      .note {
+        font-size: 0.92em;
+      }
+      section {
+        margin-bottom: 1rem;
+      }
+      .missing {
+        border: var(--border-width) dashed var(--ink);
+        border-radius: 0.5rem;
+        padding: 0.75rem;
+        margin-bottom: 1rem;
+      }
+      @media print {
+        .card,
+        .cautions li,
+        .standing {
+          break-inside: avoid;
+        }
+      }
+    `,
+  ];
+
+  protected override updated(changed: PropertyValues<this>): void {
+    if (changed.has('result') || changed.has('missing') || changed.has('error')) {
+      clearTimeout(this._timer);
+      this._timer = setTimeout(() => (this._announce = this._summaryText()), ANNOUNCE_DELAY_MS);
+    }
+  }
+
+  override disconnectedCallback(): void {
+    super.disconnectedCallback();
+    clearTimeout(this._timer);
+  }
+
+  /** One or two sentences for the screen reader. */
+  private _summaryText(): string {
+    const r = this.result;
+    if (this.error) return `Check not possible: ${this.error}`;
+    if (!r)
+      return this.missing.length ? `Enter ${this.missing.join(' and ')} to see the results.` : '';
+    const d = this.display;
+    const top = r.cautions.find((c) => c.code !== 'standing');
+    return [
+      `Fill limit ${d.format('mass', r.fillLimit.maxMass, 'down')}; stop at ${formatPercent(r.fillLimit.stopAtGaugePercent, 'down')} on the float gauge.`,
+      `Peak-day pressure ${d.format('gaugePressure', r.peak.p, 'up')}.`,
+      top ? `${capital(top.level)}: ${top.message}` : '',
+    ]
+      .filter(Boolean)
+      .join(' ');
+  }
+
+  private _fig(
+    testid: string,
+    q: Quantity,
+    valueSI: number | null,
+    round: Rounding = 'nearest',
+    missing = '–',
+  ): TemplateResult {
+    const text = valueSI === null ? missing : this.display.format(q, valueSI, round);
+    return html`<span data-testid=${testid} data-si=${valueSI === null ? '' : String(valueSI)}
+      >${text}</span
+    >`;
+  }
+
+  private _tempWithTolerance(testid: string, K: number | null, none: string): TemplateResult {
+    const tol = this.thermometerTolerance;
+    return html`${this._fig(testid, 'temperature', K, 'down', none)}${
+      K !== null && tol > 0
+        ? html`<span class="muted note">
+            ± ${this.display.format('temperatureDifference', tol, 'up')}</span
+          >`
+        : nothing
+    }`;
+  }
+
+  private _standing(): TemplateResult {
+    const text = this.result?.standingCaution ?? STANDING_FALLBACK;
+    return html`<p class="standing" data-testid="standing-caution" role="note">
+      <strong>Always:</strong> ${text}
+    </p>`;
+  }
+
+  private _cautions(list: Caution[]): TemplateResult {
+    const ranked = list.filter((c) => c.code !== 'standing');
+    if (ranked.length === 0)
+      return html`<p class="muted">No further cautions from these figures.</p>`;
+    return html`<ol class="cautions" aria-label="Cautions, most severe first">
+      ${ranked.map(
+        (c) =>
+          html`<li data-testid="caution" data-level=${c.level} data-code=${c.code}>
+            <span class="level ${c.level}">${c.level}</span>${c.message}
+          </li>`,
+      )}
+    </ol>`;
+  }
+
+  private _headroom(testid: string, pa: number): TemplateResult {
+    const d = this.display;
+    if (pa < 0) {
+      return html`<span data-testid=${testid} data-si=${String(pa)} class="over"
+        >exceeded by ${d.format('pressureDifference', -pa, 'up')}</span
+      >`;
+    }
+    return html`<span data-testid=${testid} data-si=${String(pa)}
+      >${d.format('pressureDifference', pa, 'down')}</span
+    >`;
+  }
+
+  private _body(r: TankCheckResult): TemplateResult {
+    const d = this.display;
+    const f = r.fillLimit;
+    const c = r.contents;
+    const p = r.peak;
+    const binding = f.limits.find((l) => l.id === f.binding);
+    const over = f.roomLeftMass < 0;
+    return html`
+      <div class="key">
+        <div class="card">
+          <h3>Fill limit</h3>
+          <div class="big">${this._fig('fill-limit', 'mass', f.maxMass, 'down')}</div>
+          <p>
+            Stop at
+            <strong
+              ><span data-testid="fill-stop-percent" data-si=${String(f.stopAtGaugePercent)}
+                >${formatPercent(f.stopAtGaugePercent, 'down')}</span
+              ></strong
+            >
+            on the float gauge at today’s liquid temperature.
+          </p>
+          <p>
+            ${
+              over
+                ? html`<strong class="over"
+                    >Over the limit by
+                    <span data-testid="room-left" data-si=${String(f.roomLeftMass)}
+                      >${d.format('mass', -f.roomLeftMass, 'up')}</span
+                    ></strong
+                  >`
+                : html`Room left ${this._fig('room-left', 'mass', f.roomLeftMass, 'down')}`
+            }
+          </p>
+        </div>
+        <div class="card">
+          <h3>Peak day${this.peakEstimated ? ' (no forecast entered)' : ''}</h3>
+          <div class="big">${this._fig('peak-pressure', 'gaugePressure', p.p, 'up')}</div>
+          <p>
+            at a liquid temperature of
+            ${this._fig('peak-temperature', 'temperature', p.temperature)}
+          </p>
+          <dl>
+            <dt>Headroom to relief setting</dt>
+            <dd>${this._headroom('peak-headroom-relief', p.headroomToRelief)}</dd>
+            <dt>Headroom to design pressure</dt>
+            <dd>${this._headroom('peak-headroom-design', p.headroomToDesign)}</dd>
+          </dl>
+        </div>
+        <div class="card">
+          <h3>Liquid-full at</h3>
+          <div class="big">
+            ${this._tempWithTolerance('liquid-full-temperature', r.liquidFullTemperature, 'Not reached')}
+          </div>
+          <p class="note">
+            Liquid percent at the peak:
+            <strong
+              ><span data-testid="peak-liquid-percent" data-si=${String(p.liquidFraction)}
+                >${d.format('fraction', p.liquidFraction, 'up')}</span
+              ></strong
+            >
+          </p>
+        </div>
+      </div>
+
+      <section aria-labelledby="h-cautions">
+        <h3 id="h-cautions">Cautions</h3>
+        ${this._cautions(r.cautions)}
+      </section>
+
+      <section aria-labelledby="h-now">
+        <h3 id="h-now">Now</h3>
+        <dl>
+          <dt>Phase</dt>
+          <dd data-testid="result-phase" data-si=${r.phase}>${PHASE_WORDS[r.phase]}</dd>
+          <dt>Expected pressure</dt>
+          <dd>
+            ${this._fig('result-pressure', 'gaugePressure', r.pressure, 'up')}
+            <span class="muted">(${d.format('pressure', r.pressureAbsolute, 'up')})</span>
+          </dd>
+          <dt>Barometric pressure used</dt>
+          <dd>${d.format('pressure', r.barometricPressure)}</dd>
+        </dl>
+      </section>
+
+      <section aria-labelledby="h-contents">
+        <h3 id="h-contents">Contents</h3>
+        <dl>
+          <dt>Product</dt>
+          <dd>${r.product.label}</dd>
+          <dt>Total product</dt>
+          <dd>${this._fig('result-total-mass', 'mass', c.totalMass)}</dd>
+          <dt>Liquid volume</dt>
+          <dd>${this._fig('result-liquid-volume', 'volume', c.liquidVolume)}</dd>
+          <dt>Liquid volume at 60 °F (15.6 °C)</dt>
+          <dd>${this._fig('result-volume-60f', 'volume', c.liquidVolumeAt60F)}</dd>
+          <dt>Liquid and vapour mass</dt>
+          <dd>${d.format('mass', c.liquidMass)} + ${d.format('mass', c.vapourMass)}</dd>
+          <dt>Filling density (of water capacity)</dt>
+          <dd>${this._fig('result-filling-density', 'fraction', c.fillingDensity)}</dd>
+          <dt>Float gauge should read</dt>
+          <dd>${formatPercent(c.liquidPercent)}</dd>
+          ${
+            c.levelHeight !== null
+              ? html`<dt>Liquid level</dt>
+                  <dd>${d.format('length', c.levelHeight)}</dd>`
+              : nothing
+          }
+        </dl>
+      </section>
+
+      <section aria-labelledby="h-limit">
+        <h3 id="h-limit">Fill limit in detail</h3>
+        <dl>
+          <dt>Maximum filling density</dt>
+          <dd>${d.format('fraction', f.maxFillingDensity, 'down')}</dd>
+          <dt>Room left as liquid now</dt>
+          <dd>${this._fig('room-left-volume', 'volume', f.roomLeftVolume, 'down')}</dd>
+          <dt>Room left as liquid at 60 °F</dt>
+          <dd>${this._fig('room-left-volume-60f', 'volume', f.roomLeftVolumeAt60F, 'down')}</dd>
+          ${
+            f.volumetricMaxPercent !== null
+              ? html`<dt>Rule’s volumetric maximum now</dt>
+                  <dd>${formatPercent(f.volumetricMaxPercent, 'down')}</dd>`
+              : nothing
+          }
+        </dl>
+        <p class="note" data-testid="fill-binding" data-si=${f.binding}>
+          The limit that binds:
+          ${binding ? html`${binding.description} <span class="muted">(${binding.citation})</span>` : f.binding}
+        </p>
+        ${
+          f.limits.length > 1
+            ? html`<p class="note">
+                Also considered:
+                ${f.limits
+                  .filter((l) => l.id !== f.binding)
+                  .map(
+                    (l) =>
+                      html`<br />${l.description}: ${d.format('mass', l.maxMass, 'down')}
+                        <span class="muted">(${l.citation})</span>`,
+                  )}
+              </p>`
+            : nothing
+        }
+      </section>
+
+      <section aria-labelledby="h-heat">
+        <h3 id="h-heat">Heating</h3>
+        <dl>
+          <dt>Phase at the peak</dt>
+          <dd>${PHASE_WORDS[p.phase]}</dd>
+          <dt>Peak pressure, absolute</dt>
+          <dd>${d.format('pressure', p.pAbsolute, 'up')}</dd>
+          <dt>Relief setting reached at</dt>
+          <dd>
+            ${this._tempWithTolerance('relief-temperature', r.reliefTemperature, `Not below ${d.format('temperature', RELIEF_SEARCH_MAX_K)}`)}
+          </dd>
+        </dl>
+      </section>
+
+      ${r.diagnosis ? this._diagnosis(r) : nothing}
+    `;
+  }
+
+  private _diagnosis(r: TankCheckResult): TemplateResult {
+    const g = r.diagnosis!;
+    const d = this.display;
+    const verdict =
+      g.verdict === 'fits'
+        ? 'fits the expected pressure'
+        : g.verdict === 'high'
+          ? 'reads HIGH'
+          : 'reads LOW';
+    return html`<section aria-labelledby="h-diag" data-testid="diagnosis" data-si=${g.verdict}>
+      <h3 id="h-diag">Pressure gauge</h3>
+      <p>
+        The gauge ${verdict}: ${d.format('gaugePressure', g.reading)} against
+        ${d.format('gaugePressure', g.expected)} expected (difference
+        ${d.format('pressureDifference', g.difference)}, allowed ±
+        ${d.format('pressureDifference', g.tolerance, 'up')}).
+      </p>
+      ${
+        g.causes.length
+          ? html`<p>Likely causes, most likely first:</p>
+              <ol>
+                ${g.causes.map((c) => html`<li>${c}</li>`)}
+              </ol>`
+          : nothing
+      }
+      ${
+        g.temperatureForReading !== null
+          ? html`<p class="note">
+              The reading fits a liquid temperature of
+              ${d.format('temperature', g.temperatureForReading)}.
+            </p>`
+          : nothing
+      }
+      ${
+        g.propaneFraction !== null
+          ? html`<p class="note">
+              It fits a propane/butane mix of about
+              ${formatPercent(g.propaneFraction * 100, 'nearest', 0)} propane (by moles, estimate).
+            </p>`
+          : nothing
+      }
+    </section>`;
+  }
+
+  override render() {
+    let body: TemplateResult;
+    if (this.error) {
+      body = html`<p class="missing error" data-testid="results-error" role="alert">
+        ${this.error}
+      </p>`;
+    } else if (!this.result) {
+      body = html`<p class="missing" data-testid="results-missing">
+        ${this.missing.length ? html`Enter ${this.missing.join(' and ')} to see the figures.` : 'No figures yet.'}
+      </p>`;
+    } else body = this._body(this.result);
+    return html`
+      <div data-testid="results">${this._standing()} ${body}</div>
+      <p class="visually-hidden" aria-live="polite" data-testid="results-announcer">
+        ${this._announce}
+      </p>
+    `;
+  }
+}
+
+function capital(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
+}
+
+customElements.define('check-results', CheckResults);
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'check-results': CheckResults;
+  }
+}

@@ -1,0 +1,89 @@
+/**
+ * Plain-text summary of a check, for sharing (Web Share API or the clipboard) and for the CSV
+ * export. Numbers through `DisplayUnits`, rounded toward safety as on screen. Always ends with
+ * the standing caution; never worded as permission.
+ */
+import { DisplayUnits, formatPercent } from './display.js';
+import { PHASE_WORDS, STANDING_FALLBACK } from './check-results.js';
+import { productLabel } from './products.js';
+import type { CheckRecord, Readings, TankRecord } from './types.js';
+import type { TankCheckResult } from '../thermo/check/types.js';
+
+function readingsLines(r: Readings, d: DisplayUnits): string[] {
+  const contents =
+    r.contentsMode === 'gaugePercent'
+      ? `Float gauge: ${formatPercent(r.gaugePercent)}`
+      : r.contentsMode === 'levelHeight'
+        ? `Liquid level: ${d.format('length', r.levelHeight)}`
+        : `Net mass on scale: ${d.format('mass', r.netMass)}`;
+  return [
+    `Liquid temperature: ${d.format('temperature', r.liquidTemperature)}`,
+    contents,
+    `Pressure gauge: ${r.gaugePressure === null ? 'not read' : d.format('gaugePressure', r.gaugePressure)}`,
+    r.peakAirTemperature === null
+      ? 'Forecast: none entered (peak figures at today’s liquid temperature)'
+      : `Forecast peak air: ${d.format('temperature', r.peakAirTemperature)} + sun allowance ${d.format('temperatureDifference', r.sunAllowance ?? 0)} (rule of thumb)`,
+  ];
+}
+
+/** A multi-line summary of a live result. */
+export function summaryText(
+  tank: TankRecord,
+  readings: Readings,
+  result: TankCheckResult,
+  d: DisplayUnits,
+  at = new Date(),
+): string {
+  const f = result.fillLimit;
+  const p = result.peak;
+  const ranked = result.cautions.filter((c) => c.code !== 'standing');
+  const lines = [
+    `Tank check — ${tank.name}${tank.site ? `, ${tank.site}` : ''}${tank.demo ? ' (invented demo tank)' : ''}`,
+    `${at.toLocaleString()}`,
+    `Product: ${result.product.label} · W.C. ${d.format('volume', tank.nameplate.waterCapacity)} · MAWP ${d.format('gaugePressure', tank.nameplate.designPressure)}`,
+    '',
+    ...readingsLines(readings, d),
+    '',
+    `Phase: ${PHASE_WORDS[result.phase]}`,
+    `Contents: ${d.format('mass', result.contents.totalMass)} (filling density ${d.format('fraction', result.contents.fillingDensity)})`,
+    `Fill limit: ${d.format('mass', f.maxMass, 'down')}; stop at ${formatPercent(f.stopAtGaugePercent, 'down')} on the float gauge at today’s temperature`,
+    f.roomLeftMass < 0
+      ? `Over the limit by ${d.format('mass', -f.roomLeftMass, 'up')}`
+      : `Room left: ${d.format('mass', f.roomLeftMass, 'down')}`,
+    `Peak day (${d.format('temperature', p.temperature)}): ${d.format('gaugePressure', p.p, 'up')}; headroom to relief ${headroom(p.headroomToRelief, d)}, to design ${headroom(p.headroomToDesign, d)}`,
+    `Liquid-full at: ${result.liquidFullTemperature === null ? 'not reached' : d.format('temperature', result.liquidFullTemperature, 'down')}`,
+    '',
+    ranked.length ? 'Cautions:' : 'No further cautions from these figures.',
+    ...ranked.map((c) => `- ${c.level.toUpperCase()}: ${c.message}`),
+    '',
+    result.standingCaution,
+  ];
+  return lines.join('\n');
+}
+
+function headroom(pa: number, d: DisplayUnits): string {
+  return pa < 0
+    ? `exceeded by ${d.format('pressureDifference', -pa, 'up')}`
+    : d.format('pressureDifference', pa, 'down');
+}
+
+/** A summary of a saved check (from its stored key figures). */
+export function savedSummaryText(
+  tank: TankRecord | undefined,
+  c: CheckRecord,
+  d: DisplayUnits,
+): string {
+  const s = c.summary;
+  const standing = s.cautions.find((x) => x.code === 'standing')?.message ?? STANDING_FALLBACK;
+  return [
+    `Tank check — ${tank?.name ?? 'deleted tank'} · ${new Date(c.at).toLocaleString()}`,
+    `Product: ${c.productLabel || (tank ? productLabel(tank.productId) : '')}`,
+    ...readingsLines(c.readings, d),
+    `Fill limit: ${d.format('mass', s.maxMass, 'down')}; stop at ${formatPercent(s.stopAtGaugePercent, 'down')} on the float gauge`,
+    `Peak day: ${d.format('gaugePressure', s.peakPressure, 'up')}`,
+    ...s.cautions
+      .filter((x) => x.code !== 'standing')
+      .map((x) => `- ${x.level.toUpperCase()}: ${x.message}`),
+    standing,
+  ].join('\n');
+}
