@@ -126,10 +126,11 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
     if (seen.has(c.id)) throw new InputError(`product.components[${i}].id`, 'an id not already in the blend', c.id);
     seen.add(c.id);
     const x = c.moleFraction;
-    if (typeof x !== 'number' || !Number.isFinite(x) || x < 0 || x > 1) {
+    // −1e-9 tolerates the rounding of a caller's own arithmetic (such a fraction counts as 0).
+    if (typeof x !== 'number' || !Number.isFinite(x) || x < -1e-9 || x > 1 + 1e-9) {
       throw new InputError(`product.components[${i}].moleFraction`, 'a number from 0 to 1', x);
     }
-    sum += x;
+    sum += Math.max(0, x);
   });
   if (Math.abs(sum - 1) > 1e-6) throw new InputError('product.components[].moleFraction', 'fractions that sum to 1 (within 1e-6)', sum);
   const kept = list.filter((c) => c.moleFraction > 0);

@@ -207,21 +207,25 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
   });
 
   it('blends of LP-gas components at ambient temperatures', () => {
+    // Commercial LP-gas: propane and butanes with up to 5 % ethane (a richer ethane blend at 330 K
+    // lies above its critical region and rightly has no bubble point: an InputError, tested above).
     const blendArb = fc
       .tuple(
-        fc.double({ min: 0.05, max: 1, noNaN: true }),
+        fc.double({ min: 0.01, max: 1, noNaN: true }),
         fc.double({ min: 0, max: 1, noNaN: true }),
-        fc.double({ min: 0, max: 0.2, noNaN: true }),
         fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.double({ min: 0, max: 0.05, noNaN: true }),
       )
-      .map(([a, b, c, d]): Product => {
-        const s = a + b + c + d;
+      .map(([a, b, d, c]): Product => {
+        const s = (a + b + d) / (1 - c);
+        const pa = a / s;
+        const pb = b / s;
         return {
           components: [
-            { id: 'propane', moleFraction: a / s },
-            { id: 'n-butane', moleFraction: b / s },
-            { id: 'ethane', moleFraction: c / s },
-            { id: 'isobutane', moleFraction: 1 - (a + b + c) / s },
+            { id: 'propane', moleFraction: pa },
+            { id: 'n-butane', moleFraction: pb },
+            { id: 'ethane', moleFraction: c },
+            { id: 'isobutane', moleFraction: Math.max(0, 1 - pa - pb - c) },
           ],
         };
       });
