@@ -85,7 +85,24 @@ export function resolveProduct(product: Product, options?: ModelOptions): Resolv
     throw new InputError('product', `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`, product);
   }
   if ('custom' in product) return resolveCustom(product.custom, model);
-  if ('components' in product) return resolveBlend(product.components, model);
+  if ('components' in product) {
+    // Blends are cached by value too, so repeated calls (a heating sweep) share one resolved
+    // product and the solvers' warm starts. Bounded: the oldest entry goes first.
+    let key: string | undefined;
+    try {
+      key = `${model}|${JSON.stringify(product.components)}`;
+    } catch {
+      key = undefined;
+    }
+    const hit = key ? cache.get(key) : undefined;
+    if (hit) return hit;
+    const r = resolveBlend(product.components, model);
+    if (key) {
+      if (cache.size >= 256) cache.delete(cache.keys().next().value!);
+      cache.set(key, r);
+    }
+    return r;
+  }
   throw new InputError('product', 'a fluid id, { components: [...] } or { custom: {...} }', product);
 }
 
