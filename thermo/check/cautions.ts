@@ -6,7 +6,8 @@
  */
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
 import { fmtAbs, fmtDiff, fmtGauge, fmtMass, fmtPct, fmtT } from './format.js';
-import { findCrossing, type ProductModel, type State } from './model.js';
+import type { ProductModel, State } from './model.js';
+import { saturationTemperature } from './search.js';
 import { STANDING_CAUTION } from './standing.js';
 import type { Caution, CautionLevel, CautionQuantity, TankCheckInput, TankCheckResult } from './types.js';
 import type { CleanInput } from './validate.js';
@@ -65,7 +66,7 @@ export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] 
     if (c.T < c.mdmt) {
       add('warning', 'below-mdmt', `The liquid at ${fmtT(c.T)} is colder than the minimum design metal temperature ${fmtT(c.mdmt)}: the shell may be brittle; avoid shocks and pressure changes and follow the site procedure.`, c.mdmt, 'temperature');
     } else {
-      const Tb = boilingAt(k.model, baro, c.T);
+      const Tb = saturationTemperature(k.model, baro, [c.T, c.Tpeak], Math.max(k.model.basics.Tmin + 0.01, 150));
       if (Tb !== null && Tb < c.mdmt) {
         add('caution', 'autorefrigeration-below-mdmt', `If the tank is vented or emptied fast, the liquid can chill toward its boiling point at atmospheric pressure, ${fmtT(Tb)}, which is below the minimum design metal temperature ${fmtT(c.mdmt)}.`, Tb, 'temperature');
       }
@@ -144,20 +145,4 @@ export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] 
   out.sort((a, b) => RANK[a.level] - RANK[b.level]);
   out.push({ level: 'notice', code: 'standing', message: STANDING_CAUTION, value: null, quantity: null });
   return out;
-}
-
-/** Temperature at which the product boils at pressure pAbs, K, or null. */
-function boilingAt(model: ProductModel, pAbs: number, Tstart: number): number | null {
-  const b = model.basics;
-  const Tlo = Math.max(b.Tmin + 0.01, 150);
-  const Thi = Math.min(400, b.pure ? b.Tc - 0.5 : 400);
-  const T0 = Math.min(Math.max(Tstart, Tlo), Thi);
-  const s0 = model.sat(T0);
-  if (!s0) return null;
-  const f = (T: number) => {
-    const s = model.sat(T);
-    return s ? Math.log(s.p / pAbs) : 1;
-  };
-  const T = findCrossing(f, [[T0, Math.log(s0.p / pAbs)]], Tlo, Thi, 0.01);
-  return T !== null && model.sat(T) ? T : null;
 }

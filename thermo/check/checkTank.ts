@@ -16,7 +16,8 @@ import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
 import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../tank/geometry.js';
 import { buildCautions } from './cautions.js';
 import { diagnose } from './diagnosis.js';
-import { findCrossing, ProductModel, type State } from './model.js';
+import { ProductModel, type State } from './model.js';
+import { liquidFullTemperature as findLiquidFullTemperature, reliefTemperature as findReliefTemperature } from './search.js';
 import { STANDING_CAUTION } from './standing.js';
 import type { FillLimitResult, LimitEntry, PeakResult, TankCheckInput, TankCheckResult } from './types.js';
 import { validateInput, type CleanInput } from './validate.js';
@@ -134,8 +135,9 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
   const peak = buildPeak(peakState, c);
 
   // --- Liquid-full and relief temperatures. ---
-  const liquidFullTemperature = findLiquidFull(model, rho, c, now, peakState, Tlo);
-  const reliefTemperature = findRelief(model, rho, c, now, peakState, Tlo);
+  const hints = [c.T, c.Tpeak];
+  const liquidFullTemperature = findLiquidFullTemperature(model, rho, hints, Tlo);
+  const reliefTemperature = findReliefTemperature(model, rho, c.reliefSetPressure + c.baro, 1 + MODEL_ALLOWANCE.vapourPressure, hints, Tlo, liquidFullTemperature);
 
   // --- Diagnosis. ---
   const diagnosis = c.gaugePressure === null ? null : diagnose(model, c, now, lpGas, Tlo);
@@ -245,44 +247,4 @@ function buildPeak(s: State, c: CleanInput): PeakResult {
     headroomToDesign: floorTo(c.designPressure - raised, P_STEP),
     headroomToRelief: floorTo(c.reliefSetPressure - raised, P_STEP),
   };
-}
-
-/** Highest temperature searched for the liquid-full and relief temperatures, K. */
-const T_SEARCH_MAX = 400;
-
-function findLiquidFull(model: ProductModel, rho: number, c: CleanInput, now: State, peak: State, Tlo: number): number | null {
-  const b = model.basics;
-  const Thi = Math.min(T_SEARCH_MAX, b.pure ? b.Tc - 0.5 : T_SEARCH_MAX);
-  // g(T) = ρ − ρL,sat(T): rises with T, crosses zero where the liquid fills the tank.
-  const g = (T: number): number => {
-    const s = model.sat(T);
-    if (s) return rho - s.rhoL;
-    // No saturated liquid (above the critical point/region): the dense fluid fills the tank when
-    // the closed-tank state says so; a small signed value keeps the search bracketing.
-    return model.state(T, rho).lf >= 1 ? 1e-3 * rho : -1e-3 * rho;
-  };
-  if (Thi <= Tlo) return null;
-  const known: [number, number][] = [];
-  for (const [T, s] of [
-    [c.T, now],
-    [c.Tpeak, peak],
-  ] as const) {
-    if (T <= Thi && T >= Tlo) known.push([T, s.rhoL !== null && s.phase === 'two-phase' ? rho - s.rhoL : g(T)]);
-  }
-  if (known.length === 0) known.push([Math.min(Thi, c.T), g(Math.min(Thi, c.T))]);
-  const T = findCrossing(g, known, Tlo, Thi, 0.005);
-  if (T === null) return null;
-  // A crossing found only through the "no saturated liquid" stand-in is the critical point, not a liquid-full state.
-  return model.sat(T) ? T : null;
-}
-
-function findRelief(model: ProductModel, rho: number, c: CleanInput, now: State, peak: State, Tlo: number): number | null {
-  const pRelAbs = c.reliefSetPressure + c.baro;
-  const grow = 1 + MODEL_ALLOWANCE.vapourPressure;
-  const h = (T: number) => Math.log((model.state(T, rho).pAbs * grow) / pRelAbs);
-  const known: [number, number][] = [
-    [c.T, Math.log((now.pAbs * grow) / pRelAbs)],
-    [c.Tpeak, Math.log((peak.pAbs * grow) / pRelAbs)],
-  ];
-  return findCrossing(h, known, Tlo, T_SEARCH_MAX, 0.005);
 }

@@ -11,7 +11,8 @@
  * checked against reference bubble pressures in the tests.
  */
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
-import { findCrossing, ProductModel, type State } from './model.js';
+import { ProductModel, type State } from './model.js';
+import { saturationTemperature } from './search.js';
 import type { DiagnosisResult } from './types.js';
 import type { CleanInput } from './validate.js';
 
@@ -52,20 +53,7 @@ export function diagnose(model: ProductModel, c: CleanInput, now: State, lpGas: 
     causes.push('Vapour being drawn off faster than the liquid boils, pulling the pressure down for a while.');
     causes.push('Gauge error: a zero offset, a blocked or damaged gauge.');
   }
-  let temperatureForReading: number | null = null;
-  if (readingAbs > 0) {
-    const b = model.basics;
-    const Thi = Math.min(400, b.pure ? b.Tc - 0.5 : 400);
-    const f = (T: number) => {
-      const s = model.sat(T);
-      return s ? Math.log(s.p / readingAbs) : 1;
-    };
-    const s0 = model.sat(Math.min(c.T, Thi));
-    if (s0 && Thi > Tlo) {
-      const T = findCrossing(f, [[Math.min(c.T, Thi), Math.log(s0.p / readingAbs)]], Tlo, Thi, 0.01);
-      temperatureForReading = T !== null && model.sat(T) ? T : null;
-    }
-  }
+  const temperatureForReading = readingAbs > 0 ? saturationTemperature(model, readingAbs, [c.T, c.Tpeak], Tlo) : null;
   return {
     reading,
     expected,

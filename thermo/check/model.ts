@@ -53,6 +53,8 @@ export interface ProductBasics {
   Tc: number;
   /** Saturated liquid density at 60 °F, kg/m³. */
   rho60: number;
+  /** Critical density of the model, kg/m³ (blend: Kay's rule on molar volumes, as the core's closed tank uses). */
+  rhoc: number;
 }
 
 const basicsCache = new Map<string, ProductBasics>();
@@ -73,7 +75,8 @@ export function productBasics(product: Product): ProductBasics {
     }
     throw e;
   }
-  const b: ProductBasics = { label: r.label, pure: r.components.length === 1, Tmin: r.Tmin, Tc, rho60 };
+  const vc = r.components.reduce((sum, m, i) => sum + r.z[i]! * (m.molarMass / m.rhoc), 0);
+  const b: ProductBasics = { label: r.label, pure: r.components.length === 1, Tmin: r.Tmin, Tc, rho60, rhoc: r.molarMass / vc };
   if (basicsCache.size > 200) basicsCache.clear();
   basicsCache.set(key, b);
   return b;
@@ -142,42 +145,4 @@ export function bracketRoot(f: (x: number) => number, a: number, fa: number, b: 
     }
   }
   return Math.abs(fa) < Math.abs(fb) ? a : b;
-}
-
-/**
- * Temperature in [Tlo, Thi] where the increasing function f crosses zero, starting from known
- * points (at least one). Secant steps (overshooting a little, 0.5…40 K) until the sign changes,
- * then `bracketRoot`. Returns null when f keeps its sign up to the end of the range.
- */
-export function findCrossing(f: (T: number) => number, known: readonly (readonly [number, number])[], Tlo: number, Thi: number, tol: number): number | null {
-  const pts = known.filter(([T, v]) => T >= Tlo && T <= Thi && Number.isFinite(v)).slice().sort((p, q) => p[0] - q[0]);
-  if (pts.length === 0) return null;
-  for (const [T, v] of pts) if (v === 0) return T;
-  for (let i = 1; i < pts.length; i++) {
-    const [Ta, fa] = pts[i - 1]!;
-    const [Tb, fb] = pts[i]!;
-    if (Math.sign(fa) !== Math.sign(fb)) return bracketRoot(f, Ta, fa, Tb, fb, tol);
-  }
-  const up = pts[0]![1] < 0; // all the same sign: the root is above when f < 0
-  // The two known points nearest to the root side.
-  let [a, fa] = up ? pts[pts.length - 1]! : pts[0]!;
-  const second = up ? pts[pts.length - 2] : pts[1];
-  let prev: readonly [number, number] | undefined = second;
-  for (let i = 0; i < 40; i++) {
-    let step = up ? 10 : -10;
-    if (prev && prev[1] !== fa && prev[0] !== a) {
-      const slope = (fa - prev[1]) / (a - prev[0]);
-      if (slope > 0) step = (-fa / slope) * 1.15;
-    }
-    step = Math.sign(step || (up ? 1 : -1)) * Math.min(40, Math.max(0.5, Math.abs(step)));
-    const b = up ? Math.min(Thi, a + step) : Math.max(Tlo, a + step);
-    if (b === a) return null;
-    const fb = f(b);
-    if (fb === 0) return b;
-    if (Math.sign(fb) !== Math.sign(fa)) return bracketRoot(f, a, fa, b, fb, tol);
-    prev = [a, fa];
-    a = b;
-    fa = fb;
-  }
-  return null;
 }

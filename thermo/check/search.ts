@@ -1,0 +1,147 @@
+/**
+ * Temperatures the check solves for, each by a bracketed secant in a variable in which the
+ * function is nearly straight, so a handful of core evaluations suffice:
+ *
+ * - saturation temperature for a pressure: ln p against 1/T (Clausius–Clapeyron);
+ * - liquid-full temperature: the saturated liquid density falls to the overall density ρ.
+ *   Near the critical point ρL − ρc ∝ (Tc − T)^β with β ≈ 1/3, so y = (ρL − ρc)³ is nearly
+ *   straight in T; beyond the last saturation state y = 0 (ρL has met ρc). With ρ ≤ ρc the
+ *   liquid never fills the tank (it boils away instead): null.
+ * - relief temperature: on the saturation curve while the tank is two-phase, else the
+ *   closed-tank pressure (liquid-full or supercritical branch).
+ * All stop at 0.005 K or better, far inside the ±1 °F the results are shown to.
+ */
+import { bracketRoot, type ProductModel } from './model.js';
+
+/** Highest temperature searched, K. */
+export const T_SEARCH_MAX = 400;
+
+/** Upper end of the saturation curve searched: just below Tc for a pure fluid, else T_SEARCH_MAX (a blend's bubble points end where the core says). */
+export function satTop(model: ProductModel): number {
+  const b = model.basics;
+  return Math.min(T_SEARCH_MAX, b.pure ? b.Tc - 0.5 : T_SEARCH_MAX);
+}
+
+/**
+ * Secant search on an increasing function f(x) from known points, with bracketing; f returns
+ * null where it is undefined (treated as "above the root" — used beyond the saturation curve).
+ */
+function solveIncreasing(f: (x: number) => number | null, hints: readonly (readonly [number, number])[], lo: number, hi: number, tol: number): number | null {
+  const pts = hints.filter(([x, v]) => x >= lo && x <= hi && Number.isFinite(v)).slice().sort((a, b) => a[0] - b[0]);
+  let below: [number, number] | null = null; // f < 0
+  let above: [number, number] | null = null; // f > 0 (or undefined: value +Infinity)
+  for (const [x, v] of pts) {
+    if (v === 0) return x;
+    if (v < 0) below = !below || x > below[0] ? [x, v] : below;
+    else if (!above || x < above[0]) above = [x, v];
+  }
+  let last: [number, number] | null = pts.length >= 2 ? [pts[pts.length - 2]![0], pts[pts.length - 2]![1]] : null;
+  for (let i = 0; i < 60; i++) {
+    if (below && above && Number.isFinite(above[1])) {
+      const fx = (x: number) => {
+        const v = f(x);
+        return v === null ? Math.abs(above![1]) : v;
+      };
+      return bracketRoot(fx, below[0], below[1], above[0], above[1], tol);
+    }
+    if (below && above && above[0] - below[0] < tol) return below[0];
+    let x: number;
+    if (below && above) x = 0.5 * (below[0] + above[0]); // upper end undefined: bisect until a value is found
+    else {
+      const ref = below ?? above!;
+      let step = below ? 10 : -10;
+      if (last && last[0] !== ref[0]) {
+        const slope = (ref[1] - last[1]) / (ref[0] - last[0]);
+        if (slope > 0) step = (-ref[1] / slope) * 1.1;
+      }
+      step = Math.sign(step) * Math.min(60, Math.max(0.2, Math.abs(step)));
+      x = Math.min(hi, Math.max(lo, ref[0] + step));
+      if (x === ref[0]) return null;
+      last = [ref[0], ref[1]];
+    }
+    const v = f(x);
+    if (v === null) above = !above || x < above[0] ? [x, Infinity] : above;
+    else if (v === 0) return x;
+    else if (v < 0) below = [x, v];
+    else above = [x, v];
+  }
+  return null;
+}
+
+/** Temperature at which the saturation (bubble) pressure equals pAbs, K, or null outside the curve. */
+export function saturationTemperature(model: ProductModel, pAbs: number, hintsT: readonly number[], Tlo: number): number | null {
+  const Thi = satTop(model);
+  if (Thi <= Tlo) return null;
+  // Increasing in −1/T: x = −1/T, y = ln(p/pAbs).
+  const f = (x: number) => {
+    const s = model.sat(-1 / x);
+    return s ? Math.log(s.p / pAbs) : null;
+  };
+  const hints: [number, number][] = [];
+  for (const T of hintsT) {
+    if (T < Tlo || T > Thi) continue;
+    const s = model.sat(T);
+    if (s) hints.push([-1 / T, Math.log(s.p / pAbs)]);
+  }
+  if (hints.length === 0) {
+    const s = model.sat(Tlo);
+    if (!s) return null;
+    hints.push([-1 / Tlo, Math.log(s.p / pAbs)]);
+  }
+  const x = solveIncreasing(f, hints, -1 / Tlo, -1 / Thi, 1e-8);
+  if (x === null) return null;
+  const T = -1 / x;
+  return model.sat(T) ? T : null;
+}
+
+/** Temperature at which a closed tank of overall density rho becomes liquid-full, K, or null. */
+export function liquidFullTemperature(model: ProductModel, rho: number, hintsT: readonly number[], Tlo: number): number | null {
+  const rhoc = model.basics.rhoc;
+  if (!(rho > rhoc)) return null;
+  const Thi = satTop(model);
+  if (Thi <= Tlo) return null;
+  const target = (rho - rhoc) ** 3;
+  // Increasing in T: target − (ρL − ρc)³; beyond the curve ρL = ρc.
+  const y = (T: number) => {
+    const s = model.sat(T);
+    const d = s ? Math.max(0, s.rhoL - rhoc) : 0;
+    return target - d ** 3;
+  };
+  const hints: [number, number][] = [];
+  for (const T of hintsT) if (T >= Tlo && T <= Thi) hints.push([T, y(T)]);
+  if (hints.length === 0) hints.push([Tlo, y(Tlo)]);
+  const T = solveIncreasing(y, hints, Tlo, Thi, 0.002);
+  if (T === null) return null;
+  const s = model.sat(T);
+  // Only a crossing on the saturation curve is a liquid-full state.
+  return s && Math.abs(s.rhoL - rho) <= 0.01 * rho ? T : null;
+}
+
+/**
+ * Temperature at which the closed-tank pressure times `grow` reaches pReliefAbs, K, or null
+ * below T_SEARCH_MAX. Two-phase part on the saturation curve, then the single-phase branch.
+ */
+export function reliefTemperature(
+  model: ProductModel,
+  rho: number,
+  pReliefAbs: number,
+  grow: number,
+  hintsT: readonly number[],
+  Tlo: number,
+  Tfull: number | null,
+): number | null {
+  const pSat = pReliefAbs / grow;
+  const Ts = saturationTemperature(model, pSat, hintsT, Tlo);
+  // Reached while still two-phase: the saturation answer stands. (Tfull is null when the tank never fills.)
+  if (Ts !== null && (Tfull === null || Ts <= Tfull)) {
+    // A nearly empty tank can turn vapour-only first; check the state there.
+    const st = model.state(Ts, rho);
+    if (st.phase === 'two-phase') return Ts;
+  }
+  // Otherwise follow the closed-tank pressure from where the two-phase part ends.
+  const start = Tfull !== null ? Tfull : Ts !== null ? Ts : Math.max(Tlo, ...hintsT.filter((T) => T <= T_SEARCH_MAX));
+  const h = (T: number) => Math.log((model.state(T, rho).pAbs * grow) / pReliefAbs);
+  const h0 = h(start);
+  if (h0 >= 0) return start;
+  return solveIncreasing(h, [[start, h0]], start, T_SEARCH_MAX, 0.002);
+}
