@@ -10,7 +10,9 @@ export class InputError extends Error {
 
   constructor(field: string, validRange: string, got?: unknown) {
     const shown =
-      got === undefined ? '' : ` (got ${typeof got === 'number' ? formatNumber(got) : JSON.stringify(got)})`;
+      got === undefined
+        ? ''
+        : ` (got ${typeof got === 'number' ? formatNumber(got) : JSON.stringify(got)})`;
     super(`${field} must be ${validRange}${shown}`);
     this.name = 'InputError';
     this.field = field;
@@ -27,7 +29,9 @@ export class ConvergenceError extends Error {
   readonly iterations: number;
   readonly residual: number;
   constructor(solver: string, reason: string, iterations: number, residual: number) {
-    super(`${solver} did not converge: ${reason} (after ${iterations} iterations, residual ${formatNumber(residual)})`);
+    super(
+      `${solver} did not converge: ${reason} (after ${iterations} iterations, residual ${formatNumber(residual)})`,
+    );
     this.name = 'ConvergenceError';
     this.solver = solver;
     this.iterations = iterations;
@@ -38,7 +42,9 @@ export class ConvergenceError extends Error {
 function formatNumber(x: number): string {
   if (Number.isNaN(x)) return 'not a number';
   if (!Number.isFinite(x)) return x > 0 ? 'infinity' : '-infinity';
-  return Math.abs(x) >= 1e-3 && Math.abs(x) < 1e7 ? String(Number(x.toPrecision(6))) : x.toExponential(4);
+  return Math.abs(x) >= 1e-3 && Math.abs(x) < 1e7
+    ? String(Number(x.toPrecision(6)))
+    : x.toExponential(4);
 }
 
 /** Throws unless `x` is a finite number. */

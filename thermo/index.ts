@@ -1,6 +1,21 @@
 /** The EOS core's public surface. SI units: K, Pa (absolute), kg, m³, mol. */
-export { listFluids, saturation, liquidDensity, closedTank, criticalTemperature, maxDensity, dewPoint, flash } from './api.js';
-export type { FluidSummary, SaturationState, ClosedTankResult, DewState, FlashState } from './api.js';
+export {
+  listFluids,
+  saturation,
+  liquidDensity,
+  closedTank,
+  criticalTemperature,
+  maxDensity,
+  dewPoint,
+  flash,
+} from './api.js';
+export type {
+  FluidSummary,
+  SaturationState,
+  ClosedTankResult,
+  DewState,
+  FlashState,
+} from './api.js';
 export type { Product, CustomFluid, BlendComponent, ModelOptions } from './product.js';
 export type { Phase } from './solvers/closedTank.js';
 export type { ModelId } from './eos/model.js';

@@ -54,7 +54,12 @@ const KNOWN_IDS = () => FLUIDS.map((f) => f.id).join(', ');
 
 export function resolveModel(options: ModelOptions | undefined): ModelId {
   const model = options?.model ?? 'tuned';
-  if (!MODEL_IDS.includes(model)) throw new InputError('options.model', `one of ${MODEL_IDS.map((m) => `'${m}'`).join(', ')}`, model);
+  if (!MODEL_IDS.includes(model))
+    throw new InputError(
+      'options.model',
+      `one of ${MODEL_IDS.map((m) => `'${m}'`).join(', ')}`,
+      model,
+    );
   return model;
 }
 
@@ -67,7 +72,12 @@ export function resolveProduct(product: Product, options?: ModelOptions): Resolv
     const hit = cache.get(key);
     if (hit) return hit;
     const f = fluidById(product);
-    if (!f) throw new InputError('product', `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`, product);
+    if (!f)
+      throw new InputError(
+        'product',
+        `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`,
+        product,
+      );
     const cm = componentModel(f, model);
     const r: ResolvedProduct = {
       label: f.name,
@@ -82,7 +92,11 @@ export function resolveProduct(product: Product, options?: ModelOptions): Resolv
     return r;
   }
   if (product === null || typeof product !== 'object') {
-    throw new InputError('product', `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`, product);
+    throw new InputError(
+      'product',
+      `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`,
+      product,
+    );
   }
   if ('custom' in product) return resolveCustom(product.custom, model);
   if ('components' in product) {
@@ -103,11 +117,16 @@ export function resolveProduct(product: Product, options?: ModelOptions): Resolv
     }
     return r;
   }
-  throw new InputError('product', 'a fluid id, { components: [...] } or { custom: {...} }', product);
+  throw new InputError(
+    'product',
+    'a fluid id, { components: [...] } or { custom: {...} }',
+    product,
+  );
 }
 
 function resolveCustom(c: CustomFluid, model: ModelId): ResolvedProduct {
-  if (c === null || typeof c !== 'object') throw new InputError('product.custom', 'an object { name, molarMass, Tc, Pc, omega }', c);
+  if (c === null || typeof c !== 'object')
+    throw new InputError('product.custom', 'an object { name, molarMass, Tc, Pc, omega }', c);
   const check = (field: keyof CustomFluid, lo: number, hi: number, unit: string) => {
     const x = c[field];
     if (typeof x !== 'number' || !Number.isFinite(x) || x < lo || x > hi) {
@@ -118,8 +137,12 @@ function resolveCustom(c: CustomFluid, model: ModelId): ResolvedProduct {
   check('Tc', 5, 1000, 'K');
   check('Pc', 1e5, 1e8, 'Pa');
   check('omega', -0.4, 1.5, '(acentric factor)');
-  if (typeof c.name !== 'string' || c.name.trim() === '') throw new InputError('product.custom.name', 'a non-empty name', c.name);
-  const cm = componentModel({ id: `custom:${c.name}`, molarMass: c.molarMass, Tc: c.Tc, pc: c.Pc, omega: c.omega }, model);
+  if (typeof c.name !== 'string' || c.name.trim() === '')
+    throw new InputError('product.custom.name', 'a non-empty name', c.name);
+  const cm = componentModel(
+    { id: `custom:${c.name}`, molarMass: c.molarMass, Tc: c.Tc, pc: c.Pc, omega: c.omega },
+    model,
+  );
   return {
     label: c.name,
     components: [cm],
@@ -133,14 +156,22 @@ function resolveCustom(c: CustomFluid, model: ModelId): ResolvedProduct {
 }
 
 function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
-  if (!Array.isArray(list) || list.length === 0) throw new InputError('product.components', 'a non-empty array of { id, moleFraction }', list);
-  if (list.length > 12) throw new InputError('product.components', 'at most 12 components', list.length);
+  if (!Array.isArray(list) || list.length === 0)
+    throw new InputError('product.components', 'a non-empty array of { id, moleFraction }', list);
+  if (list.length > 12)
+    throw new InputError('product.components', 'at most 12 components', list.length);
   const seen = new Set<string>();
   let sum = 0;
   list.forEach((c, i) => {
     const f = c && typeof c === 'object' ? fluidById(c.id) : undefined;
-    if (!f) throw new InputError(`product.components[${i}].id`, `a listed fluid id (${KNOWN_IDS()})`, c?.id);
-    if (seen.has(c.id)) throw new InputError(`product.components[${i}].id`, 'an id not already in the blend', c.id);
+    if (!f)
+      throw new InputError(
+        `product.components[${i}].id`,
+        `a listed fluid id (${KNOWN_IDS()})`,
+        c?.id,
+      );
+    if (seen.has(c.id))
+      throw new InputError(`product.components[${i}].id`, 'an id not already in the blend', c.id);
     seen.add(c.id);
     const x = c.moleFraction;
     // −1e-9 tolerates the rounding of a caller's own arithmetic (such a fraction counts as 0).
@@ -149,14 +180,23 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
     }
     sum += Math.max(0, x);
   });
-  if (Math.abs(sum - 1) > 1e-6) throw new InputError('product.components[].moleFraction', 'fractions that sum to 1 (within 1e-6)', sum);
+  if (Math.abs(sum - 1) > 1e-6)
+    throw new InputError(
+      'product.components[].moleFraction',
+      'fractions that sum to 1 (within 1e-6)',
+      sum,
+    );
   const kept = list.filter((c) => c.moleFraction > 0);
   const fluids = kept.map((c) => fluidById(c.id)!);
   const components = fluids.map((f) => componentModel(f, model));
   const z = kept.map((c) => c.moleFraction / sum);
-  const kij = fluids.map((fi) => fluids.map((fj) => (fi === fj ? 0 : interactionParameter(fi.id, fj.id, model))));
+  const kij = fluids.map((fi) =>
+    fluids.map((fj) => (fi === fj ? 0 : interactionParameter(fi.id, fj.id, model))),
+  );
   return {
-    label: kept.map((c, i) => `${fluids[i]!.name} ${(c.moleFraction * 100).toFixed(1)} %`).join(' + '),
+    label: kept
+      .map((c, i) => `${fluids[i]!.name} ${(c.moleFraction * 100).toFixed(1)} %`)
+      .join(' + '),
     components,
     z,
     kij,

@@ -65,12 +65,17 @@ export function levenbergMarquardt(
       return rq.map((x, i) => (x - r[i]!) / h);
     });
     const n = p.length;
-    const JTJ = Array.from({ length: n }, (_, a) => Array.from({ length: n }, (_, b) => J[a]!.reduce((s, x, i) => s + x * J[b]![i]!, 0)));
+    const JTJ = Array.from({ length: n }, (_, a) =>
+      Array.from({ length: n }, (_, b) => J[a]!.reduce((s, x, i) => s + x * J[b]![i]!, 0)),
+    );
     const JTr = Array.from({ length: n }, (_, a) => J[a]!.reduce((s, x, i) => s + x * r[i]!, 0));
     let improved = false;
     for (let tries = 0; tries < 20; tries++) {
       const M = JTJ.map((row, a) => row.map((x, b) => (a === b ? x * (1 + lambda) + 1e-30 : x)));
-      const step = solve(M, JTr.map((x) => -x));
+      const step = solve(
+        M,
+        JTr.map((x) => -x),
+      );
       const q = p.map((x, k) => x + step[k]!);
       let rq: number[];
       try {

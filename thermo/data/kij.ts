@@ -21,7 +21,8 @@ interface PairEntry {
   readonly source: string;
 }
 
-const CHECKED_ZERO = 'k_ij = 0 checked against test/reference/bubble.csv (GERG-2008), see file header';
+const CHECKED_ZERO =
+  'k_ij = 0 checked against test/reference/bubble.csv (GERG-2008), see file header';
 
 export const PAIRS: readonly PairEntry[] = [
   { a: 'propane', b: 'n-butane', tuned: 0, textbook: 0, source: CHECKED_ZERO },

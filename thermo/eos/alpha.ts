@@ -38,7 +38,12 @@ export function mSoave1972(omega: number): number {
  *   α = [1 + c1·x + c2·x² + c3·x³]², x = 1 − √Tr, for Tr < 1;
  *   α = [1 + c1·x]² above Tc (the authors' supercritical branch), continuous with slope at Tc.
  */
-export function mathiasCopemanAlpha(Tc_K: number, c1: number, c2: number, c3: number): AlphaFunction {
+export function mathiasCopemanAlpha(
+  Tc_K: number,
+  c1: number,
+  c2: number,
+  c3: number,
+): AlphaFunction {
   return (T_K) => {
     const sr = Math.sqrt(T_K / Tc_K);
     const x = 1 - sr;

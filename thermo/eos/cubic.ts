@@ -30,7 +30,10 @@ export interface CubicFamily {
  *   −3Zc = (u − 1)·B − 1,  3Zc² = A + w·B² − u·B·(B + 1),  Zc³ = A·B + w·B²·(B + 1).
  * Eliminating Zc and A leaves one equation in B = Ωb, solved by bisection on (0, 1/3).
  */
-export function criticalConstants(delta1: number, delta2: number): { omegaA: number; omegaB: number; Zc: number } {
+export function criticalConstants(
+  delta1: number,
+  delta2: number,
+): { omegaA: number; omegaB: number; Zc: number } {
   const u = delta1 + delta2;
   const w = delta1 * delta2;
   const parts = (B: number) => {
@@ -154,12 +157,26 @@ export function lnPhiPure(fam: CubicFamily, Z: number, A: number, B: number): nu
  * Pressure from the cubic at temperature T (K) and molar volume v (m³/mol), in Pa.
  * a in Pa·m⁶/mol², b in m³/mol.
  */
-export function pressure(fam: CubicFamily, R: number, T: number, v: number, a: number, b: number): number {
+export function pressure(
+  fam: CubicFamily,
+  R: number,
+  T: number,
+  v: number,
+  a: number,
+  b: number,
+): number {
   return (R * T) / (v - b) - a / ((v + fam.delta1 * b) * (v + fam.delta2 * b));
 }
 
 /** ∂p/∂v at constant T, Pa·mol/m³. */
-export function dPdv(fam: CubicFamily, R: number, T: number, v: number, a: number, b: number): number {
+export function dPdv(
+  fam: CubicFamily,
+  R: number,
+  T: number,
+  v: number,
+  a: number,
+  b: number,
+): number {
   const d1 = v + fam.delta1 * b;
   const d2 = v + fam.delta2 * b;
   return (-R * T) / ((v - b) * (v - b)) + (a * (d1 + d2)) / (d1 * d1 * d2 * d2);

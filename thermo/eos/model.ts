@@ -6,7 +6,13 @@
 import { R_J_molK } from '../constants.js';
 import { fittedParams, type FittedParams } from '../data/fitted.js';
 import type { FluidConstants } from '../data/fluids.js';
-import { mathiasCopemanAlpha, mPengRobinson1976, mSoave1972, soaveAlpha, type AlphaFunction } from './alpha.js';
+import {
+  mathiasCopemanAlpha,
+  mPengRobinson1976,
+  mSoave1972,
+  soaveAlpha,
+  type AlphaFunction,
+} from './alpha.js';
 import { PENG_ROBINSON, SOAVE_REDLICH_KWONG, type CubicFamily } from './cubic.js';
 import { NO_CORRECTION, type VolumeCorrectionParams } from './volumeCorrection.js';
 

@@ -41,7 +41,12 @@ export interface VolumeCorrectionParams {
   readonly eps: readonly number[];
 }
 
-export const NO_CORRECTION: VolumeCorrectionParams = Object.freeze({ cc: 0, d: [], delta: 0, eps: [] });
+export const NO_CORRECTION: VolumeCorrectionParams = Object.freeze({
+  cc: 0,
+  d: [],
+  delta: 0,
+  eps: [],
+});
 
 /** The parameters a phase calculation needs at one temperature (for one component or mixed). */
 export interface CorrectionAtT {
@@ -55,10 +60,17 @@ export interface CorrectionAtT {
   vcCub: number;
 }
 
-export function correctionAtT(params: VolumeCorrectionParams, Tc: number, vcCub: number, T: number): CorrectionAtT {
+export function correctionAtT(
+  params: VolumeCorrectionParams,
+  Tc: number,
+  vcCub: number,
+  T: number,
+): CorrectionAtT {
   const tau = T < Tc ? 1 - T / Tc : 0;
   let c = params.cc;
-  if (tau > 0) for (let k = 0; k < params.d.length; k++) c += (params.d[k] ?? 0) * Math.pow(tau, SHIFT_EXPONENTS[k] ?? 1);
+  if (tau > 0)
+    for (let k = 0; k < params.d.length; k++)
+      c += (params.d[k] ?? 0) * Math.pow(tau, SHIFT_EXPONENTS[k] ?? 1);
   const e = params.eps;
   const eps = (e[0] ?? 0) + tau * ((e[1] ?? 0) + tau * (e[2] ?? 0));
   return { c, delta: params.delta, eps, vcCub };

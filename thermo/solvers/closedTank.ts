@@ -70,11 +70,37 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
       const rhoV = m.molarMass / sat.vV;
       if (rho >= rhoL) {
         const p = pressureForVolume(volumeAlong(m, T, 'liquid'), v, sat.p * 1.05, sat.p).p;
-        return { phase: 'liquid', p: Math.max(p, sat.p), liquidFraction: 1, rhoL: rho, rhoV: null, vapourMassFraction: 0, x: one, y: one, iterations: 0 };
+        return {
+          phase: 'liquid',
+          p: Math.max(p, sat.p),
+          liquidFraction: 1,
+          rhoL: rho,
+          rhoV: null,
+          vapourMassFraction: 0,
+          x: one,
+          y: one,
+          iterations: 0,
+        };
       }
       if (rho <= rhoV) {
-        const p = pressureForVolume(volumeAlong(m, T, 'vapour'), v, (R_J_molK * T) / v, undefined, sat.p).p;
-        return { phase: 'vapour', p: Math.min(p, sat.p), liquidFraction: 0, rhoL: null, rhoV: rho, vapourMassFraction: 1, x: one, y: one, iterations: 0 };
+        const p = pressureForVolume(
+          volumeAlong(m, T, 'vapour'),
+          v,
+          (R_J_molK * T) / v,
+          undefined,
+          sat.p,
+        ).p;
+        return {
+          phase: 'vapour',
+          p: Math.min(p, sat.p),
+          liquidFraction: 0,
+          rhoL: null,
+          rhoV: rho,
+          vapourMassFraction: 1,
+          x: one,
+          y: one,
+          iterations: 0,
+        };
       }
       const lf = (rho - rhoV) / (rhoL - rhoV);
       return {
@@ -115,7 +141,13 @@ function singlePhase(
 ): ClosedTankState {
   const choice = phase === 'liquid' ? 'liquid' : phase === 'vapour' ? 'vapour' : 'stable';
   const guess = bounds.pLo ? bounds.pLo * 1.05 : (R_J_molK * mx.T) / v;
-  const p = pressureForVolume((pp) => phaseAt(mx, pp, z, choice).v, v, guess, bounds.pLo, bounds.pHi).p;
+  const p = pressureForVolume(
+    (pp) => phaseAt(mx, pp, z, choice).v,
+    v,
+    guess,
+    bounds.pLo,
+    bounds.pHi,
+  ).p;
   const liquid = phase === 'liquid' || (phase === 'supercritical' && dense);
   return {
     phase,
@@ -136,7 +168,10 @@ function singlePhase(
  * last solution cuts its iterations by half or more. The answer does not depend on the start
  * (same convergence test), only the work does.
  */
-const warmStarts = new WeakMap<ResolvedProduct, { bubble?: { p: number; K: Float64Array }; dew?: { p: number; K: Float64Array } }>();
+const warmStarts = new WeakMap<
+  ResolvedProduct,
+  { bubble?: { p: number; K: Float64Array }; dew?: { p: number; K: Float64Array } }
+>();
 
 function saturationWarm(mx: MixtureAtT, product: ResolvedProduct, kind: 'bubble' | 'dew') {
   const memo = warmStarts.get(product) ?? {};
@@ -231,5 +266,10 @@ function closedTankBlend(product: ResolvedProduct, T: number, rho: number): Clos
       side = 1;
     }
   }
-  throw new ConvergenceError('closed-tank blend', `no pressure reproduces the overall density at T = ${T} K`, 100, Math.abs(best?.g ?? NaN));
+  throw new ConvergenceError(
+    'closed-tank blend',
+    `no pressure reproduces the overall density at T = ${T} K`,
+    100,
+    Math.abs(best?.g ?? NaN),
+  );
 }

@@ -48,7 +48,12 @@ export function pressureForVolume(
   if (Math.abs(fLo) < 1e-12) return { p: Math.exp(lo), iterations: evals };
   if (Math.abs(fHi) < 1e-12) return { p: Math.exp(hi), iterations: evals };
   if (!(fLo >= 0 && fHi <= 0)) {
-    throw new ConvergenceError('pressure from volume', 'could not bracket the pressure', evals, Math.min(Math.abs(fLo), Math.abs(fHi)));
+    throw new ConvergenceError(
+      'pressure from volume',
+      'could not bracket the pressure',
+      evals,
+      Math.min(Math.abs(fLo), Math.abs(fHi)),
+    );
   }
   let side = 0;
   for (let it = 1; it <= 200; it++) {

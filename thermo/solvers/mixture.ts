@@ -54,7 +54,8 @@ export function mixtureAtT(product: ResolvedProduct, T: number): MixtureAtT {
   });
   const aij = new Float64Array(n * n);
   for (let i = 0; i < n; i++)
-    for (let j = 0; j < n; j++) aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - (product.kij[i]?.[j] ?? 0));
+    for (let j = 0; j < n; j++)
+      aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - (product.kij[i]?.[j] ?? 0));
   return { T, n, aij, b, c, delta, eps, vcCub, M, product };
 }
 
@@ -73,7 +74,12 @@ export interface PhaseState {
 const family = (mx: MixtureAtT) => mx.product.components[0]!.family;
 
 /** Phase properties at (T, p) for composition x on the chosen root. */
-export function phaseAt(mx: MixtureAtT, p: number, x: ArrayLike<number>, choice: RootChoice): PhaseState {
+export function phaseAt(
+  mx: MixtureAtT,
+  p: number,
+  x: ArrayLike<number>,
+  choice: RootChoice,
+): PhaseState {
   const { n, aij, b, T } = mx;
   const fam = family(mx);
   let am = 0;
@@ -89,7 +95,8 @@ export function phaseAt(mx: MixtureAtT, p: number, x: ArrayLike<number>, choice:
   const A = (am * p) / (R * R * T * T);
   const B = (bm * p) / (R * T);
   const roots = compressibilityRoots(fam, A, B);
-  if (roots.length === 0) throw new ConvergenceError('cubic roots', 'no root above the co-volume', 0, NaN);
+  if (roots.length === 0)
+    throw new ConvergenceError('cubic roots', 'no root above the co-volume', 0, NaN);
   const zL = roots[0]!;
   const zV = roots[roots.length - 1]!;
   const lnPhiFor = (Z: number) => {
@@ -126,7 +133,13 @@ export function phaseAt(mx: MixtureAtT, p: number, x: ArrayLike<number>, choice:
 }
 
 /** The model's molar volume from the cubic's vCub for composition x (a_mix, b_mix given). */
-export function mixtureModelVolume(mx: MixtureAtT, x: ArrayLike<number>, vCub: number, am: number, bm: number): number {
+export function mixtureModelVolume(
+  mx: MixtureAtT,
+  x: ArrayLike<number>,
+  vCub: number,
+  am: number,
+  bm: number,
+): number {
   let c = 0;
   let delta = 0;
   let eps = 0;
@@ -144,7 +157,10 @@ export function mixtureModelVolume(mx: MixtureAtT, x: ArrayLike<number>, vCub: n
 
 /** Wilson's K-value estimate: K_i = (pc_i/p)·exp(5.373(1 + ω_i)(1 − Tc_i/T)). */
 export function wilsonK(product: ResolvedProduct, T: number, p: number): Float64Array {
-  return Float64Array.from(product.components, (m) => (m.pc / p) * Math.exp(5.373 * (1 + m.omega) * (1 - m.Tc / T)));
+  return Float64Array.from(
+    product.components,
+    (m) => (m.pc / p) * Math.exp(5.373 * (1 + m.omega) * (1 - m.Tc / T)),
+  );
 }
 
 export interface SaturationPoint extends SolverReport {
@@ -170,7 +186,12 @@ function norm1(x: Float64Array): number {
  * (bubble) or p ← p/Σ y_i/K_i (dew). Residual: |Σ − 1|. Rejects the trivial solution (phases
  * of equal composition), which means T is above the mixture's critical region.
  */
-export function saturationPressure(mx: MixtureAtT, z: ArrayLike<number>, kind: 'bubble' | 'dew', start?: { p: number; K: Float64Array }): SaturationPoint {
+export function saturationPressure(
+  mx: MixtureAtT,
+  z: ArrayLike<number>,
+  kind: 'bubble' | 'dew',
+  start?: { p: number; K: Float64Array },
+): SaturationPoint {
   const { n, T, product } = mx;
   let p: number;
   let K: Float64Array;
@@ -212,14 +233,20 @@ export function saturationPressure(mx: MixtureAtT, z: ArrayLike<number>, kind: '
     let S2 = 0;
     let trivial = 0;
     for (let i = 0; i < n; i++) {
-      const lnK = kind === 'bubble' ? bulk.lnPhi[i]! - inc.lnPhi[i]! : inc.lnPhi[i]! - bulk.lnPhi[i]!;
+      const lnK =
+        kind === 'bubble' ? bulk.lnPhi[i]! - inc.lnPhi[i]! : inc.lnPhi[i]! - bulk.lnPhi[i]!;
       K[i] = Math.exp(lnK);
       trivial += lnK * lnK;
       S2 += kind === 'bubble' ? K[i]! * z[i]! : z[i]! / K[i]!;
     }
     resid = Math.abs(S2 - 1);
     if (trivial < 1e-8) {
-      throw new ConvergenceError(`${kind} pressure`, `phases became identical at T = ${T} K (above the blend's critical region)`, it, resid);
+      throw new ConvergenceError(
+        `${kind} pressure`,
+        `phases became identical at T = ${T} K (above the blend's critical region)`,
+        it,
+        resid,
+      );
     }
     if (resid < 1e-11) {
       return {
@@ -238,7 +265,12 @@ export function saturationPressure(mx: MixtureAtT, z: ArrayLike<number>, kind: '
     p = Math.min(Math.max(pNew, p / 3), p * 3);
     if (!Number.isFinite(p) || p <= 0) break;
   }
-  throw new ConvergenceError(`${kind} pressure`, `no ${kind} point found at T = ${T} K`, 300, resid);
+  throw new ConvergenceError(
+    `${kind} pressure`,
+    `no ${kind} point found at T = ${T} K`,
+    300,
+    resid,
+  );
 }
 
 /**
@@ -301,7 +333,12 @@ export interface FlashResult extends SolverReport {
  * (or Wilson's). Residual: max |ln K_new − ln K|. The caller is responsible for knowing the
  * feed is two-phase at (T, p) (see `stabilityTest`), or for reading β at 0 or 1.
  */
-export function flashPT(mx: MixtureAtT, z: ArrayLike<number>, p: number, K0?: Float64Array): FlashResult {
+export function flashPT(
+  mx: MixtureAtT,
+  z: ArrayLike<number>,
+  p: number,
+  K0?: Float64Array,
+): FlashResult {
   const { n } = mx;
   const K = K0 ? Float64Array.from(K0) : wilsonK(mx.product, mx.T, p);
   const x = new Float64Array(n);
@@ -335,10 +372,26 @@ export function flashPT(mx: MixtureAtT, z: ArrayLike<number>, p: number, K0?: Fl
       K[i] = Math.exp(lnK);
     }
     if (resid < 1e-10) {
-      return { beta, x, y, vL, vV, K, converged: true, iterations: it, residual: resid, reason: 'converged' };
+      return {
+        beta,
+        x,
+        y,
+        vL,
+        vV,
+        K,
+        converged: true,
+        iterations: it,
+        residual: resid,
+        reason: 'converged',
+      };
     }
   }
-  throw new ConvergenceError('PT flash', `successive substitution stalled at T = ${mx.T} K, p = ${p} Pa`, 500, resid);
+  throw new ConvergenceError(
+    'PT flash',
+    `successive substitution stalled at T = ${mx.T} K, p = ${p} Pa`,
+    500,
+    resid,
+  );
 }
 
 /**
@@ -346,7 +399,11 @@ export function flashPT(mx: MixtureAtT, z: ArrayLike<number>, p: number, K0?: Fl
  * vapour-like and a liquid-like trial phase from Wilson's K. Returns true when the feed at
  * (T, p) is stable as one phase, with the K-values of the unstable trial phase otherwise.
  */
-export function stabilityTest(mx: MixtureAtT, z: ArrayLike<number>, p: number): { stable: boolean; K?: Float64Array } {
+export function stabilityTest(
+  mx: MixtureAtT,
+  z: ArrayLike<number>,
+  p: number,
+): { stable: boolean; K?: Float64Array } {
   const { n } = mx;
   if (n === 1) return { stable: true };
   const feed = phaseAt(mx, p, z, 'stable');
@@ -373,7 +430,9 @@ export function stabilityTest(mx: MixtureAtT, z: ArrayLike<number>, p: number): 
     let trivial = 0;
     for (let i = 0; i < n; i++) trivial += (W[i]! / sumW - z[i]!) ** 2;
     if (sumW > 1 + 1e-8 && trivial > 1e-8) {
-      const K = Float64Array.from(W, (v, i) => (vapourLike ? v / sumW / z[i]! : z[i]! / (v / sumW)));
+      const K = Float64Array.from(W, (v, i) =>
+        vapourLike ? v / sumW / z[i]! : z[i]! / (v / sumW),
+      );
       const tm = 1 - sumW;
       if (!best || tm < best.tm) best = { tm, K };
     }

@@ -23,11 +23,21 @@ export interface PureCoefficients {
 
 export function pureCoefficients(m: ComponentModel, T: number): PureCoefficients {
   const { alpha, dAlpha_dT } = m.alpha(T);
-  return { a: m.ac * alpha, da_dT: m.ac * dAlpha_dT, b: m.b, corr: correctionAtT(m.correction, m.Tc, m.vcCub, T) };
+  return {
+    a: m.ac * alpha,
+    da_dT: m.ac * dAlpha_dT,
+    b: m.b,
+    corr: correctionAtT(m.correction, m.Tc, m.vcCub, T),
+  };
 }
 
 /** The model's molar volume (m³/mol) from the cubic's molar volume vCub at T. */
-export function modelVolume(m: ComponentModel, k: PureCoefficients, T: number, vCub: number): number {
+export function modelVolume(
+  m: ComponentModel,
+  k: PureCoefficients,
+  T: number,
+  vCub: number,
+): number {
   const d = -((vCub * vCub) / (R * T)) * dPdv(m.family, R, T, vCub, k.a, k.b);
   return correctedVolume(k.corr, vCub, d);
 }
@@ -39,7 +49,13 @@ export type RootChoice = 'liquid' | 'vapour' | 'stable';
  * energy (lowest ln φ) where three exist. Where only one root exists it is returned whatever
  * branch was asked (the caller checks `roots` if that matters).
  */
-export function pureZ(m: ComponentModel, k: PureCoefficients, T: number, p: number, choice: RootChoice) {
+export function pureZ(
+  m: ComponentModel,
+  k: PureCoefficients,
+  T: number,
+  p: number,
+  choice: RootChoice,
+) {
   const A = (k.a * p) / (R * R * T * T);
   const B = (k.b * p) / (R * T);
   const roots = compressibilityRoots(m.family, A, B);
@@ -133,14 +149,25 @@ export function pureSaturation(m: ComponentModel, T: number, pGuess?: number): P
     if (Number.isFinite(lo) && hi - lo < 1e-14) break;
     lnP = next;
   }
-  throw new ConvergenceError('pure saturation', `no equal-fugacity pressure found at T = ${T} K`, 200, Math.abs(g));
+  throw new ConvergenceError(
+    'pure saturation',
+    `no equal-fugacity pressure found at T = ${T} K`,
+    200,
+    Math.abs(g),
+  );
 }
 
 /**
  * Residual molar enthalpy h − h_ig = R·T·(Z − 1) + (T·da/dT − a)/b · L, J/mol,
  * with L = ln((Z + δ1·B)/(Z + δ2·B))/(δ1 − δ2).
  */
-export function residualEnthalpy(m: ComponentModel, k: PureCoefficients, T: number, Z: number, B: number): number {
+export function residualEnthalpy(
+  m: ComponentModel,
+  k: PureCoefficients,
+  T: number,
+  Z: number,
+  B: number,
+): number {
   return R * T * (Z - 1) + ((T * k.da_dT - k.a) / k.b) * logTerm(m.family, Z, B);
 }
 
@@ -150,7 +177,11 @@ export function pureVolume(m: ComponentModel, T: number, p: number, choice: Root
 }
 
 /** p ↦ the model's molar volume (m³/mol) along one branch of the isotherm T. */
-export function volumeAlong(m: ComponentModel, T: number, choice: RootChoice): (p: number) => number {
+export function volumeAlong(
+  m: ComponentModel,
+  T: number,
+  choice: RootChoice,
+): (p: number) => number {
   const k = pureCoefficients(m, T);
   return (p) => {
     const z = pureZ(m, k, T, p, choice);
@@ -159,6 +190,11 @@ export function volumeAlong(m: ComponentModel, T: number, choice: RootChoice): (
 }
 
 /** Pressure of the cubic at T and the cubic's molar volume vCub, Pa. */
-export function cubicPressure(m: ComponentModel, k: PureCoefficients, T: number, vCub: number): number {
+export function cubicPressure(
+  m: ComponentModel,
+  k: PureCoefficients,
+  T: number,
+  vCub: number,
+): number {
   return pressure(m.family, R, T, vCub, k.a, k.b);
 }
