@@ -76,7 +76,8 @@ export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] 
   // --- Fill limit. ---
   const fl = r.fillLimit;
   const bind = fl.limits.find((l) => l.id === fl.binding);
-  if (fl.roomLeftMass < 0) {
+  // The limit is rounded down to 0.01 kg: contents exactly at the rule's figure are not "over".
+  if (r.contents.totalMass - fl.maxMass > 0.01) {
     add('warning', 'over-fill-limit', `The contents, ${fmtMass(r.contents.totalMass, 'up')}, are above the fill limit of ${fmtMass(fl.maxMass, 'down')} by ${fmtMass(-fl.roomLeftMass, 'up')}${bind ? ` (${bind.description}; ${bind.citation})` : ''}.`, -fl.roomLeftMass, 'mass');
   }
   if (!k.rule) {
