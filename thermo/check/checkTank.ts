@@ -131,7 +131,11 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
   const fillLimit = buildFillLimit(limits, totalMass, waterWeight, c, satNow, b.rho60, rule?.fillingDensity ?? null, sg);
 
   // --- Peak. ---
-  const peakState = c.Tpeak === c.T ? now : model.state(c.Tpeak, rho);
+  const peakState = c.Tpeak === c.T ? now : model.stateOrNull(c.Tpeak, rho);
+  if (!peakState) {
+    const Tmax = model.maxTemperatureFor(rho, c.T, c.Tpeak);
+    throw new InputError('peakTemperature', `at most ${Tmax.toFixed(1)} K for this fill: beyond it the model cannot hold this much product in the tank (it would be liquid-full long before)`, c.Tpeak);
+  }
   const peak = buildPeak(peakState, c);
 
   // --- Liquid-full and relief temperatures. ---

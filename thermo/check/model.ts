@@ -10,7 +10,7 @@
  * fraction = (ρ − ρV)/(ρL − ρV) with the bubble-point liquid and incipient-vapour densities.
  * Single-phase states of a blend still come from `closedTank`.
  */
-import { closedTank, criticalTemperature, saturation } from '../api.js';
+import { closedTank, criticalTemperature, maxDensity, saturation } from '../api.js';
 import { InputError } from '../errors.js';
 import { resolveProduct, type Product } from '../product.js';
 import { T_60F_K } from '../constants.js';
@@ -105,6 +105,29 @@ export class ProductModel {
     }
     this.sats.set(T, s);
     return s;
+  }
+
+  /**
+   * Closed-tank state at T, or null when the model cannot hold that much product in the tank at
+   * T (overall density above its close-packed limit — a liquid-full tank heated far past
+   * liquid-full).
+   */
+  stateOrNull(T: number, rho: number): State | null {
+    if (rho > maxDensity(this.product, T)) return null;
+    return this.state(T, rho);
+  }
+
+  /** Highest temperature in [Tlo, Thi] at which the model can hold overall density rho, K (bisection on the core's limit). */
+  maxTemperatureFor(rho: number, Tlo: number, Thi: number): number {
+    let lo = Tlo;
+    let hi = Thi;
+    if (rho <= maxDensity(this.product, hi)) return hi;
+    for (let i = 0; i < 50 && hi - lo > 1e-3; i++) {
+      const mid = 0.5 * (lo + hi);
+      if (rho <= maxDensity(this.product, mid)) lo = mid;
+      else hi = mid;
+    }
+    return lo;
   }
 
   /** Closed-tank state at T for overall density rho (kg/m³). */

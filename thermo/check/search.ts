@@ -140,8 +140,12 @@ export function reliefTemperature(
   }
   // Otherwise follow the closed-tank pressure from where the two-phase part ends.
   const start = Tfull !== null ? Tfull : Ts !== null ? Ts : Math.max(Tlo, ...hintsT.filter((T) => T <= T_SEARCH_MAX));
-  const h = (T: number) => Math.log((model.state(T, rho).pAbs * grow) / pReliefAbs);
+  // Where the model cannot hold the fill the pressure is beyond any relief setting: "above".
+  const h = (T: number) => {
+    const st = model.stateOrNull(T, rho);
+    return st ? Math.log((st.pAbs * grow) / pReliefAbs) : null;
+  };
   const h0 = h(start);
-  if (h0 >= 0) return start;
+  if (h0 === null || h0 >= 0) return start;
   return solveIncreasing(h, [[start, h0]], start, T_SEARCH_MAX, 0.002);
 }
