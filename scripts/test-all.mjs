@@ -2,9 +2,10 @@
 //
 //   1. typecheck   tsc -p tsconfig.json, tsc -p tsconfig.sw.json     (each: 1 passed or 1 failed)
 //   2. unit        vitest (test/thermo, test/unit), JSON report in .reports/unit.json
-//   3. build       vite build                                        (1 passed or 1 failed)
+//                  (1 and 2 run side by side: one core each)
+//   3. build       vite build into .reports/dist-<pid>               (1 passed or 1 failed)
 //   4. browser     web-test-runner in Chromium, counts in .reports/wtr.json
-//   5. e2e         vitest -c vitest.e2e.config.ts against dist/, JSON in .reports/e2e.json
+//   5. e2e         vitest -c vitest.e2e.config.ts against that build, JSON in .reports/e2e.json
 //
 // A stage that cannot report counts (a crash, no tests found) counts as 1 failed. e2e needs the
 // build, so it does not run when the build failed. LINT_RESULT=passed|failed (set by .ci/run, which
@@ -12,6 +13,7 @@
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 
+const startedAt = Date.now();
 const REPORTS = '.reports';
 mkdirSync(REPORTS, { recursive: true });
 const bin = (name) => `node_modules/.bin/${name}`;
@@ -27,6 +29,27 @@ function run(cmd, args, env = {}) {
     });
     child.on('close', (code, signal) =>
       resolve({ code: code ?? (signal ? 1 : 0), seconds: (Date.now() - started) / 1000 }),
+    );
+  });
+}
+
+/** Runs a command with its output captured, to print later (for a stage run alongside another). */
+function runQuiet(cmd, args) {
+  const started = Date.now();
+  return new Promise((resolve) => {
+    let output = '';
+    const child = spawn(cmd, args, { stdio: ['ignore', 'pipe', 'pipe'] });
+    child.stdout.on('data', (d) => (output += d));
+    child.stderr.on('data', (d) => (output += d));
+    child.on('error', (error) => {
+      resolve({
+        code: 1,
+        seconds: (Date.now() - started) / 1000,
+        output: `${cmd}: ${error.message}`,
+      });
+    });
+    child.on('close', (code, signal) =>
+      resolve({ code: code ?? (signal ? 1 : 0), seconds: (Date.now() - started) / 1000, output }),
     );
   });
 }
@@ -68,12 +91,14 @@ function header(title) {
   console.log(`\n━━ ${title} ${'━'.repeat(Math.max(0, 70 - title.length))}`);
 }
 
-// 1. Typecheck, app and worker (two configs: the worker has the WebWorker lib, not DOM).
-header('typecheck');
-record('typecheck (app)', await run(bin('tsc'), ['-p', 'tsconfig.json']));
-record('typecheck (worker)', await run(bin('tsc'), ['-p', 'tsconfig.sw.json']));
+// 1 + 2. Typecheck (app, then worker: two configs, the worker has the WebWorker lib, not DOM)
+// runs alongside the unit tests, which use the other core; its output is printed afterwards.
+const typecheck = (async () => {
+  const app = await runQuiet(bin('tsc'), ['-p', 'tsconfig.json']);
+  const worker = await runQuiet(bin('tsc'), ['-p', 'tsconfig.sw.json']);
+  return { app, worker };
+})();
 
-// 2. Unit tests (Node).
 header('unit tests (vitest)');
 {
   const file = `${REPORTS}/unit.json`;
@@ -87,9 +112,32 @@ header('unit tests (vitest)');
   record('unit', outcome, vitestCounts(file) ?? { passed: 0, failed: 1 });
 }
 
+header('typecheck (tsc)');
+{
+  const { app, worker } = await typecheck;
+  for (const [name, outcome] of [
+    ['typecheck (app)', app],
+    ['typecheck (worker)', worker],
+  ]) {
+    if (outcome.output.trim()) console.log(outcome.output.trimEnd());
+    console.log(`${name}: ${outcome.code === 0 ? 'ok' : 'FAILED'}`);
+    record(name, outcome);
+  }
+}
+
 // 3. Build.
 header('build (vite)');
-const build = await run(bin('vite'), ['build', '--logLevel', 'warn']);
+// Built into a folder of this run's own: others working in the same tree may rebuild dist/
+// while the e2e tests serve it.
+const outDir = `${REPORTS}/dist-${process.pid}`;
+const build = await run(bin('vite'), [
+  'build',
+  '--logLevel',
+  'warn',
+  '--outDir',
+  outDir,
+  '--emptyOutDir',
+]);
 record('build', build);
 
 // 4. Component tests in Chromium.
@@ -103,21 +151,26 @@ header('component tests (web-test-runner)');
 
 // 5. End-to-end against the build.
 header('end-to-end (vitest + playwright-core)');
-if (build.code === 0 && existsSync('dist/index.html')) {
+if (build.code === 0 && existsSync(`${outDir}/index.html`)) {
   const file = `${REPORTS}/e2e.json`;
   rmSync(file, { force: true });
-  const outcome = await run(bin('vitest'), [
-    'run',
-    '--config',
-    'vitest.e2e.config.ts',
-    '--reporter=default',
-    '--reporter=json',
-    `--outputFile.json=${file}`,
-  ]);
+  const outcome = await run(
+    bin('vitest'),
+    [
+      'run',
+      '--config',
+      'vitest.e2e.config.ts',
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${file}`,
+    ],
+    { E2E_DIST: outDir },
+  );
   record('e2e', outcome, vitestCounts(file) ?? { passed: 0, failed: 1 });
 } else {
   console.log('not run: the build failed');
 }
+rmSync(outDir, { recursive: true, force: true });
 
 const lint = process.env.LINT_RESULT;
 if (lint === 'passed' || lint === 'failed') {
@@ -140,7 +193,6 @@ for (const r of results) {
 }
 const passed = results.reduce((s, r) => s + r.passed, 0);
 const failed = results.reduce((s, r) => s + r.failed, 0);
-const seconds = results.reduce((s, r) => s + r.seconds, 0);
-console.log(`total time ${seconds.toFixed(1)} s`);
+console.log(`wall time ${((Date.now() - startedAt) / 1000).toFixed(1)} s`);
 console.log(`${passed} passed, ${failed} failed`);
 process.exitCode = failed === 0 ? 0 : 1;

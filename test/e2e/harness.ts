@@ -14,6 +14,7 @@
  */
 import { execSync } from 'node:child_process';
 import { existsSync, readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, afterEach, beforeAll, expect } from 'vitest';
 import { preview, type PreviewServer } from 'vite';
@@ -27,7 +28,8 @@ import {
 } from 'playwright-core';
 
 export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
-export const DIST = `${ROOT}dist/`;
+/** The build to serve: dist/, or E2E_DIST (scripts/test-all.mjs builds into a folder of its own). */
+export const DIST = resolve(ROOT, process.env.E2E_DIST ?? 'dist') + '/';
 
 /** A phone in portrait: the narrowest common width the app must fit without sideways scrolling. */
 export const PHONE: BrowserContextOptions = {
@@ -77,7 +79,7 @@ export async function startServer(): Promise<AppServer> {
     configFile: false,
     root: ROOT,
     logLevel: 'warn',
-    build: { outDir: 'dist' },
+    build: { outDir: DIST },
     preview: { host: '127.0.0.1', port: 0, strictPort: true },
     plugins: [
       {
