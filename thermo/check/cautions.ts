@@ -81,7 +81,7 @@ export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] 
     add('warning', 'over-fill-limit', `The contents, ${fmtMass(r.contents.totalMass, 'up')}, are above the fill limit of ${fmtMass(fl.maxMass, 'down')} by ${fmtMass(-fl.roomLeftMass, 'up')}${bind ? ` (${bind.description}; ${bind.citation})` : ''}.`, -fl.roomLeftMass, 'mass');
   }
   if (!k.rule) {
-    add('warning', 'no-filling-rule', `No filling-density table in this tool covers this product in a ${c.containerClass} container${r.product.lpGas ? ` (specific gravity ${r.product.specificGravity.toFixed(4)})` : ''}. The limit shown is ${bind ? 'only the not-liquid-full limit' : 'the present contents (no limit could be computed)'}; the applicable code decides the real limit.`, null, null);
+    add('warning', 'no-filling-rule', `No filling-density table in this tool covers this product in a ${c.containerClass} container${r.product.lpGas ? ` (specific gravity ${r.product.specificGravity.toFixed(4)})` : ''}. The limit shown is ${bind ? 'only the not-liquid-full limit' : 'the present contents (no limit could be computed)'}; the applicable code decides the real limit.`, fl.maxMass, 'mass');
   }
   for (const T of k.skippedRefs) {
     add('caution', 'no-liquid-at-reference', `At ${fmtT(T)} the product is above its critical temperature, so a not-liquid-full limit cannot be computed for that temperature; the pressure then depends on the fill alone.`, T, 'temperature');
@@ -140,7 +140,7 @@ export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] 
     add('notice', 'peak-below-now', `The forecast peak ${fmtT(c.Tpeak)} is colder than the liquid now ${fmtT(c.T)}: the peak figures describe a cooler tank.`, c.Tpeak, 'temperature');
   }
   if (!k.model.basics.pure) {
-    add('notice', 'blend-bubble-point', 'For a blend the two-phase pressure is taken as the bubble-point pressure of the whole contents, slightly above the real pressure.', null, null);
+    add('notice', 'blend-bubble-point', `For a blend the two-phase pressure is taken as the bubble-point pressure of the whole contents (${g(r.pressure, 'up')} now), slightly above the real pressure.`, r.pressure, 'gaugePressure');
   }
 
   out.sort((a, b) => RANK[a.level] - RANK[b.level]);

@@ -19,7 +19,7 @@ import type { CleanInput } from './validate.js';
 let propane: ProductModel | undefined;
 let butane: ProductModel | undefined;
 
-/** Propane mole fraction of a propane/n-butane liquid whose vapour pressure at T equals pAbs, or null outside 0…1. */
+/** Propane mole fraction of a propane/n-butane liquid whose vapour pressure at T equals pAbs (clamped to 0…1 within 0.02 of an end), or null outside. */
 export function propaneSplit(T: number, pAbs: number): number | null {
   propane ??= new ProductModel('propane');
   butane ??= new ProductModel('n-butane');
@@ -27,6 +27,9 @@ export function propaneSplit(T: number, pAbs: number): number | null {
   const s4 = butane.sat(T);
   if (!s3 || !s4) return null;
   const x = (pAbs - s4.p) / (s3.p - s4.p);
+  // Within 2 points of an end the reading fits the pure fluid at that end (gauge and model error).
+  if (x > 1 && x <= 1.02) return 1;
+  if (x < 0 && x >= -0.02) return 0;
   return x >= 0 && x <= 1 ? x : null;
 }
 
@@ -46,6 +49,7 @@ export function diagnose(model: ProductModel, c: CleanInput, now: State, lpGas: 
     causes.push('The liquid is warmer than the thermometer shows (sun on the shell, or a thermometer reading the air).');
     causes.push('Gauge error: a zero offset, a damaged gauge or one of the wrong range.');
   } else if (verdict === 'low') {
+    if (now.phase === 'liquid-full') causes.push('The tank is liquid-full: its pressure then depends steeply on the exact fill and temperature, so the expected figure is uncertain.');
     if (now.phase === 'vapour-only' || now.lf < 0.02) causes.push('There may be no liquid left: a tank holding vapour only shows less than the vapour pressure.');
     causes.push('The liquid is colder than the thermometer shows (a recent withdrawal or venting chills the liquid).');
     causes.push('Heavier components than the product entered (for example butane in propane).');
