@@ -49,7 +49,8 @@ export interface UnitIds {
 }
 export type Quantity = keyof UnitIds;
 
-export type PressureUnit = 'psig' | 'psia' | 'barg' | 'bara' | 'kPag' | 'kPaa' | 'MPag' | 'MPaa' | 'Pa';
+export type PressureUnit =
+  'psig' | 'psia' | 'barg' | 'bara' | 'kPag' | 'kPaa' | 'MPag' | 'MPaa' | 'Pa';
 export type PressureDifferenceUnit = 'psi' | 'bar' | 'kPa' | 'MPa' | 'Pa';
 export type TemperatureUnit = 'F' | 'C' | 'K';
 export type TemperatureDifferenceUnit = 'F' | 'C' | 'K';
@@ -150,7 +151,12 @@ const PRESSURE: Record<PressureUnit, { scale: number; gauge: boolean }> = {
   Pa: { scale: 1, gauge: false },
 };
 
-const LINEAR: { [Q in Exclude<Quantity, 'pressure' | 'gaugePressure' | 'temperature'>]: Record<UnitIds[Q], number> } = {
+const LINEAR: {
+  [Q in Exclude<Quantity, 'pressure' | 'gaugePressure' | 'temperature'>]: Record<
+    UnitIds[Q],
+    number
+  >;
+} = {
   pressureDifference: { psi: PSI_PA, bar: 1e5, kPa: 1e3, MPa: 1e6, Pa: 1 },
   temperatureDifference: { F: 5 / 9, C: 1, K: 1 },
   volume: { usgal: US_GAL_M3, impgal: IMP_GAL_M3, L: 1e-3, m3: 1, ft3: FT_M ** 3 },
@@ -169,7 +175,11 @@ function baro(options: ConvertOptions | undefined): number {
 }
 
 function unitError(quantity: Quantity, unit: unknown): InputError {
-  return new InputError('unit', `a ${quantity} unit: ${UNITS[quantity].map((u) => u.id).join(', ')}`, unit);
+  return new InputError(
+    'unit',
+    `a ${quantity} unit: ${UNITS[quantity].map((u) => u.id).join(', ')}`,
+    unit,
+  );
 }
 
 /**
@@ -177,8 +187,14 @@ function unitError(quantity: Quantity, unit: unknown): InputError {
  * Pa (`pressureDifference`), K, K (difference), m³, kg, kg/m³, m, fraction.
  * Throws `InputError` for a non-finite value or an unknown unit; it does not judge ranges.
  */
-export function toSI<Q extends Quantity>(quantity: Q, value: number, unit: UnitIds[Q], options?: ConvertOptions): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw new InputError('value', 'a finite number', value);
+export function toSI<Q extends Quantity>(
+  quantity: Q,
+  value: number,
+  unit: UnitIds[Q],
+  options?: ConvertOptions,
+): number {
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    throw new InputError('value', 'a finite number', value);
   if (quantity === 'pressure' || quantity === 'gaugePressure') {
     const u = PRESSURE[unit as PressureUnit];
     if (!u) throw unitError(quantity, unit);
@@ -199,8 +215,14 @@ export function toSI<Q extends Quantity>(quantity: Q, value: number, unit: UnitI
 }
 
 /** Converts an SI value (units as in `toSI`) to a user unit. */
-export function fromSI<Q extends Quantity>(quantity: Q, valueSI: number, unit: UnitIds[Q], options?: ConvertOptions): number {
-  if (typeof valueSI !== 'number' || !Number.isFinite(valueSI)) throw new InputError('value', 'a finite number', valueSI);
+export function fromSI<Q extends Quantity>(
+  quantity: Q,
+  valueSI: number,
+  unit: UnitIds[Q],
+  options?: ConvertOptions,
+): number {
+  if (typeof valueSI !== 'number' || !Number.isFinite(valueSI))
+    throw new InputError('value', 'a finite number', valueSI);
   if (quantity === 'pressure' || quantity === 'gaugePressure') {
     const u = PRESSURE[unit as PressureUnit];
     if (!u) throw unitError(quantity, unit);
@@ -251,7 +273,13 @@ export function formatQuantity<Q extends Quantity>(
   options: FormatOptions = {},
 ): string {
   const missing = options.missing ?? '–';
-  if (valueSI === null || valueSI === undefined || typeof valueSI !== 'number' || !Number.isFinite(valueSI)) return missing;
+  if (
+    valueSI === null ||
+    valueSI === undefined ||
+    typeof valueSI !== 'number' ||
+    !Number.isFinite(valueSI)
+  )
+    return missing;
   const x = fromSI(quantity, valueSI, unit, options);
   if (!Number.isFinite(x)) return missing;
   const decimals = options.decimals ?? defaultDecimals(x);
@@ -297,7 +325,12 @@ export function formatNumber(x: number, decimals: number, round: Rounding = 'nea
  * a site reading is better when there is one.
  */
 export function barometricPressureAtElevation(elevation_m: number): number {
-  if (typeof elevation_m !== 'number' || !Number.isFinite(elevation_m) || elevation_m < -500 || elevation_m > 11_000) {
+  if (
+    typeof elevation_m !== 'number' ||
+    !Number.isFinite(elevation_m) ||
+    elevation_m < -500 ||
+    elevation_m > 11_000
+  ) {
     throw new InputError('elevation', 'from −500 to 11 000 m', elevation_m);
   }
   const T0 = 288.15;

@@ -49,12 +49,21 @@ function tankInput(product: TankCheckInput['product'], i: number): TankCheckInpu
 export function benchCheck(): { name: string; medianMicros: number; target: string }[] {
   const blend = LPG_PRESETS.find((p) => p.id === 'hd5-limit')!.product;
   return [
-    { name: 'checkTank, pure propane, full check', medianMicros: timeIt((i) => tankInput('propane', i), 400, 100), target: '≤ 1000 µs' },
-    { name: 'checkTank, 4-component LP-gas blend, full check', medianMicros: timeIt((i) => tankInput(blend, i), 60, 15), target: '≤ 5000 µs' },
+    {
+      name: 'checkTank, pure propane, full check',
+      medianMicros: timeIt((i) => tankInput('propane', i), 400, 100),
+      target: '≤ 1000 µs',
+    },
+    {
+      name: 'checkTank, 4-component LP-gas blend, full check',
+      medianMicros: timeIt((i) => tankInput(blend, i), 60, 15),
+      target: '≤ 5000 µs',
+    },
   ];
 }
 
 // Run directly: `npx tsx scripts/bench/check.ts`
 if (import.meta.url === `file://${process.argv[1]}`) {
-  for (const r of benchCheck()) console.log(`${r.name}: ${r.medianMicros.toFixed(0)} µs (target ${r.target})`);
+  for (const r of benchCheck())
+    console.log(`${r.name}: ${r.medianMicros.toFixed(0)} µs (target ${r.target})`);
 }

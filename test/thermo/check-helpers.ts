@@ -17,7 +17,12 @@ export interface CheckInfo {
 }
 
 /** |actual − expected| ≤ atol (absolute tolerance, same unit as the values). */
-export function expectWithin(actual: number, expected: number, atol: number, info: CheckInfo): void {
+export function expectWithin(
+  actual: number,
+  expected: number,
+  atol: number,
+  info: CheckInfo,
+): void {
   const delta = actual - expected;
   const ok = Number.isFinite(actual) && Math.abs(delta) <= atol;
   expect(
@@ -28,5 +33,8 @@ export function expectWithin(actual: number, expected: number, atol: number, inf
 
 /** |actual/expected − 1| ≤ rtol. */
 export function expectRel(actual: number, expected: number, rtol: number, info: CheckInfo): void {
-  expectWithin(actual, expected, Math.abs(expected) * rtol, { ...info, why: `${info.why ? `${info.why}; ` : ''}rtol ${rtol}` });
+  expectWithin(actual, expected, Math.abs(expected) * rtol, {
+    ...info,
+    why: `${info.why ? `${info.why}; ` : ''}rtol ${rtol}`,
+  });
 }

@@ -11,8 +11,10 @@ function nonFinitePaths(x: unknown, path = 'result', out: string[] = []): string
   if (typeof x === 'number') {
     if (!Number.isFinite(x)) out.push(`${path} = ${x}`);
   } else if (Array.isArray(x)) x.forEach((v, i) => nonFinitePaths(v, `${path}[${i}]`, out));
-  else if (x && typeof x === 'object') for (const [k, v] of Object.entries(x)) nonFinitePaths(v, `${path}.${k}`, out);
-  else if (typeof x === 'string' && /NaN|Infinity|undefined/.test(x)) out.push(`${path} text: ${x}`);
+  else if (x && typeof x === 'object')
+    for (const [k, v] of Object.entries(x)) nonFinitePaths(v, `${path}.${k}`, out);
+  else if (typeof x === 'string' && /NaN|Infinity|undefined/.test(x))
+    out.push(`${path} text: ${x}`);
   return out;
 }
 
@@ -30,7 +32,9 @@ function run(input: unknown): void {
       tally.fields.set(e.field, (tally.fields.get(e.field) ?? 0) + 1);
       return;
     }
-    throw new Error(`input ${JSON.stringify(input)} threw ${(e as Error)?.name}: ${(e as Error)?.message}`);
+    throw new Error(
+      `input ${JSON.stringify(input)} threw ${(e as Error)?.name}: ${(e as Error)?.message}`,
+    );
   }
   const bad = nonFinitePaths(result);
   expect(bad, `input ${JSON.stringify(input)}`).toEqual([]);
@@ -42,15 +46,39 @@ const products = fc.oneof(
   { weight: 1, arbitrary: fc.constantFrom(...LPG_PRESETS.map((p) => p.product)) },
   {
     weight: 1,
-    arbitrary: fc.double({ min: 0, max: 1, noNaN: true }).map((x) => ({ components: [{ id: 'propane', moleFraction: x }, { id: 'n-butane', moleFraction: 1 - x }] })),
+    arbitrary: fc.double({ min: 0, max: 1, noNaN: true }).map((x) => ({
+      components: [
+        { id: 'propane', moleFraction: x },
+        { id: 'n-butane', moleFraction: 1 - x },
+      ],
+    })),
   },
-  { weight: 1, arbitrary: fc.record({ name: fc.constant('X'), molarMass: fc.double({ min: 0.02, max: 0.2, noNaN: true }), Tc: fc.double({ min: 250, max: 600, noNaN: true }), Pc: fc.double({ min: 2e6, max: 1e7, noNaN: true }), omega: fc.double({ min: 0, max: 0.5, noNaN: true }) }).map((custom) => ({ custom })) },
+  {
+    weight: 1,
+    arbitrary: fc
+      .record({
+        name: fc.constant('X'),
+        molarMass: fc.double({ min: 0.02, max: 0.2, noNaN: true }),
+        Tc: fc.double({ min: 250, max: 600, noNaN: true }),
+        Pc: fc.double({ min: 2e6, max: 1e7, noNaN: true }),
+        omega: fc.double({ min: 0, max: 0.5, noNaN: true }),
+      })
+      .map((custom) => ({ custom })),
+  },
 );
 
 const temp = fc.double({ min: 180, max: 400, noNaN: true });
 const shape = fc.oneof(
-  fc.record({ kind: fc.constant('horizontal-cylinder' as const), heads: fc.constantFrom('hemispherical' as const, 'ellipsoidal' as const, 'flat' as const), diameter: fc.double({ min: 0.3, max: 4, noNaN: true }), shellLength: fc.double({ min: 0.1, max: 20, noNaN: true }) }),
-  fc.record({ kind: fc.constant('sphere' as const), diameter: fc.double({ min: 1, max: 20, noNaN: true }) }),
+  fc.record({
+    kind: fc.constant('horizontal-cylinder' as const),
+    heads: fc.constantFrom('hemispherical' as const, 'ellipsoidal' as const, 'flat' as const),
+    diameter: fc.double({ min: 0.3, max: 4, noNaN: true }),
+    shellLength: fc.double({ min: 0.1, max: 20, noNaN: true }),
+  }),
+  fc.record({
+    kind: fc.constant('sphere' as const),
+    diameter: fc.double({ min: 1, max: 20, noNaN: true }),
+  }),
 );
 const contents = fc.oneof(
   fc.record({ gaugePercent: fc.double({ min: 0, max: 100, noNaN: true }) }),
@@ -67,7 +95,12 @@ const valid = fc.record(
         reliefSetPressure: fc.double({ min: 2e5, max: 2e7, noNaN: true }),
         placement: fc.constantFrom('aboveground' as const, 'underground' as const),
         insulated: fc.boolean(),
-        containerClass: fc.constantFrom('storage' as const, 'cylinder' as const, 'cargo' as const, 'portable' as const),
+        containerClass: fc.constantFrom(
+          'storage' as const,
+          'cylinder' as const,
+          'cargo' as const,
+          'portable' as const,
+        ),
         fixedDipTube: fc.boolean(),
         shape,
         minDesignMetalTemperature: fc.double({ min: 180, max: 370, noNaN: true }),
@@ -79,29 +112,72 @@ const valid = fc.record(
     liquidTemperature: temp,
     contents,
     gaugePressure: fc.double({ min: -9e4, max: 1e7, noNaN: true }),
-    pressureGauge: fc.record({ fullScale: fc.double({ min: 1e5, max: 3e7, noNaN: true }), accuracy: fc.double({ min: 0, max: 0.1, noNaN: true }) }, { requiredKeys: [] }),
+    pressureGauge: fc.record(
+      {
+        fullScale: fc.double({ min: 1e5, max: 3e7, noNaN: true }),
+        accuracy: fc.double({ min: 0, max: 0.1, noNaN: true }),
+      },
+      { requiredKeys: [] },
+    ),
     elevation: fc.double({ min: -400, max: 5000, noNaN: true }),
     peakTemperature: temp,
   },
   { requiredKeys: ['tank', 'product', 'liquidTemperature', 'contents', 'peakTemperature'] },
 );
 
-const junk = fc.oneof(fc.constant(Number.NaN), fc.constant(Infinity), fc.constant(-1), fc.constant(0), fc.constant(1e30), fc.constant('12'), fc.constant(null), fc.constant(undefined), fc.constant({}), fc.constant([]));
+const junk = fc.oneof(
+  fc.constant(Number.NaN),
+  fc.constant(Infinity),
+  fc.constant(-1),
+  fc.constant(0),
+  fc.constant(1e30),
+  fc.constant('12'),
+  fc.constant(null),
+  fc.constant(undefined),
+  fc.constant({}),
+  fc.constant([]),
+);
 
 describe('checkTank property', () => {
   it('checkTank on random valid input returns only finite numbers or an InputError', () => {
-    fc.assert(fc.property(valid, (input) => run(input)), { numRuns: 400, seed: 20261201 });
+    fc.assert(
+      fc.property(valid, (input) => run(input)),
+      { numRuns: 400, seed: 20261201 },
+    );
     // Most random valid inputs must reach a full result, or the property proves little.
-    expect(tally.ok, `results ${tally.ok}, input errors ${tally.input}: ${JSON.stringify([...tally.fields])}`).toBeGreaterThan(200);
+    expect(
+      tally.ok,
+      `results ${tally.ok}, input errors ${tally.input}: ${JSON.stringify([...tally.fields])}`,
+    ).toBeGreaterThan(200);
   });
 
   it('checkTank names only its own input fields in an InputError', () => {
-    const own = /^(input|tank|product|specificGravity|liquidTemperature|contents|gaugePressure|pressureGauge|barometricPressure|elevation|peakTemperature)\b/;
+    const own =
+      /^(input|tank|product|specificGravity|liquidTemperature|contents|gaugePressure|pressureGauge|barometricPressure|elevation|peakTemperature)\b/;
     for (const f of tally.fields.keys()) expect(f).toMatch(own);
   });
 
   it('checkTank on random damaged input throws only InputError', () => {
-    const paths = ['tank', 'tank.waterCapacity', 'tank.designPressure', 'tank.reliefSetPressure', 'tank.placement', 'tank.containerClass', 'tank.shape', 'tank.minDesignMetalTemperature', 'product', 'liquidTemperature', 'contents', 'contents.gaugePercent', 'gaugePressure', 'barometricPressure', 'elevation', 'peakTemperature', 'specificGravity', 'pressureGauge'];
+    const paths = [
+      'tank',
+      'tank.waterCapacity',
+      'tank.designPressure',
+      'tank.reliefSetPressure',
+      'tank.placement',
+      'tank.containerClass',
+      'tank.shape',
+      'tank.minDesignMetalTemperature',
+      'product',
+      'liquidTemperature',
+      'contents',
+      'contents.gaugePercent',
+      'gaugePressure',
+      'barometricPressure',
+      'elevation',
+      'peakTemperature',
+      'specificGravity',
+      'pressureGauge',
+    ];
     fc.assert(
       fc.property(valid, fc.constantFrom(...paths), junk, (input, path, value) => {
         const copy = structuredClone(input) as Record<string, unknown>;

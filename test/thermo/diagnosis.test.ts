@@ -25,12 +25,19 @@ describe('propaneSplit', () => {
     // Eng. Data 57, 3032) with the pure reference equations, test/reference/bubble.csv.
     // Tolerance 0.05 mole fraction: the split is an ideal-solution (Raoult) estimate; real
     // propane/n-butane bubble pressures lie a few percent below Raoult at 300–330 K.
-    const rows = readCsv(fileURLToPath(new URL('../reference/bubble.csv', import.meta.url))).filter((r) => Number(r.x_ethane) === 0);
+    const rows = readCsv(fileURLToPath(new URL('../reference/bubble.csv', import.meta.url))).filter(
+      (r) => Number(r.x_ethane) === 0,
+    );
     expect(rows.length).toBeGreaterThan(10);
     for (const r of rows) {
       const x = propaneSplit(Number(r.T_K), Number(r.p_bubble_Pa));
       expect(x).not.toBeNull();
-      expectWithin(x!, Number(r.x_propane), 0.05, { input: `${r.mixture} at ${r.T_K} K`, source: 'test/reference/bubble.csv (GERG-2008)', kind: 'published', why: 'ideal-solution estimate' });
+      expectWithin(x!, Number(r.x_propane), 0.05, {
+        input: `${r.mixture} at ${r.T_K} K`,
+        source: 'test/reference/bubble.csv (GERG-2008)',
+        kind: 'published',
+        why: 'ideal-solution estimate',
+      });
     }
   });
 });
@@ -42,11 +49,23 @@ describe('checkTank diagnosis', () => {
     expect(r.diagnosis!.verdict).toBe('fits');
     expect(r.diagnosis!.causes).toEqual([]);
     // identity: default band = 2 % of full scale (the design pressure) + 0.5 % of the absolute pressure
-    expectWithin(r.diagnosis!.tolerance, 0.02 * psig(250) + 0.005 * r.pressureAbsolute, 1e-6, { input: 'defaults', source: 'checkTank doc', kind: 'identity' });
+    expectWithin(r.diagnosis!.tolerance, 0.02 * psig(250) + 0.005 * r.pressureAbsolute, 1e-6, {
+      input: 'defaults',
+      source: 'checkTank doc',
+      kind: 'identity',
+    });
     // the reading's temperature is 80 °F within 0.5 °F (129.3 psig printed to 0.1 psi ≈ 0.05 °F; core ±0.5 % VP ≈ 0.4 °F)
-    expectWithin(fromSI('temperature', r.diagnosis!.temperatureForReading!, 'F'), 80, 0.5, { input: '129.3 psig', source: 'FACTS case 7 / saturation_properties.csv', kind: 'published' });
+    expectWithin(fromSI('temperature', r.diagnosis!.temperatureForReading!, 'F'), 80, 0.5, {
+      input: '129.3 psig',
+      source: 'FACTS case 7 / saturation_properties.csv',
+      kind: 'published',
+    });
     // identity: at pure propane's own pressure the split is all propane
-    expectWithin(r.diagnosis!.propaneFraction!, 1, 0.01, { input: '129.3 psig', source: 'definition', kind: 'identity' });
+    expectWithin(r.diagnosis!.propaneFraction!, 1, 0.01, {
+      input: '129.3 psig',
+      source: 'definition',
+      kind: 'identity',
+    });
   });
   it('checkTank calls a reading 20 psi high "high" and names non-condensable gas first', () => {
     const r = checkTank(input(150));
@@ -64,11 +83,20 @@ describe('checkTank diagnosis', () => {
     expect(r.cautions.find((c) => c.code === 'pressure-low')!.message).toMatch(/% propane/);
   });
   it('checkTank widens the band with a coarser gauge', () => {
-    const r = checkTank({ ...input(140), pressureGauge: { fullScale: psig(600), accuracy: 0.025 } });
+    const r = checkTank({
+      ...input(140),
+      pressureGauge: { fullScale: psig(600), accuracy: 0.025 },
+    });
     expect(r.diagnosis!.verdict).toBe('fits');
   });
   it('checkTank says a liquid-full tank may be why a reading is high', () => {
-    const r = checkTank(input(190, { contents: { netMass: 0.5 * toSI('volume', 500, 'usgal') * 997.95 }, liquidTemperature: F(100), peakTemperature: F(100) }));
+    const r = checkTank(
+      input(190, {
+        contents: { netMass: 0.5 * toSI('volume', 500, 'usgal') * 997.95 },
+        liquidTemperature: F(100),
+        peakTemperature: F(100),
+      }),
+    );
     expect(r.phase).toBe('liquid-full');
     expect(r.diagnosis!.causes.join(' ')).toMatch(/liquid-full/);
   });

@@ -48,10 +48,16 @@ describe('LP-gas filling-density tables', () => {
       const [table, idx] = col[r.container_class!]!;
       const lo = Number(r.sg_60F_min);
       const band = table.find((b) => Math.abs((b[0] as number) - lo) < 1e-9);
-      expect(band, `no band from ${lo} for ${r.container_class} (source ${r.regulation})`).toBeDefined();
+      expect(
+        band,
+        `no band from ${lo} for ${r.container_class} (source ${r.regulation})`,
+      ).toBeDefined();
       const hi = r.sg_60F_max === 'and over' ? null : Number(r.sg_60F_max);
       expect(band![1], `upper edge, ${r.container_class} ${lo}; source ${r.regulation}`).toBe(hi);
-      expect(band![idx], `filling density, ${r.container_class} ${lo}; source ${r.regulation}`).toBe(Number(r.max_filling_density_pct_of_water_weight));
+      expect(
+        band![idx],
+        `filling density, ${r.container_class} ${lo}; source ${r.regulation}`,
+      ).toBe(Number(r.max_filling_density_pct_of_water_weight));
       n++;
     }
     expect(n).toBe(13 * 3 + 20 * 2 + 32);
@@ -83,40 +89,91 @@ describe('fill limits by weight and volume (FACTS cases 1–5)', () => {
     specificGravity: 0.51,
     ...over,
   });
-  const maxLb = (c: RuleContext) => lb(fillingRule(c)!.fillingDensity * c.waterCapacity * WATER_FD_KG_M3);
+  const maxLb = (c: RuleContext) =>
+    lb(fillingRule(c)!.fillingDensity * c.waterCapacity * WATER_FD_KG_M3);
 
   it('maxLiquidVolumePercent reproduces the OSHA dip-tube example (case 1)', () => {
     // published: 29 CFR 1910.110(b)(19)(v)(d): 100 gal, SG 0.510, FD 42, VCF 1.031 → 79.8 gal ± 0.1
     // (the regulation rounds the divisor to 52.6; unrounded 79.88)
-    expectWithin(maxLiquidVolumePercent(42, 0.51, 1.031), 79.8, 0.1, { input: 'FD 42, SG 0.510, VCF 1.031', source: '29 CFR 1910.110(b)(19)(v)(d); FACTS case 1', kind: 'published' });
+    expectWithin(maxLiquidVolumePercent(42, 0.51, 1.031), 79.8, 0.1, {
+      input: 'FD 42, SG 0.510, VCF 1.031',
+      source: '29 CFR 1910.110(b)(19)(v)(d); FACTS case 1',
+      kind: 'published',
+    });
     // derived: 0.42 × 100 × 8.32828 = 349.8 lb; printed to 0.1 lb → ±0.05
-    expectWithin(maxLb(ctx({})), 349.8, 0.05, { input: '100 gal aboveground SG 0.510', source: 'Table H-27 + 173.315(a) Note 1; FACTS case 1', kind: 'published' });
+    expectWithin(maxLb(ctx({})), 349.8, 0.05, {
+      input: '100 gal aboveground SG 0.510',
+      source: 'Table H-27 + 173.315(a) Note 1; FACTS case 1',
+      kind: 'published',
+    });
     // published: via OSHA lb/gal 79.8 × 4.37 = 348.7 lb agrees with the FD route within 0.5 %
-    expectRel(79.8 * 4.37, maxLb(ctx({})), 0.005, { input: '79.8 gal × 4.37 lb/gal', source: 'FACTS case 1', kind: 'identity' });
+    expectRel(79.8 * 4.37, maxLb(ctx({})), 0.005, {
+      input: '79.8 gal × 4.37 lb/gal',
+      source: 'FACTS case 1',
+      kind: 'identity',
+    });
   });
 
   it('maxLiquidVolumePercent for the same tank underground (case 2)', () => {
     // derived from H-27/H-29: 4600/(0.510 × 1.016 × 100) = 88.78 gal ± 0.05; weight 383.1 lb (0.1 lb print → ±0.05)
-    expectWithin(maxLiquidVolumePercent(46, 0.51, 1.016), 88.78, 0.05, { input: 'FD 46, SG 0.510, VCF 1.016', source: 'FACTS case 2', kind: 'published' });
-    expectWithin(maxLb(ctx({ placement: 'underground' })), 383.1, 0.05, { input: '100 gal underground', source: 'FACTS case 2', kind: 'published' });
+    expectWithin(maxLiquidVolumePercent(46, 0.51, 1.016), 88.78, 0.05, {
+      input: 'FD 46, SG 0.510, VCF 1.016',
+      source: 'FACTS case 2',
+      kind: 'published',
+    });
+    expectWithin(maxLb(ctx({ placement: 'underground' })), 383.1, 0.05, {
+      input: '100 gal underground',
+      source: 'FACTS case 2',
+      kind: 'published',
+    });
   });
 
   it('the DOT cylinder dip-tube basis gives 79.83 % of volume (case 3)', () => {
     // derived from 173.304a(d)(4): 0.42 × 0.03051 ft³/lb × 62.300 lb/ft³ → 79.83 % ± 0.05
     const waterLbPerFt3 = fromSI('density', WATER_FD_KG_M3, 'lb/ft3');
-    expectWithin(0.42 * 0.03051 * waterLbPerFt3 * 100, 79.83, 0.05, { input: '42 %, 0.03051 ft³/lb', source: '49 CFR 173.304a(d)(4); FACTS case 3', kind: 'published' });
+    expectWithin(0.42 * 0.03051 * waterLbPerFt3 * 100, 79.83, 0.05, {
+      input: '42 %, 0.03051 ft³/lb',
+      source: '49 CFR 173.304a(d)(4); FACTS case 3',
+      kind: 'published',
+    });
   });
 
   it('fillingRule gives the weight limits of case 4 and the cargo dip-tube limit of case 5', () => {
     // derived, H-27 + 173.315 Note 1, FACTS case 4: ±0.5 lb as stated
     const gal = (g: number) => toSI('volume', g, 'usgal');
-    expectWithin(maxLb(ctx({ waterCapacity: gal(1000), specificGravity: 0.508 })), 3497.9, 0.5, { input: '1000 gal aboveground SG 0.508', source: 'FACTS case 4', kind: 'published' });
-    expectWithin(maxLb(ctx({ waterCapacity: gal(2000), specificGravity: 0.508 })), 7495.5, 0.5, { input: '2000 gal aboveground', source: 'FACTS case 4', kind: 'published' });
-    expectWithin(maxLb(ctx({ waterCapacity: gal(2000), specificGravity: 0.508, placement: 'underground' })), 7662.0, 0.5, { input: '2000 gal underground', source: 'FACTS case 4', kind: 'published' });
+    expectWithin(maxLb(ctx({ waterCapacity: gal(1000), specificGravity: 0.508 })), 3497.9, 0.5, {
+      input: '1000 gal aboveground SG 0.508',
+      source: 'FACTS case 4',
+      kind: 'published',
+    });
+    expectWithin(maxLb(ctx({ waterCapacity: gal(2000), specificGravity: 0.508 })), 7495.5, 0.5, {
+      input: '2000 gal aboveground',
+      source: 'FACTS case 4',
+      kind: 'published',
+    });
+    expectWithin(
+      maxLb(ctx({ waterCapacity: gal(2000), specificGravity: 0.508, placement: 'underground' })),
+      7662.0,
+      0.5,
+      { input: '2000 gal underground', source: 'FACTS case 4', kind: 'published' },
+    );
     // derived, 173.315(b) Note 1, FACTS case 5: 45 % × 0.97 = 43.65 % → 10,905.8 lb ± 1
-    const cargo = ctx({ waterCapacity: gal(3000), specificGravity: 0.508, containerClass: 'cargo', fixedDipTube: true });
-    expectWithin(fillingRule(cargo)!.fillingDensity * 100, 43.65, 1e-9, { input: 'cargo 3000 gal dip tube', source: 'FACTS case 5', kind: 'published' });
-    expectWithin(maxLb(cargo), 10905.8, 1, { input: 'cargo 3000 gal dip tube', source: 'FACTS case 5', kind: 'published' });
+    const cargo = ctx({
+      waterCapacity: gal(3000),
+      specificGravity: 0.508,
+      containerClass: 'cargo',
+      fixedDipTube: true,
+    });
+    expectWithin(fillingRule(cargo)!.fillingDensity * 100, 43.65, 1e-9, {
+      input: 'cargo 3000 gal dip tube',
+      source: 'FACTS case 5',
+      kind: 'published',
+    });
+    expectWithin(maxLb(cargo), 10905.8, 1, {
+      input: 'cargo 3000 gal dip tube',
+      source: 'FACTS case 5',
+      kind: 'published',
+    });
   });
 
   it('fillingRule picks the other gases’ table rows', () => {
@@ -137,8 +194,16 @@ describe('fill limits by weight and volume (FACTS cases 1–5)', () => {
 describe('pressure rules (FACTS cases 8, 9, 15–19)', () => {
   it('reliefRange gives 88 % (LP-gas) and 95 % (ammonia) lower bounds (cases 8, 9)', () => {
     // published: Table H-26; 1910.111(b)(9)(ii): 250 psig design → 220 / 237.5 psig
-    expectWithin(250 * reliefRange('lp-gas', 'asme-1950-and-later').min, 220, 1e-9, { input: '250 psig', source: 'Table H-26; FACTS case 8', kind: 'published' });
-    expectWithin(250 * reliefRange('ammonia', 'asme-1950-and-later').min, 237.5, 1e-9, { input: '250 psig', source: '1910.111(b)(9)(ii); FACTS case 9', kind: 'published' });
+    expectWithin(250 * reliefRange('lp-gas', 'asme-1950-and-later').min, 220, 1e-9, {
+      input: '250 psig',
+      source: 'Table H-26; FACTS case 8',
+      kind: 'published',
+    });
+    expectWithin(250 * reliefRange('ammonia', 'asme-1950-and-later').min, 237.5, 1e-9, {
+      input: '250 psig',
+      source: '1910.111(b)(9)(ii); FACTS case 9',
+      kind: 'published',
+    });
   });
 
   it('minCylinderServicePressure is 4/5 of the vapour pressure at 130 °F (case 15)', () => {
@@ -146,18 +211,31 @@ describe('pressure rules (FACTS cases 8, 9, 15–19)', () => {
     // (tolerance: FACTS; covers the core's ±0.5 % vapour pressure = ±1.4 psi at 273 psia)
     const vp = fromSI('pressure', saturation('propane', toSI('temperature', 130, 'F')).p, 'psig');
     const need = minCylinderServicePressure(vp);
-    expectWithin(need, 206.9, 1.5, { input: 'propane at 130 °F', source: '29 CFR 1910.110(c)(9) + saturation_properties.csv; FACTS case 15', kind: 'published' });
+    expectWithin(need, 206.9, 1.5, {
+      input: 'propane at 130 °F',
+      source: '29 CFR 1910.110(c)(9) + saturation_properties.csv; FACTS case 15',
+      kind: 'published',
+    });
     expect(240 >= need).toBe(true);
     expect(200 >= need).toBe(false);
   });
 
   it('containerTypeFor a 220 psig product is type 225, 281.25 psig (case 16)', () => {
     // published (derived from Table H-31 notes), exact
-    expect(containerTypeFor(220, 'asme-1950-and-later')).toEqual({ type: 225, minDesignPressure_psig: 281.25 });
+    expect(containerTypeFor(220, 'asme-1950-and-later')).toEqual({
+      type: 225,
+      minDesignPressure_psig: 281.25,
+    });
     // FACTS case 8 product check: propane 173.9 psig at 100 °F is within type 200's 215 psig (the least type is 175)
     expect(containerTypeFor(173.9, 'asme-1950-and-later').type).toBeLessThanOrEqual(200);
-    expect(containerTypeFor(215, 'asme-1950-and-later')).toEqual({ type: 200, minDesignPressure_psig: 250 });
-    expect(containerTypeFor(215, 'asme-1949-and-earlier')).toEqual({ type: 200, minDesignPressure_psig: 200 });
+    expect(containerTypeFor(215, 'asme-1950-and-later')).toEqual({
+      type: 200,
+      minDesignPressure_psig: 250,
+    });
+    expect(containerTypeFor(215, 'asme-1949-and-earlier')).toEqual({
+      type: 200,
+      minDesignPressure_psig: 200,
+    });
   });
 
   it('d1835PbMaxVapourPressure follows the printed formula and cap (case 17)', () => {
@@ -167,7 +245,11 @@ describe('pressure rules (FACTS cases 8, 9, 15–19)', () => {
       [0.52, 189.4],
       [0.507, 208],
     ] as const) {
-      expectWithin(d1835PbMaxVapourPressure(rd), vp, 0.05, { input: `RD ${rd}`, source: 'ASTM D1835; FACTS case 17', kind: 'published' });
+      expectWithin(d1835PbMaxVapourPressure(rd), vp, 0.05, {
+        input: `RD ${rd}`,
+        source: 'ASTM D1835; FACTS case 17',
+        kind: 'published',
+      });
     }
   });
 
@@ -190,10 +272,19 @@ describe('pressure rules (FACTS cases 8, 9, 15–19)', () => {
       [1000, 6380, 'ammonia'],
       [2500, 13520, 'ammonia'],
     ] as const) {
-      expectRel(reliefFlowAirFormula(a, s), q, 2.5e-3, { input: `${s} ${a} ft²`, source: 'relief_valve_settings.csv FLOW rows; FACTS case 18', kind: 'published', why: 'formula vs integer table' });
+      expectRel(reliefFlowAirFormula(a, s), q, 2.5e-3, {
+        input: `${s} ${a} ft²`,
+        source: 'relief_valve_settings.csv FLOW rows; FACTS case 18',
+        kind: 'published',
+        why: 'formula vs integer table',
+      });
     }
     // published: 20 ft × 4 ft hemispherical heads → 251.3 ft² (0.1 print → ±0.05)
-    expectWithin(reliefSurfaceArea('hemispherical-heads', 20, 4), 251.3, 0.05, { input: '20 ft × 4 ft', source: 'FACTS case 18', kind: 'published' });
+    expectWithin(reliefSurfaceArea('hemispherical-heads', 20, 4), 251.3, 0.05, {
+      input: '20 ft × 4 ft',
+      source: 'FACTS case 18',
+      kind: 'published',
+    });
   });
 
   it('hydrostaticReliefRange for a 250 psig container relief (case 19)', () => {

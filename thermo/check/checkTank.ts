@@ -17,14 +17,25 @@ import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../ta
 import { buildCautions } from './cautions.js';
 import { diagnose } from './diagnosis.js';
 import { ProductModel, type State } from './model.js';
-import { liquidFullTemperature as findLiquidFullTemperature, reliefTemperature as findReliefTemperature } from './search.js';
+import {
+  liquidFullTemperature as findLiquidFullTemperature,
+  reliefTemperature as findReliefTemperature,
+} from './search.js';
 import { STANDING_CAUTION } from './standing.js';
-import type { FillLimitResult, LimitEntry, PeakResult, TankCheckInput, TankCheckResult } from './types.js';
+import type {
+  FillLimitResult,
+  LimitEntry,
+  PeakResult,
+  TankCheckInput,
+  TankCheckResult,
+} from './types.js';
 import { validateInput, type CleanInput } from './validate.js';
 
 /** x rounded down / up to a multiple of step (steps are powers of ten; dividing by 1/step keeps 0.01 steps exact). */
-const floorTo = (x: number, step: number) => (step < 1 ? Math.floor(x * (1 / step) + 1e-9) / (1 / step) : Math.floor(x / step + 1e-9) * step);
-const ceilTo = (x: number, step: number) => (step < 1 ? Math.ceil(x * (1 / step) - 1e-9) / (1 / step) : Math.ceil(x / step - 1e-9) * step);
+const floorTo = (x: number, step: number) =>
+  step < 1 ? Math.floor(x * (1 / step) + 1e-9) / (1 / step) : Math.floor(x / step + 1e-9) * step;
+const ceilTo = (x: number, step: number) =>
+  step < 1 ? Math.ceil(x * (1 / step) - 1e-9) / (1 / step) : Math.ceil(x / step - 1e-9) * step;
 /** Pressures are rounded to 100 Pa (0.015 psi): up for pressures, down for headroom. */
 const P_STEP = 100;
 
@@ -51,20 +62,33 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
   if ('netMass' in contents) {
     const cap = netMassCap(model, c);
     if (contents.netMass > cap) {
-      throw new InputError('contents.netMass', `from 0 to ${Math.floor(cap)} kg for this tank (110 % of a liquid-full tank at the entered temperature)`, contents.netMass);
+      throw new InputError(
+        'contents.netMass',
+        `from 0 to ${Math.floor(cap)} kg for this tank (110 % of a liquid-full tank at the entered temperature)`,
+        contents.netMass,
+      );
     }
     // An empty tank still holds a trace of vapour; 1e-6 kg/m³ keeps the state defined.
     rho = Math.max(contents.netMass / c.V, 1e-6);
   } else {
     if (!satNow) {
       const field = 'gaugePercent' in contents ? 'contents.gaugePercent' : 'contents.levelHeight';
-      throw new InputError(field, `not usable above the critical temperature (${b.Tc.toFixed(1)} K): there is no liquid level; give contents.netMass`, c.T);
+      throw new InputError(
+        field,
+        `not usable above the critical temperature (${b.Tc.toFixed(1)} K): there is no liquid level; give contents.netMass`,
+        c.T,
+      );
     }
     let f: number;
     if ('gaugePercent' in contents) f = contents.gaugePercent / 100;
     else {
       const H = tankHeight(shape!);
-      if (contents.levelHeight > H) throw new InputError('contents.levelHeight', `from 0 to ${H.toFixed(3)} m (the inside height of this tank)`, contents.levelHeight);
+      if (contents.levelHeight > H)
+        throw new InputError(
+          'contents.levelHeight',
+          `from 0 to ${H.toFixed(3)} m (the inside height of this tank)`,
+          contents.levelHeight,
+        );
       f = fractionAtLevel(shape!, contents.levelHeight);
     }
     rho = f * satNow.rhoL + (1 - f) * satNow.rhoV;
@@ -100,12 +124,16 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
       modelAllowance: 0,
     });
   }
-  const refs = referenceRules(input.product, c.containerClass).map((r) => ({ ...r, kind: r.id === 'refrigerant-130F' ? ('rule' as const) : ('physical' as const) }));
+  const refs = referenceRules(input.product, c.containerClass).map((r) => ({
+    ...r,
+    kind: r.id === 'refrigerant-130F' ? ('rule' as const) : ('physical' as const),
+  }));
   refs.push({
     id: 'not-liquid-full-at-peak',
     kind: 'physical',
     description: 'The tank must not become liquid-full at the forecast peak liquid temperature',
-    citation: 'physics of a closed tank (a liquid-full tank’s pressure climbs steeply with temperature); the same principle as 49 CFR 173.304(b) — common practice for storage',
+    citation:
+      'physics of a closed tank (a liquid-full tank’s pressure climbs steeply with temperature); the same principle as 49 CFR 173.304(b) — common practice for storage',
     referenceTemperature: c.Tpeak,
   });
   const skippedRefs: number[] = [];
@@ -128,20 +156,41 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
     });
   }
   limits.sort((p, q) => p.maxMass - q.maxMass);
-  const fillLimit = buildFillLimit(limits, totalMass, waterWeight, c, satNow, b.rho60, rule?.fillingDensity ?? null, sg);
+  const fillLimit = buildFillLimit(
+    limits,
+    totalMass,
+    waterWeight,
+    c,
+    satNow,
+    b.rho60,
+    rule?.fillingDensity ?? null,
+    sg,
+  );
 
   // --- Peak. ---
   const peakState = c.Tpeak === c.T ? now : model.stateOrNull(c.Tpeak, rho);
   if (!peakState) {
     const Tmax = model.maxTemperatureFor(rho, c.T, c.Tpeak);
-    throw new InputError('peakTemperature', `at most ${Tmax.toFixed(1)} K for this fill: beyond it the model cannot hold this much product in the tank (it would be liquid-full long before)`, c.Tpeak);
+    throw new InputError(
+      'peakTemperature',
+      `at most ${Tmax.toFixed(1)} K for this fill: beyond it the model cannot hold this much product in the tank (it would be liquid-full long before)`,
+      c.Tpeak,
+    );
   }
   const peak = buildPeak(peakState, c);
 
   // --- Liquid-full and relief temperatures. ---
   const hints = [c.T, c.Tpeak];
   const liquidFullTemperature = findLiquidFullTemperature(model, rho, hints, Tlo);
-  const reliefTemperature = findReliefTemperature(model, rho, c.reliefSetPressure + c.baro, 1 + MODEL_ALLOWANCE.vapourPressure, hints, Tlo, liquidFullTemperature);
+  const reliefTemperature = findReliefTemperature(
+    model,
+    rho,
+    c.reliefSetPressure + c.baro,
+    1 + MODEL_ALLOWANCE.vapourPressure,
+    hints,
+    Tlo,
+    liquidFullTemperature,
+  );
 
   // --- Diagnosis. ---
   const diagnosis = c.gaugePressure === null ? null : diagnose(model, c, now, lpGas, Tlo);

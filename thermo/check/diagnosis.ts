@@ -33,31 +33,58 @@ export function propaneSplit(T: number, pAbs: number): number | null {
   return x >= 0 && x <= 1 ? x : null;
 }
 
-export function diagnose(model: ProductModel, c: CleanInput, now: State, lpGas: boolean, Tlo: number): DiagnosisResult {
+export function diagnose(
+  model: ProductModel,
+  c: CleanInput,
+  now: State,
+  lpGas: boolean,
+  Tlo: number,
+): DiagnosisResult {
   const reading = c.gaugePressure!;
   const expected = now.pAbs - c.baro;
   const difference = reading - expected;
   const tolerance = c.accuracy * c.fullScale + MODEL_ALLOWANCE.vapourPressure * now.pAbs;
-  const verdict: DiagnosisResult['verdict'] = difference > tolerance ? 'high' : difference < -tolerance ? 'low' : 'fits';
+  const verdict: DiagnosisResult['verdict'] =
+    difference > tolerance ? 'high' : difference < -tolerance ? 'low' : 'fits';
   const readingAbs = reading + c.baro;
   const causes: string[] = [];
   if (verdict === 'high') {
-    if (now.phase === 'liquid-full') causes.push('The tank is liquid-full: with no vapour space the pressure climbs steeply with temperature.');
-    causes.push('Air or another non-condensable gas in the vapour space (for example a new or opened tank that was not purged).');
-    causes.push('Lighter components than the product entered (for example ethane or propane in butane).');
+    if (now.phase === 'liquid-full')
+      causes.push(
+        'The tank is liquid-full: with no vapour space the pressure climbs steeply with temperature.',
+      );
+    causes.push(
+      'Air or another non-condensable gas in the vapour space (for example a new or opened tank that was not purged).',
+    );
+    causes.push(
+      'Lighter components than the product entered (for example ethane or propane in butane).',
+    );
     causes.push('A different product from the one entered.');
-    causes.push('The liquid is warmer than the thermometer shows (sun on the shell, or a thermometer reading the air).');
+    causes.push(
+      'The liquid is warmer than the thermometer shows (sun on the shell, or a thermometer reading the air).',
+    );
     causes.push('Gauge error: a zero offset, a damaged gauge or one of the wrong range.');
   } else if (verdict === 'low') {
-    if (now.phase === 'liquid-full') causes.push('The tank is liquid-full: its pressure then depends steeply on the exact fill and temperature, so the expected figure is uncertain.');
-    if (now.phase === 'vapour-only' || now.lf < 0.02) causes.push('There may be no liquid left: a tank holding vapour only shows less than the vapour pressure.');
-    causes.push('The liquid is colder than the thermometer shows (a recent withdrawal or venting chills the liquid).');
+    if (now.phase === 'liquid-full')
+      causes.push(
+        'The tank is liquid-full: its pressure then depends steeply on the exact fill and temperature, so the expected figure is uncertain.',
+      );
+    if (now.phase === 'vapour-only' || now.lf < 0.02)
+      causes.push(
+        'There may be no liquid left: a tank holding vapour only shows less than the vapour pressure.',
+      );
+    causes.push(
+      'The liquid is colder than the thermometer shows (a recent withdrawal or venting chills the liquid).',
+    );
     causes.push('Heavier components than the product entered (for example butane in propane).');
     causes.push('A different product from the one entered.');
-    causes.push('Vapour being drawn off faster than the liquid boils, pulling the pressure down for a while.');
+    causes.push(
+      'Vapour being drawn off faster than the liquid boils, pulling the pressure down for a while.',
+    );
     causes.push('Gauge error: a zero offset, a blocked or damaged gauge.');
   }
-  const temperatureForReading = readingAbs > 0 ? saturationTemperature(model, readingAbs, [c.T, c.Tpeak], Tlo) : null;
+  const temperatureForReading =
+    readingAbs > 0 ? saturationTemperature(model, readingAbs, [c.T, c.Tpeak], Tlo) : null;
   return {
     reading,
     expected,

@@ -71,12 +71,23 @@ export function productBasics(product: Product): ProductBasics {
     rho60 = saturation(product, T_60F_K).rhoL;
   } catch (e) {
     if (e instanceof InputError && e.field === 'T') {
-      throw new InputError('product', 'a liquefied gas: liquid under its own vapour pressure at 60 °F (15.6 °C)', r.label);
+      throw new InputError(
+        'product',
+        'a liquefied gas: liquid under its own vapour pressure at 60 °F (15.6 °C)',
+        r.label,
+      );
     }
     throw e;
   }
   const vc = r.components.reduce((sum, m, i) => sum + r.z[i]! * (m.molarMass / m.rhoc), 0);
-  const b: ProductBasics = { label: r.label, pure: r.components.length === 1, Tmin: r.Tmin, Tc, rho60, rhoc: r.molarMass / vc };
+  const b: ProductBasics = {
+    label: r.label,
+    pure: r.components.length === 1,
+    Tmin: r.Tmin,
+    Tc,
+    rho60,
+    rhoc: r.molarMass / vc,
+  };
   if (basicsCache.size > 200) basicsCache.clear();
   basicsCache.set(key, b);
   return b;
@@ -135,11 +146,25 @@ export class ProductModel {
     if (!this.basics.pure) {
       const s = this.sat(T);
       if (s && rho < s.rhoL && rho > s.rhoV) {
-        return { phase: 'two-phase', pAbs: s.p, lf: (rho - s.rhoV) / (s.rhoL - s.rhoV), rhoL: s.rhoL, rhoV: s.rhoV, approximate: true };
+        return {
+          phase: 'two-phase',
+          pAbs: s.p,
+          lf: (rho - s.rhoV) / (s.rhoL - s.rhoV),
+          rhoL: s.rhoL,
+          rhoV: s.rhoV,
+          approximate: true,
+        };
       }
     }
     const c = closedTank(this.product, T, rho);
-    return { phase: PHASE[c.phase] ?? 'supercritical', pAbs: c.p, lf: c.liquidFraction, rhoL: c.rhoL, rhoV: c.rhoV, approximate: false };
+    return {
+      phase: PHASE[c.phase] ?? 'supercritical',
+      pAbs: c.p,
+      lf: c.liquidFraction,
+      rhoL: c.rhoL,
+      rhoV: c.rhoV,
+      approximate: false,
+    };
   }
 }
 
@@ -147,7 +172,14 @@ export class ProductModel {
  * Root of an increasing-or-decreasing function on [a, b] with f(a), f(b) of opposite signs:
  * Illinois regula falsi, stopping when the bracket is narrower than tol.
  */
-export function bracketRoot(f: (x: number) => number, a: number, fa: number, b: number, fb: number, tol: number): number {
+export function bracketRoot(
+  f: (x: number) => number,
+  a: number,
+  fa: number,
+  b: number,
+  fb: number,
+  tol: number,
+): number {
   let side = 0;
   for (let i = 0; i < 60; i++) {
     if (Math.abs(b - a) < tol) break;

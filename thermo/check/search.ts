@@ -26,8 +26,17 @@ export function satTop(model: ProductModel): number {
  * Secant search on an increasing function f(x) from known points, with bracketing; f returns
  * null where it is undefined (treated as "above the root" — used beyond the saturation curve).
  */
-function solveIncreasing(f: (x: number) => number | null, hints: readonly (readonly [number, number])[], lo: number, hi: number, tol: number): number | null {
-  const pts = hints.filter(([x, v]) => x >= lo && x <= hi && Number.isFinite(v)).slice().sort((a, b) => a[0] - b[0]);
+function solveIncreasing(
+  f: (x: number) => number | null,
+  hints: readonly (readonly [number, number])[],
+  lo: number,
+  hi: number,
+  tol: number,
+): number | null {
+  const pts = hints
+    .filter(([x, v]) => x >= lo && x <= hi && Number.isFinite(v))
+    .slice()
+    .sort((a, b) => a[0] - b[0]);
   let below: [number, number] | null = null; // f < 0
   let above: [number, number] | null = null; // f > 0 (or undefined: value +Infinity)
   for (const [x, v] of pts) {
@@ -35,7 +44,8 @@ function solveIncreasing(f: (x: number) => number | null, hints: readonly (reado
     if (v < 0) below = !below || x > below[0] ? [x, v] : below;
     else if (!above || x < above[0]) above = [x, v];
   }
-  let last: [number, number] | null = pts.length >= 2 ? [pts[pts.length - 2]![0], pts[pts.length - 2]![1]] : null;
+  let last: [number, number] | null =
+    pts.length >= 2 ? [pts[pts.length - 2]![0], pts[pts.length - 2]![1]] : null;
   for (let i = 0; i < 60; i++) {
     if (below && above && Number.isFinite(above[1])) {
       const fx = (x: number) => {
@@ -46,7 +56,8 @@ function solveIncreasing(f: (x: number) => number | null, hints: readonly (reado
     }
     if (below && above && above[0] - below[0] < tol) return below[0];
     let x: number;
-    if (below && above) x = 0.5 * (below[0] + above[0]); // upper end undefined: bisect until a value is found
+    if (below && above)
+      x = 0.5 * (below[0] + above[0]); // upper end undefined: bisect until a value is found
     else {
       const ref = below ?? above!;
       let step = below ? 10 : -10;
@@ -69,7 +80,12 @@ function solveIncreasing(f: (x: number) => number | null, hints: readonly (reado
 }
 
 /** Temperature at which the saturation (bubble) pressure equals pAbs, K, or null outside the curve. */
-export function saturationTemperature(model: ProductModel, pAbs: number, hintsT: readonly number[], Tlo: number): number | null {
+export function saturationTemperature(
+  model: ProductModel,
+  pAbs: number,
+  hintsT: readonly number[],
+  Tlo: number,
+): number | null {
   const Thi = satTop(model);
   if (Thi <= Tlo) return null;
   // Increasing in −1/T: x = −1/T, y = ln(p/pAbs).
@@ -95,7 +111,12 @@ export function saturationTemperature(model: ProductModel, pAbs: number, hintsT:
 }
 
 /** Temperature at which a closed tank of overall density rho becomes liquid-full, K, or null. */
-export function liquidFullTemperature(model: ProductModel, rho: number, hintsT: readonly number[], Tlo: number): number | null {
+export function liquidFullTemperature(
+  model: ProductModel,
+  rho: number,
+  hintsT: readonly number[],
+  Tlo: number,
+): number | null {
   const rhoc = model.basics.rhoc;
   if (!(rho > rhoc)) return null;
   const Thi = satTop(model);
@@ -139,7 +160,12 @@ export function reliefTemperature(
     if (st.phase === 'two-phase') return Ts;
   }
   // Otherwise follow the closed-tank pressure from where the two-phase part ends.
-  const start = Tfull !== null ? Tfull : Ts !== null ? Ts : Math.max(Tlo, ...hintsT.filter((T) => T <= T_SEARCH_MAX));
+  const start =
+    Tfull !== null
+      ? Tfull
+      : Ts !== null
+        ? Ts
+        : Math.max(Tlo, ...hintsT.filter((T) => T <= T_SEARCH_MAX));
   // Where the model cannot hold the fill the pressure is beyond any relief setting: "above".
   const h = (T: number) => {
     const st = model.stateOrNull(T, rho);

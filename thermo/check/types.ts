@@ -115,7 +115,14 @@ export type TankPhase = 'two-phase' | 'liquid-full' | 'vapour-only' | 'supercrit
 export type CautionLevel = 'danger' | 'warning' | 'caution' | 'notice';
 
 /** Quantity of the number behind a caution (to format it with `thermo/units.ts`). */
-export type CautionQuantity = 'gaugePressure' | 'pressure' | 'pressureDifference' | 'temperature' | 'mass' | 'volume' | 'fraction';
+export type CautionQuantity =
+  | 'gaugePressure'
+  | 'pressure'
+  | 'pressureDifference'
+  | 'temperature'
+  | 'mass'
+  | 'volume'
+  | 'fraction';
 
 export interface Caution {
   level: CautionLevel;

@@ -28,7 +28,8 @@ export interface CleanInput {
 }
 
 function num(field: string, x: unknown, lo: number, hi: number, range: string): number {
-  if (typeof x !== 'number' || !Number.isFinite(x) || x < lo || x > hi) throw new InputError(field, range, x);
+  if (typeof x !== 'number' || !Number.isFinite(x) || x < lo || x > hi)
+    throw new InputError(field, range, x);
   return x;
 }
 
@@ -43,20 +44,43 @@ export const T_CHECK_MIN_K = 150;
 export const T_CHECK_MAX_K = 400;
 
 export function validateInput(input: TankCheckInput): CleanInput {
-  if (!input || typeof input !== 'object') throw new InputError('input', 'an object { tank, product, liquidTemperature, contents, peakTemperature }', input);
+  if (!input || typeof input !== 'object')
+    throw new InputError(
+      'input',
+      'an object { tank, product, liquidTemperature, contents, peakTemperature }',
+      input,
+    );
   const tank = input.tank;
-  if (!tank || typeof tank !== 'object') throw new InputError('tank', 'an object { waterCapacity, designPressure, … }', tank);
+  if (!tank || typeof tank !== 'object')
+    throw new InputError('tank', 'an object { waterCapacity, designPressure, … }', tank);
   const V = num('tank.waterCapacity', tank.waterCapacity, 1e-4, 1e5, 'from 0.0001 to 100 000 m³');
-  const designPressure = num('tank.designPressure', tank.designPressure, 1e4, 1e8, 'from 10 000 to 100 000 000 Pa gauge');
+  const designPressure = num(
+    'tank.designPressure',
+    tank.designPressure,
+    1e4,
+    1e8,
+    'from 10 000 to 100 000 000 Pa gauge',
+  );
   const reliefGiven = tank.reliefSetPressure !== undefined;
   const reliefSetPressure = reliefGiven
-    ? num('tank.reliefSetPressure', tank.reliefSetPressure, 1e4, 1e8, 'from 10 000 to 100 000 000 Pa gauge')
+    ? num(
+        'tank.reliefSetPressure',
+        tank.reliefSetPressure,
+        1e4,
+        1e8,
+        'from 10 000 to 100 000 000 Pa gauge',
+      )
     : designPressure;
   const placement = tank.placement ?? 'aboveground';
-  if (placement !== 'aboveground' && placement !== 'underground') throw new InputError('tank.placement', "'aboveground' or 'underground'", placement);
+  if (placement !== 'aboveground' && placement !== 'underground')
+    throw new InputError('tank.placement', "'aboveground' or 'underground'", placement);
   const containerClass = tank.containerClass ?? 'storage';
   if (!['storage', 'cylinder', 'cargo', 'portable'].includes(containerClass)) {
-    throw new InputError('tank.containerClass', "'storage', 'cylinder', 'cargo' or 'portable'", containerClass);
+    throw new InputError(
+      'tank.containerClass',
+      "'storage', 'cylinder', 'cargo' or 'portable'",
+      containerClass,
+    );
   }
   const insulated = optBool('tank.insulated', tank.insulated);
   const fixedDipTube = optBool('tank.fixedDipTube', tank.fixedDipTube);
@@ -64,7 +88,13 @@ export function validateInput(input: TankCheckInput): CleanInput {
   const mdmt =
     tank.minDesignMetalTemperature === undefined
       ? null
-      : num('tank.minDesignMetalTemperature', tank.minDesignMetalTemperature, 73.15, 373.15, 'from 73.15 to 373.15 K');
+      : num(
+          'tank.minDesignMetalTemperature',
+          tank.minDesignMetalTemperature,
+          73.15,
+          373.15,
+          'from 73.15 to 373.15 K',
+        );
 
   const range = `from ${T_CHECK_MIN_K} to ${T_CHECK_MAX_K} K`;
   const T = num('liquidTemperature', input.liquidTemperature, T_CHECK_MIN_K, T_CHECK_MAX_K, range);
@@ -72,7 +102,13 @@ export function validateInput(input: TankCheckInput): CleanInput {
 
   let baro: number;
   if (input.barometricPressure !== undefined) {
-    baro = num('barometricPressure', input.barometricPressure, 20_000, 120_000, 'from 20 000 to 120 000 Pa absolute');
+    baro = num(
+      'barometricPressure',
+      input.barometricPressure,
+      20_000,
+      120_000,
+      'from 20 000 to 120 000 Pa absolute',
+    );
   } else if (input.elevation !== undefined) {
     const z = num('elevation', input.elevation, -500, 11_000, 'from −500 to 11 000 m');
     baro = barometricPressureAtElevation(z);
@@ -81,22 +117,61 @@ export function validateInput(input: TankCheckInput): CleanInput {
   const gaugePressure =
     input.gaugePressure === undefined
       ? null
-      : num('gaugePressure', input.gaugePressure, -baro, 1e8, `from −${Math.round(baro)} Pa (full vacuum at this barometric pressure) to 100 000 000 Pa gauge`);
+      : num(
+          'gaugePressure',
+          input.gaugePressure,
+          -baro,
+          1e8,
+          `from −${Math.round(baro)} Pa (full vacuum at this barometric pressure) to 100 000 000 Pa gauge`,
+        );
   const pg = input.pressureGauge;
-  if (pg !== undefined && (pg === null || typeof pg !== 'object')) throw new InputError('pressureGauge', 'an object { fullScale?, accuracy? }', pg);
-  const fullScale = pg?.fullScale === undefined ? designPressure : num('pressureGauge.fullScale', pg.fullScale, 1e4, 1e8, 'from 10 000 to 100 000 000 Pa gauge');
-  const accuracy = pg?.accuracy === undefined ? 0.02 : num('pressureGauge.accuracy', pg.accuracy, 0, 0.2, 'a fraction of full scale from 0 to 0.2');
+  if (pg !== undefined && (pg === null || typeof pg !== 'object'))
+    throw new InputError('pressureGauge', 'an object { fullScale?, accuracy? }', pg);
+  const fullScale =
+    pg?.fullScale === undefined
+      ? designPressure
+      : num(
+          'pressureGauge.fullScale',
+          pg.fullScale,
+          1e4,
+          1e8,
+          'from 10 000 to 100 000 000 Pa gauge',
+        );
+  const accuracy =
+    pg?.accuracy === undefined
+      ? 0.02
+      : num(
+          'pressureGauge.accuracy',
+          pg.accuracy,
+          0,
+          0.2,
+          'a fraction of full scale from 0 to 0.2',
+        );
   const specificGravity =
-    input.specificGravity === undefined ? null : num('specificGravity', input.specificGravity, 0.2, 2, 'from 0.2 to 2 (liquid, 60/60 °F)');
+    input.specificGravity === undefined
+      ? null
+      : num('specificGravity', input.specificGravity, 0.2, 2, 'from 0.2 to 2 (liquid, 60/60 °F)');
 
   const c = input.contents;
-  if (!c || typeof c !== 'object') throw new InputError('contents', 'one of { gaugePercent }, { netMass }, { levelHeight }', c);
+  if (!c || typeof c !== 'object')
+    throw new InputError('contents', 'one of { gaugePercent }, { netMass }, { levelHeight }', c);
   const keys = ['gaugePercent', 'netMass', 'levelHeight'].filter((k) => k in c);
-  if (keys.length !== 1) throw new InputError('contents', 'exactly one of { gaugePercent }, { netMass }, { levelHeight }', Object.keys(c));
-  if ('gaugePercent' in c) num('contents.gaugePercent', c.gaugePercent, 0, 100, 'a percent from 0 to 100');
+  if (keys.length !== 1)
+    throw new InputError(
+      'contents',
+      'exactly one of { gaugePercent }, { netMass }, { levelHeight }',
+      Object.keys(c),
+    );
+  if ('gaugePercent' in c)
+    num('contents.gaugePercent', c.gaugePercent, 0, 100, 'a percent from 0 to 100');
   if ('netMass' in c) num('contents.netMass', c.netMass, 0, 1e8, 'from 0 to 100 000 000 kg');
   if ('levelHeight' in c) {
-    if (tank.shape === undefined) throw new InputError('tank.shape', 'given when contents.levelHeight is used (the level needs the tank shape)', undefined);
+    if (tank.shape === undefined)
+      throw new InputError(
+        'tank.shape',
+        'given when contents.levelHeight is used (the level needs the tank shape)',
+        undefined,
+      );
     num('contents.levelHeight', c.levelHeight, 0, 1e3, 'from 0 m to the inside height of the tank');
   }
   return {

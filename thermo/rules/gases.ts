@@ -9,7 +9,14 @@ import { DOT_DIP_TUBE_FACTOR, lpgFillingDensity, type LpgColumn } from './lpgas.
 import { GAL_1200_M3 } from './water.js';
 
 /** Fluid ids that are LP-gas (29 CFR 1910.110(a)(7): propane, propylene, butanes, butylenes). */
-export const LPG_IDS: readonly string[] = ['propane', 'propylene', 'n-butane', 'isobutane', '1-butene', 'isobutene'];
+export const LPG_IDS: readonly string[] = [
+  'propane',
+  'propylene',
+  'n-butane',
+  'isobutane',
+  '1-butene',
+  'isobutene',
+];
 
 /**
  * Refrigerants without a named entry in 49 CFR 173.304a(a)(2): "refrigerant gas n.o.s.", which
@@ -17,7 +24,14 @@ export const LPG_IDS: readonly string[] = ['propane', 'propylene', 'n-butane', '
  * flammable gas n.o.s.; the same 130 °F figure is applied to them here, which the
  * 173.304(b) 131 °F rule for every DOT cylinder nearly duplicates.)
  */
-export const REFRIGERANT_NOS_IDS: readonly string[] = ['r134a', 'r32', 'r125', 'r143a', 'r1234yf', 'r1234ze-e'];
+export const REFRIGERANT_NOS_IDS: readonly string[] = [
+  'r134a',
+  'r32',
+  'r125',
+  'r143a',
+  'r1234yf',
+  'r1234ze-e',
+];
 
 /** Products that 49 CFR 173.304(b) lets be liquid full at 131 °F in DOT cylinders. */
 export const EXEMPT_FROM_131F: readonly string[] = ['carbon-dioxide', 'nitrous-oxide'];
@@ -30,8 +44,15 @@ export const T_131F_K = ((131 - 32) * 5) / 9 + 273.15;
 /** Components of a product, as ids with mole fractions (custom fluids return null). */
 export function productIds(product: Product): { id: string; x: number }[] | null {
   if (typeof product === 'string') return [{ id: product, x: 1 }];
-  if (product && typeof product === 'object' && 'components' in product && Array.isArray(product.components)) {
-    return product.components.filter((c) => c.moleFraction > 0).map((c) => ({ id: c.id, x: c.moleFraction }));
+  if (
+    product &&
+    typeof product === 'object' &&
+    'components' in product &&
+    Array.isArray(product.components)
+  ) {
+    return product.components
+      .filter((c) => c.moleFraction > 0)
+      .map((c) => ({ id: c.id, x: c.moleFraction }));
   }
   return null;
 }
@@ -108,35 +129,103 @@ export function fillingRule(ctx: RuleContext): RuleChoice | null {
 
   switch (single) {
     case 'ammonia': {
-      if (ctx.containerClass === 'cylinder') return rule('nh3-cylinder', 'Anhydrous ammonia in DOT cylinders: 54 % of water weight', '49 CFR 173.304a(a)(2) (CFR 2015 ed.)', 54);
-      if (dot) return rule('nh3-cargo', 'Anhydrous ammonia in DOT cargo/portable tanks: 56 % of water weight', '49 CFR 173.315(a) table (CFR 2015 ed.)', 56);
+      if (ctx.containerClass === 'cylinder')
+        return rule(
+          'nh3-cylinder',
+          'Anhydrous ammonia in DOT cylinders: 54 % of water weight',
+          '49 CFR 173.304a(a)(2) (CFR 2015 ed.)',
+          54,
+        );
+      if (dot)
+        return rule(
+          'nh3-cargo',
+          'Anhydrous ammonia in DOT cargo/portable tanks: 56 % of water weight',
+          '49 CFR 173.315(a) table (CFR 2015 ed.)',
+          56,
+        );
       if (ctx.placement === 'underground') {
         // The table lists underground uninsulated (58 %) only; an insulated underground tank takes the lower insulated figure.
         return ctx.insulated
-          ? rule('nh3-storage-insulated', 'Anhydrous ammonia, insulated container: 57 % of water weight', '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)', 57)
-          : rule('nh3-storage-underground', 'Anhydrous ammonia, underground uninsulated container: 58 % of water weight', '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)', 58);
+          ? rule(
+              'nh3-storage-insulated',
+              'Anhydrous ammonia, insulated container: 57 % of water weight',
+              '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)',
+              57,
+            )
+          : rule(
+              'nh3-storage-underground',
+              'Anhydrous ammonia, underground uninsulated container: 58 % of water weight',
+              '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)',
+              58,
+            );
       }
       return ctx.insulated
-        ? rule('nh3-storage-insulated', 'Anhydrous ammonia, aboveground insulated container: 57 % of water weight', '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)', 57)
-        : rule('nh3-storage-aboveground', 'Anhydrous ammonia, aboveground uninsulated container: 56 % of water weight', '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)', 56);
+        ? rule(
+            'nh3-storage-insulated',
+            'Anhydrous ammonia, aboveground insulated container: 57 % of water weight',
+            '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)',
+            57,
+          )
+        : rule(
+            'nh3-storage-aboveground',
+            'Anhydrous ammonia, aboveground uninsulated container: 56 % of water weight',
+            '29 CFR 1910.111(b)(11)(i) (CFR 2015 ed.)',
+            56,
+          );
     }
     case 'carbon-dioxide':
-      if (ctx.containerClass === 'cylinder') return rule('co2-cylinder', 'Carbon dioxide in DOT 1800 psig class cylinders: 68 % of water weight', '49 CFR 173.304a(a)(2) (CFR 2015 ed.)', 68);
+      if (ctx.containerClass === 'cylinder')
+        return rule(
+          'co2-cylinder',
+          'Carbon dioxide in DOT 1800 psig class cylinders: 68 % of water weight',
+          '49 CFR 173.304a(a)(2) (CFR 2015 ed.)',
+          68,
+        );
       return null;
     case 'nitrous-oxide':
-      if (ctx.containerClass === 'cylinder') return rule('n2o-cylinder', 'Nitrous oxide in DOT 1800 psig class cylinders: 68 % of water weight', '49 CFR 173.304a(a)(2) (CFR 2015 ed.)', 68);
+      if (ctx.containerClass === 'cylinder')
+        return rule(
+          'n2o-cylinder',
+          'Nitrous oxide in DOT 1800 psig class cylinders: 68 % of water weight',
+          '49 CFR 173.304a(a)(2) (CFR 2015 ed.)',
+          68,
+        );
       return null;
     case 'chlorine':
-      if (ctx.containerClass !== 'storage') return rule('cl2', 'Chlorine: 125 % of water weight', '49 CFR 173.304a(a)(2); 173.315(a) table (CFR 2015 ed.)', 125);
+      if (ctx.containerClass !== 'storage')
+        return rule(
+          'cl2',
+          'Chlorine: 125 % of water weight',
+          '49 CFR 173.304a(a)(2); 173.315(a) table (CFR 2015 ed.)',
+          125,
+        );
       return null;
     case 'sulfur-dioxide':
-      if (ctx.containerClass !== 'storage') return rule('so2', 'Sulfur dioxide: 125 % of water weight', '49 CFR 173.304a(a)(2); 173.315(a) table (CFR 2015 ed.)', 125);
+      if (ctx.containerClass !== 'storage')
+        return rule(
+          'so2',
+          'Sulfur dioxide: 125 % of water weight',
+          '49 CFR 173.304a(a)(2); 173.315(a) table (CFR 2015 ed.)',
+          125,
+        );
       return null;
     case 'r22':
-      if (ctx.containerClass !== 'storage') return rule('r22', 'R-22: 105 % of water weight', '49 CFR 173.304a(a)(2); 173.315(a) table (CFR 2015 ed.)', 105);
+      if (ctx.containerClass !== 'storage')
+        return rule(
+          'r22',
+          'R-22: 105 % of water weight',
+          '49 CFR 173.304a(a)(2); 173.315(a) table (CFR 2015 ed.)',
+          105,
+        );
       return null;
     case 'dimethyl-ether':
-      if (dot) return rule('dme-cargo', 'Dimethyl ether in DOT cargo/portable tanks: 59 % of water weight', '49 CFR 173.315(a) table (CFR 2015 ed.)', 59);
+      if (dot)
+        return rule(
+          'dme-cargo',
+          'Dimethyl ether in DOT cargo/portable tanks: 59 % of water weight',
+          '49 CFR 173.315(a) table (CFR 2015 ed.)',
+          59,
+        );
       return null;
     default:
       return null;
@@ -159,7 +248,10 @@ export function isRefrigerantNos(product: Product): boolean {
  * - every liquefied gas in DOT cylinders: not liquid full at any temperature up to 131 °F
  *   (49 CFR 173.304(b)), except CO2 and N2O.
  */
-export function referenceRules(product: Product, containerClass: ContainerClass): PhysicalRuleChoice[] {
+export function referenceRules(
+  product: Product,
+  containerClass: ContainerClass,
+): PhysicalRuleChoice[] {
   const out: PhysicalRuleChoice[] = [];
   if (containerClass !== 'cylinder') return out;
   if (isRefrigerantNos(product)) {
@@ -175,7 +267,8 @@ export function referenceRules(product: Product, containerClass: ContainerClass)
   if (!exempt) {
     out.push({
       id: 'dot-131F',
-      description: 'Liquefied gas in DOT cylinders: not liquid full at any temperature up to 131 °F (55 °C)',
+      description:
+        'Liquefied gas in DOT cylinders: not liquid full at any temperature up to 131 °F (55 °C)',
       citation: '49 CFR 173.304(b) (CFR 2015 ed.)',
       referenceTemperature: T_131F_K,
     });

@@ -1,10 +1,36 @@
 export { WATER_FD_KG_M3, WATER_SG_KG_M3, GAL_1200_M3 } from './water.js';
 export { MODEL_ALLOWANCE } from './allowance.js';
-export { TABLE_H27, TABLE_173_315B, TABLE_173_304A_D1, lpgFillingDensity, sgForTable, maxLiquidVolumePercent, DOT_DIP_TUBE_FACTOR } from './lpgas.js';
+export {
+  TABLE_H27,
+  TABLE_173_315B,
+  TABLE_173_304A_D1,
+  lpgFillingDensity,
+  sgForTable,
+  maxLiquidVolumePercent,
+  DOT_DIP_TUBE_FACTOR,
+} from './lpgas.js';
 export type { LpgColumn, LpgFillingDensity } from './lpgas.js';
-export { fillingRule, referenceRules, isLpGas, isRefrigerantNos, LPG_IDS, REFRIGERANT_NOS_IDS, T_130F_K, T_131F_K } from './gases.js';
+export {
+  fillingRule,
+  referenceRules,
+  isLpGas,
+  isRefrigerantNos,
+  LPG_IDS,
+  REFRIGERANT_NOS_IDS,
+  T_130F_K,
+  T_131F_K,
+} from './gases.js';
 export type { RuleChoice, PhysicalRuleChoice, RuleContext } from './gases.js';
-export { reliefRange, containerTypeFor, minCylinderServicePressure, d1835PbMaxVapourPressure, reliefFlowAir, reliefFlowAirFormula, reliefSurfaceArea, hydrostaticReliefRange } from './pressure.js';
+export {
+  reliefRange,
+  containerTypeFor,
+  minCylinderServicePressure,
+  d1835PbMaxVapourPressure,
+  reliefFlowAir,
+  reliefFlowAirFormula,
+  reliefSurfaceArea,
+  hydrostaticReliefRange,
+} from './pressure.js';
 export type { CodeEra } from './pressure.js';
 export { LPG_PRESETS } from './presets.js';
 export type { LpgPreset } from './presets.js';

@@ -142,15 +142,31 @@ export function lpgFillingDensity(sg: number, column: LpgColumn): LpgFillingDens
 function pick(column: LpgColumn): [readonly Band[], number, string] {
   switch (column) {
     case 'h27-aboveground-small':
-      return [TABLE_H27, 0, '29 CFR 1910.110(b)(12)(i) Table H-27, aboveground, 1,200 US gal or less (CFR 2015 ed.)'];
+      return [
+        TABLE_H27,
+        0,
+        '29 CFR 1910.110(b)(12)(i) Table H-27, aboveground, 1,200 US gal or less (CFR 2015 ed.)',
+      ];
     case 'h27-aboveground-large':
-      return [TABLE_H27, 1, '29 CFR 1910.110(b)(12)(i) Table H-27, aboveground, over 1,200 US gal (CFR 2015 ed.)'];
+      return [
+        TABLE_H27,
+        1,
+        '29 CFR 1910.110(b)(12)(i) Table H-27, aboveground, over 1,200 US gal (CFR 2015 ed.)',
+      ];
     case 'h27-underground':
       return [TABLE_H27, 2, '29 CFR 1910.110(b)(12)(i) Table H-27, underground (CFR 2015 ed.)'];
     case 'dot-cargo-small':
-      return [TABLE_173_315B, 0, '49 CFR 173.315(b), cargo/portable tanks 1,200 US gal or less (CFR 2015 ed.)'];
+      return [
+        TABLE_173_315B,
+        0,
+        '49 CFR 173.315(b), cargo/portable tanks 1,200 US gal or less (CFR 2015 ed.)',
+      ];
     case 'dot-cargo-large':
-      return [TABLE_173_315B, 1, '49 CFR 173.315(b), cargo/portable tanks over 1,200 US gal (CFR 2015 ed.)'];
+      return [
+        TABLE_173_315B,
+        1,
+        '49 CFR 173.315(b), cargo/portable tanks over 1,200 US gal (CFR 2015 ed.)',
+      ];
     case 'dot-cylinder':
       return [TABLE_173_304A_D1, 0, '49 CFR 173.304a(d)(1), DOT cylinders (CFR 2015 ed.)'];
   }

@@ -40,7 +40,8 @@ export const LPG_PRESETS: readonly LpgPreset[] = [
         { id: 'isobutane', moleFraction: 0.01 },
       ],
     },
-    source: 'common practice: an illustrative composition inside the commercial-propane limits (butanes and heavier ≤ 2.5 %, from memory of ASTM D1835)',
+    source:
+      'common practice: an illustrative composition inside the commercial-propane limits (butanes and heavier ≤ 2.5 %, from memory of ASTM D1835)',
   },
   {
     id: 'pb-50-50',
@@ -51,7 +52,8 @@ export const LPG_PRESETS: readonly LpgPreset[] = [
         { id: 'n-butane', moleFraction: 0.5 },
       ],
     },
-    source: '29 CFR 1910.110(b)(19)(ii) names a "50/50 butane-propane mix" for variable-gauge markings; vol % taken as mol %',
+    source:
+      '29 CFR 1910.110(b)(19)(ii) names a "50/50 butane-propane mix" for variable-gauge markings; vol % taken as mol %',
   },
   {
     id: 'commercial-butane',
@@ -63,6 +65,7 @@ export const LPG_PRESETS: readonly LpgPreset[] = [
         { id: 'propane', moleFraction: 0.05 },
       ],
     },
-    source: 'common practice: an illustrative composition (commercial butane is predominantly butanes and butylenes, 29 CFR 1910.110(a)(7))',
+    source:
+      'common practice: an illustrative composition (commercial butane is predominantly butanes and butylenes, 29 CFR 1910.110(a)(7))',
   },
 ];

@@ -14,9 +14,19 @@ export type CodeEra = 'asme-1949-and-earlier' | 'asme-1950-and-later';
  * Ammonia, 29 CFR 1910.111(b)(9)(ii): U-68/U-69 110–125 %; U-200/U-201, ASME 1952–1962,
  * API-ASME, USCG 95–100 %.
  */
-export function reliefRange(service: 'lp-gas' | 'ammonia', era: CodeEra): { min: number; max: number; citation: string } {
+export function reliefRange(
+  service: 'lp-gas' | 'ammonia',
+  era: CodeEra,
+): { min: number; max: number; citation: string } {
   if (era === 'asme-1949-and-earlier') {
-    return { min: 1.1, max: 1.25, citation: service === 'lp-gas' ? '29 CFR 1910.110(b)(10)(iv) Table H-26' : '29 CFR 1910.111(b)(9)(ii)' };
+    return {
+      min: 1.1,
+      max: 1.25,
+      citation:
+        service === 'lp-gas'
+          ? '29 CFR 1910.110(b)(10)(iv) Table H-26'
+          : '29 CFR 1910.111(b)(9)(ii)',
+    };
   }
   return service === 'lp-gas'
     ? { min: 0.88, max: 1.0, citation: '29 CFR 1910.110(b)(10)(iv) Table H-26' }
@@ -29,9 +39,19 @@ export function reliefRange(service: 'lp-gas' | 'ammonia', era: CodeEra): { min:
  * then raised in steps of 25. Minimum design pressure = type × 1.00 (ASME 1949 and earlier,
  * U-68/U-69) or × 1.25 (later codes). Type 80 listed for completeness (not authorized new since 1947).
  */
-export function containerTypeFor(vp100_psig: number, era: CodeEra): { type: number; minDesignPressure_psig: number } {
+export function containerTypeFor(
+  vp100_psig: number,
+  era: CodeEra,
+): { type: number; minDesignPressure_psig: number } {
   const types = [80, 100, 125, 150, 175, 200];
-  const maxVp: Record<number, number> = { 80: 80, 100: 100, 125: 125, 150: 150, 175: 175, 200: 215 };
+  const maxVp: Record<number, number> = {
+    80: 80,
+    100: 100,
+    125: 125,
+    150: 150,
+    175: 175,
+    200: 215,
+  };
   let type = types.find((t) => vp100_psig <= maxVp[t]!);
   if (type === undefined) type = 200 + 25 * Math.ceil((vp100_psig - 200) / 25);
   return { type, minDesignPressure_psig: type * (era === 'asme-1949-and-earlier' ? 1 : 1.25) };
@@ -72,13 +92,23 @@ export function reliefFlowAirFormula(area_ft2: number, service: 'lp-gas' | 'ammo
 }
 
 /** Outside surface area for the relief flow when not stamped, ft² (29 CFR 1910.110(b)(10)(ii); 1910.111 Table H-36 notes). Lengths in ft, overall length L. */
-export function reliefSurfaceArea(shape: 'hemispherical-heads' | 'other-heads' | 'sphere', L_ft: number, D_ft: number): number {
+export function reliefSurfaceArea(
+  shape: 'hemispherical-heads' | 'other-heads' | 'sphere',
+  L_ft: number,
+  D_ft: number,
+): number {
   if (shape === 'sphere') return D_ft * D_ft * 3.1416;
   if (shape === 'hemispherical-heads') return L_ft * D_ft * 3.1416;
   return (L_ft + 0.3 * D_ft) * D_ft * 3.1416;
 }
 
 /** Hydrostatic relief between shutoff valves on LP-gas liquid piping, psig: ≥ 140 % of the container relief setting (≥ 400 psig for DOT containers) and ≤ 500 psig (29 CFR 1910.110(b)(10)(xii)). */
-export function hydrostaticReliefRange(containerRelief_psig: number, dot: boolean): { min: number; max: number } {
-  return { min: dot ? Math.max(400, 1.4 * containerRelief_psig) : 1.4 * containerRelief_psig, max: 500 };
+export function hydrostaticReliefRange(
+  containerRelief_psig: number,
+  dot: boolean,
+): { min: number; max: number } {
+  return {
+    min: dot ? Math.max(400, 1.4 * containerRelief_psig) : 1.4 * containerRelief_psig,
+    max: 500,
+  };
 }

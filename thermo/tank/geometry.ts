@@ -27,7 +27,8 @@ export function headDepth(heads: HeadKind, diameter: number): number {
 
 /** Checks a shape's fields; throws `InputError` naming `field.…`. */
 export function validateShape(shape: unknown, field = 'tank.shape'): asserts shape is TankShape {
-  if (!shape || typeof shape !== 'object') throw new InputError(field, 'an object { kind, diameter, … }', shape);
+  if (!shape || typeof shape !== 'object')
+    throw new InputError(field, 'an object { kind, diameter, … }', shape);
   const s = shape as Record<string, unknown>;
   const positive = (name: string, lo: number, hi: number) => {
     const x = s[name];
@@ -40,7 +41,11 @@ export function validateShape(shape: unknown, field = 'tank.shape'): asserts sha
     return;
   }
   if (s.kind !== 'horizontal-cylinder' && s.kind !== 'vertical-cylinder') {
-    throw new InputError(`${field}.kind`, "'horizontal-cylinder', 'vertical-cylinder' or 'sphere'", s.kind);
+    throw new InputError(
+      `${field}.kind`,
+      "'horizontal-cylinder', 'vertical-cylinder' or 'sphere'",
+      s.kind,
+    );
   }
   if (s.heads !== 'hemispherical' && s.heads !== 'ellipsoidal' && s.heads !== 'flat') {
     throw new InputError(`${field}.heads`, "'hemispherical', 'ellipsoidal' or 'flat'", s.heads);
@@ -54,7 +59,8 @@ export function validateShape(shape: unknown, field = 'tank.shape'): asserts sha
 
 /** Total inside height of the tank (the span of the level gauge), m. */
 export function tankHeight(shape: TankShape): number {
-  if (shape.kind === 'vertical-cylinder') return shape.shellLength + 2 * headDepth(shape.heads, shape.diameter);
+  if (shape.kind === 'vertical-cylinder')
+    return shape.shellLength + 2 * headDepth(shape.heads, shape.diameter);
   return shape.diameter;
 }
 
@@ -68,7 +74,10 @@ export function totalVolume(shape: TankShape): number {
 
 function segmentArea(R: number, h: number): number {
   const t = Math.min(Math.max(h, 0), 2 * R);
-  return R * R * Math.acos(Math.min(1, Math.max(-1, (R - t) / R))) - (R - t) * Math.sqrt(Math.max(0, 2 * R * t - t * t));
+  return (
+    R * R * Math.acos(Math.min(1, Math.max(-1, (R - t) / R))) -
+    (R - t) * Math.sqrt(Math.max(0, 2 * R * t - t * t))
+  );
 }
 
 function sphereCap(R: number, h: number): number {

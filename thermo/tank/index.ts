@@ -1,1 +1,9 @@
-export { headDepth, validateShape, tankHeight, totalVolume, volumeAtLevel, fractionAtLevel, levelAtFraction } from './geometry.js';
+export {
+  headDepth,
+  validateShape,
+  tankHeight,
+  totalVolume,
+  volumeAtLevel,
+  fractionAtLevel,
+  levelAtFraction,
+} from './geometry.js';
