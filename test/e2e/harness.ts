@@ -221,6 +221,45 @@ export function horizontalOverflow(page: Page): Promise<number> {
   });
 }
 
+/**
+ * Visible elements (shadow roots included) that stick out past the right edge of the viewport
+ * without sitting in a box of their own that scrolls or clips sideways. `overflow-x: hidden` on
+ * <html> or <body> hides the scroll bar but not the cut-off content, so those two do not count
+ * as such a box. Each entry names the element and how far it sticks out.
+ */
+export function cutOffElements(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    const width = document.documentElement.clientWidth;
+    const out: string[] = [];
+    const parentOf = (el: Element): Element | null =>
+      el.parentElement ?? ((el.getRootNode() as ShadowRoot).host || null);
+    const inSideScroller = (el: Element): boolean => {
+      for (let p = parentOf(el); p; p = parentOf(p)) {
+        if (p === document.body || p === document.documentElement) return false;
+        if (['auto', 'scroll', 'hidden', 'clip'].includes(getComputedStyle(p).overflowX))
+          return true;
+      }
+      return false;
+    };
+    const describe = (el: Element): string => {
+      const id = el.id ? `#${el.id}` : '';
+      const testid = el.getAttribute('data-testid');
+      return `${el.tagName.toLowerCase()}${id}${testid ? `[data-testid=${testid}]` : ''}`;
+    };
+    const visit = (root: Document | ShadowRoot) => {
+      for (const el of root.querySelectorAll('*')) {
+        const r = el.getBoundingClientRect();
+        if (r.width > 0 && r.height > 0 && r.right > width + 0.5 && !inSideScroller(el)) {
+          out.push(`${describe(el)} +${Math.round(r.right - width)}px`);
+        }
+        if (el.shadowRoot) visit(el.shadowRoot);
+      }
+    };
+    visit(document);
+    return out;
+  });
+}
+
 /** `data-testid` lookup that pierces shadow roots. */
 export function byTestId(page: Page | Locator, id: string): Locator {
   return page.getByTestId(id);

@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import {
   builtFiles,
+  cutOffElements,
   foreignRequests,
   horizontalOverflow,
   useApp,
@@ -90,6 +91,7 @@ describe('offline', () => {
     await page.waitForLoadState('load');
     expect(page.viewportSize()).toEqual({ width: 360, height: 740 });
     expect(await horizontalOverflow(page)).toBe(0);
+    expect(await cutOffElements(page)).toEqual([]);
   });
 });
 
