@@ -16,8 +16,8 @@ import { DEFAULT_SETTINGS } from './types.js';
 import type { HeatingCurve } from './chart-data.js';
 
 const W = 360;
-const H = 210;
-const M = { left: 52, right: 14, top: 14, bottom: 38 };
+const H = 220;
+const M = { left: 52, right: 14, top: 26, bottom: 38 };
 
 interface Axis {
   min: number;
@@ -181,12 +181,10 @@ export class CheckChart extends LitElement {
       <line class="axis" x1=${M.left} x2=${W - M.right} y1=${H - M.bottom} y2=${H - M.bottom}></line>
       <line class="axis" x1=${M.left} x2=${M.left} y1=${M.top} y2=${H - M.bottom}></line>
       <text class="title" x=${(M.left + W - M.right) / 2} y=${H - 4} text-anchor="middle">Liquid temperature (${tUnit})</text>
-      <text class="title" x=${M.left + 4} y=${M.top + 12}>${yLabel}</text>
-      ${lines.map(
-        (
-          l,
-        ) => svg`<line class=${l.cls} x1=${M.left} x2=${W - M.right} y1=${sy(l.y)} y2=${sy(l.y)}></line>
-          <text class="label" x=${W - M.right - 2} y=${sy(l.y) - 4} text-anchor="end">${l.text}</text>`,
+      <text class="title" x="4" y="16">${yLabel}</text>
+      ${lines.map((l) => svg`<line class=${l.cls} x1=${M.left} x2=${W - M.right} y1=${sy(l.y)} y2=${sy(l.y)}></line>`)}
+      ${labelRows(lines.map((l) => ({ y: sy(l.y), text: l.text }))).map(
+        (l) => svg`<text class="label" x=${M.left + 4} y=${l.y - 4}>${l.text}</text>`,
       )}
       <path class="curve" d=${path}></path>
       ${marks.map((m) =>
@@ -206,7 +204,10 @@ export class CheckChart extends LitElement {
     const x = (T: number) => d.fromSI('temperature', T);
     const pg = (pAbs: number) => d.gaugeFromAbsolute(pAbs);
     const pressurePts = c.points.map((p) => ({ x: x(p.T), y: pg(p.pAbsolute) }));
-    const liquidPts = c.points.map((p) => ({ x: x(p.T), y: p.liquidFraction * 100 }));
+    const liquidPts = c.points.map((p) => ({
+      x: x(p.T),
+      y: d.fromSI('fraction', p.liquidFraction),
+    }));
     const points = c.points;
     const at = (T: number) =>
       points.reduce((best, p) => (Math.abs(p.T - T) < Math.abs(best.T - T) ? p : best));
@@ -254,8 +255,8 @@ export class CheckChart extends LitElement {
           'Liquid percent of the tank volume against liquid temperature',
           'Liquid (% of volume)',
           liquidPts,
-          [{ y: 100, cls: 'full', text: '100 % liquid-full' }],
-          marks((p) => p.liquidFraction * 100),
+          [{ y: d.fromSI('fraction', 1), cls: 'full', text: '100 % liquid-full' }],
+          marks((p) => d.fromSI('fraction', p.liquidFraction)),
         )}
         <figcaption>
           How full of liquid the tank becomes as it warms. Dotted: 100 %, liquid-full.
@@ -263,6 +264,18 @@ export class CheckChart extends LitElement {
       </figure>
     </div>`;
   }
+}
+
+/** Line labels in screen y; labels closer than a text line are merged ("design = relief setting"). */
+export function labelRows(lines: { y: number; text: string }[]): { y: number; text: string }[] {
+  const sorted = [...lines].sort((a, b) => a.y - b.y);
+  const out: { y: number; text: string }[] = [];
+  for (const l of sorted) {
+    const last = out.at(-1);
+    if (last && Math.abs(l.y - last.y) < 14) last.text = `${last.text} = ${l.text}`;
+    else out.push({ ...l });
+  }
+  return out;
 }
 
 function fmtTick(v: number): string {

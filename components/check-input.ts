@@ -3,9 +3,9 @@
  * `TankCheckInput`, or a list of what is still missing. No arithmetic on units here: the only
  * sum is peak liquid temperature = peak air temperature + sun allowance, both already in K.
  */
-import { checkTank, InputError, listFluids } from '../thermo/index.js';
+import { checkTank, InputError } from '../thermo/index.js';
 import type { TankCheckInput, TankCheckResult } from '../thermo/check/types.js';
-import { productFor, productLabel } from './products.js';
+import { productFor, productLabel, tripleTemperatures } from './products.js';
 import type { CheckSummary, Readings, Settings, TankRecord } from './types.js';
 
 /** Temperatures the check accepts, K (thermo/check/validate.ts: 150…400 K). */
@@ -13,20 +13,7 @@ export const T_RANGE_K = { min: 150, max: 400 } as const;
 
 /** Lowest liquid temperature the check accepts for this product, K: 150 K or just above the triple point. */
 export function minTemperatureFor(productId: string): number {
-  const product = productFor(productId);
-  const ids =
-    typeof product === 'string'
-      ? [product]
-      : product && 'components' in product
-        ? product.components.map((c) => c.id)
-        : [];
-  const fluids = listFluids();
-  let t: number = T_RANGE_K.min;
-  for (const id of ids) {
-    const f = fluids.find((x) => x.id === id);
-    if (f) t = Math.max(t, f.Ttriple + 0.1);
-  }
-  return t;
+  return Math.max(T_RANGE_K.min, ...tripleTemperatures(productId).map((t) => t + 0.1));
 }
 
 /** Human names of the readings, as the field labels say them. */

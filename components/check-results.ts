@@ -23,6 +23,7 @@ import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
 import type { Caution, TankCheckResult, TankPhase } from '../thermo/check/types.js';
+import { T_60F_K } from '../thermo/constants.js';
 
 /** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
 export const STANDING_FALLBACK =
@@ -349,7 +350,7 @@ export class CheckResults extends LitElement {
           <dd>${this._fig('result-total-mass', 'mass', c.totalMass)}</dd>
           <dt>Liquid volume</dt>
           <dd>${this._fig('result-liquid-volume', 'volume', c.liquidVolume)}</dd>
-          <dt>Liquid volume at 60 °F (15.6 °C)</dt>
+          <dt>Liquid volume at ${base60(d)}</dt>
           <dd>${this._fig('result-volume-60f', 'volume', c.liquidVolumeAt60F)}</dd>
           <dt>Liquid and vapour mass</dt>
           <dd>${d.format('mass', c.liquidMass)} + ${d.format('mass', c.vapourMass)}</dd>
@@ -373,7 +374,7 @@ export class CheckResults extends LitElement {
           <dd>${d.format('fraction', f.maxFillingDensity, 'down')}</dd>
           <dt>Room left as liquid now</dt>
           <dd>${this._fig('room-left-volume', 'volume', f.roomLeftVolume, 'down')}</dd>
-          <dt>Room left as liquid at 60 °F</dt>
+          <dt>Room left as liquid at ${base60(d)}</dt>
           <dd>${this._fig('room-left-volume-60f', 'volume', f.roomLeftVolumeAt60F, 'down')}</dd>
           ${
             f.volumetricMaxPercent !== null
@@ -457,7 +458,7 @@ export class CheckResults extends LitElement {
         g.propaneFraction !== null
           ? html`<p class="note">
               It fits a propane/butane mix of about
-              ${formatPercent(g.propaneFraction * 100, 'nearest', 0)} propane (by moles, estimate).
+              ${d.format('fraction', g.propaneFraction, 'nearest', 0)} propane (by moles, estimate).
             </p>`
           : nothing
       }
@@ -482,6 +483,11 @@ export class CheckResults extends LitElement {
       </p>
     `;
   }
+}
+
+/** The trade's base temperature, 60 °F, in the user's unit ("60 °F" or "15.6 °C"). */
+function base60(d: DisplayUnits): string {
+  return d.format('temperature', T_60F_K).replace(/\.0 /, ' ');
 }
 
 function capital(s: string): string {

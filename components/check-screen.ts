@@ -15,7 +15,8 @@
  */
 import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
 import { baseStyles } from './styles.js';
-import { DisplayUnits } from './display.js';
+import { DisplayUnits, formatPercent } from './display.js';
+import type { TankCheckResult } from '../thermo/check/types.js';
 import './check-form.js';
 import './check-results.js';
 import './check-chart.js';
@@ -138,13 +139,30 @@ export class CheckScreen extends LitElement {
       textarea {
         min-height: 10rem;
       }
+      .keybar {
+        position: sticky;
+        bottom: 0;
+        z-index: 5;
+        margin: 0.75rem -0.75rem 0;
+        padding: 0.4rem 0.75rem;
+        background: var(--ink);
+        color: var(--paper);
+        font-weight: 700;
+        font-size: 0.9em;
+        line-height: 1.3;
+      }
+      .keybar .small {
+        font-weight: 400;
+        font-size: 0.85em;
+      }
       @media print {
         .layout {
           display: block;
         }
         check-form,
         check-history,
-        .actions {
+        .actions,
+        .keybar {
           display: none;
         }
       }
@@ -358,9 +376,25 @@ export class CheckScreen extends LitElement {
             <check-history .checks=${this.checks} .display=${d}></check-history>
           </div>
         </div>
+        <div class="keybar" data-testid="key-bar" aria-hidden="true">
+          ${
+            result
+              ? html`Stop at ${formatPercent(result.fillLimit.stopAtGaugePercent, 'down')} · limit
+                ${d.format('mass', result.fillLimit.maxMass, 'down')} · peak
+                ${d.format('gaugePressure', result.peak.p, 'up')}
+                ${topLevel(result) ? html` · ${topLevel(result)!.toUpperCase()}` : nothing}`
+              : html`No figures yet`
+          }
+          <div class="small">Model figures: site procedures and the code come first.</div>
+        </div>
       </div>
     `;
   }
+}
+
+/** The most severe caution level other than the standing caution, if any. */
+function topLevel(r: TankCheckResult): string | null {
+  return r.cautions.find((c) => c.code !== 'standing')?.level ?? null;
 }
 
 customElements.define('check-screen', CheckScreen);

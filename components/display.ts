@@ -37,9 +37,13 @@ const DIFFERENCE: Record<UnitPrefs['pressure'], UnitIds['pressureDifference']> =
 function decimalsFor(q: Quantity, unit: string): number | undefined {
   switch (q) {
     case 'gaugePressure':
-    case 'pressure':
     case 'pressureDifference':
       return unit.startsWith('psi') || unit.startsWith('kPa') ? 0 : 2;
+    case 'pressure':
+      // Absolute pressures sit near the barometer, where one more digit tells sites apart.
+      return unit.startsWith('psi') ? 1 : unit.startsWith('kPa') ? 0 : 3;
+    case 'volume':
+      return undefined;
     case 'temperature':
     case 'temperatureDifference':
       return 1;

@@ -2,8 +2,14 @@
  * The products a tank can hold, as the app offers them: every fluid the core lists, grouped
  * the way the trade thinks of them, plus the LP-gas blend presets of the check engine. The
  * stored tank keeps only `productId`; `productFor` turns it into the core's `Product`.
+ *
+ * It reads the core's data tables directly (names, triple points, preset compositions) rather
+ * than through thermo/index.ts, so the tank register and the tank form load without the
+ * solvers: the engine arrives with the check screen, in its own chunk (first-load budget).
  */
-import { listFluids, LPG_PRESETS, type Product } from '../thermo/index.js';
+import { FLUIDS } from '../thermo/data/fluids.js';
+import { LPG_PRESETS } from '../thermo/rules/presets.js';
+import type { Product } from '../thermo/index.js';
 
 export type ProductGroup = 'LP-gas' | 'Ammonia' | 'Refrigerant' | 'Carbon dioxide' | 'Other';
 
@@ -42,7 +48,7 @@ let cached: ProductChoice[] | null = null;
 export function productChoices(): ProductChoice[] {
   if (cached) return cached;
   const order: ProductGroup[] = ['LP-gas', 'Ammonia', 'Refrigerant', 'Carbon dioxide', 'Other'];
-  const fluids: ProductChoice[] = listFluids().map((f) => ({
+  const fluids: ProductChoice[] = FLUIDS.map((f) => ({
     id: f.id,
     label: f.name,
     group: groupOf(f.id),
@@ -66,4 +72,19 @@ export function productFor(id: string): Product | undefined {
 /** Display label of a stored product id (the id itself when unknown). */
 export function productLabel(id: string): string {
   return productChoice(id)?.label ?? id;
+}
+
+/** Triple-point temperatures of the product's components, K (the lowest the core accepts). */
+export function tripleTemperatures(id: string): number[] {
+  const product = productFor(id);
+  const ids =
+    typeof product === 'string'
+      ? [product]
+      : product && 'components' in product
+        ? product.components.map((c) => c.id)
+        : [];
+  return ids.flatMap((x) => {
+    const f = FLUIDS.find((fl) => fl.id === x);
+    return f ? [f.Ttriple] : [];
+  });
 }

@@ -119,7 +119,8 @@ export interface UnitPrefs {
   temperature: 'F' | 'C';
   volume: 'usgal' | 'L' | 'm3';
   mass: 'lb' | 'kg';
-  length: 'in' | 'cm';
+  /** Level heights and dimensions (the settings offer in and cm; ft and m are for elevations). */
+  length: 'in' | 'cm' | 'ft' | 'm';
 }
 
 /** How the site's barometric pressure is known. */

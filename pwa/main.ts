@@ -1,19 +1,18 @@
-// Placeholder entry point (infrastructure) until the app shell lands. It only wires the
-// service-worker messages so the build, offline and update paths can be tested end to end.
+/**
+ * Entry point loaded by index.html: starts the app shell and registers the service worker.
+ * A new version never reloads by itself: the shell shows "A new version is ready — reload when
+ * you're done" and reloads only on the user's tap. The first install is announced once.
+ */
+import './tankside-app.js';
 import { registerServiceWorker } from './sw-register.js';
 
-const status = document.getElementById('sw-status');
+const app = document.querySelector('tankside-app');
 
 registerServiceWorker({
-  onOfflineReady() {
-    if (status) status.textContent = 'Ready to work offline.';
-  },
   onUpdateReady(applyUpdate) {
-    if (!status) return;
-    const button = document.createElement('button');
-    button.type = 'button';
-    button.textContent = 'New version ready — reload';
-    button.addEventListener('click', applyUpdate, { once: true });
-    status.replaceChildren(button);
+    app?.offerUpdate(applyUpdate);
+  },
+  onOfflineReady() {
+    void app?.offlineReady();
   },
 });
