@@ -513,6 +513,15 @@ describe('checkTank identities', () => {
   });
 });
 
+describe('checkTank fill limit references', () => {
+  it('checkTank keeps the not-liquid-full limit at the present temperature when the peak is colder', () => {
+    const r = checkTank(base({ liquidTemperature: F(120), peakTemperature: F(60) }));
+    const lim = r.fillLimit.limits.find((l) => l.id === 'not-liquid-full-at-peak')!;
+    expect(lim.referenceTemperature).toBe(F(120));
+    expect(r.cautions.map((c) => c.code)).toContain('peak-below-now');
+  });
+});
+
 describe('checkTank cautions', () => {
   it('checkTank always ends its cautions with the standing caution and never words a result as permission', () => {
     for (const i of [

@@ -7,7 +7,7 @@
  * is where the saturated liquid density falls to ρ; the relief temperature is where the
  * closed-tank pressure, raised by the model allowance, reaches the relief set pressure.
  */
-import { InputError } from '../errors.js';
+import { ConvergenceError, InputError } from '../errors.js';
 import { T_60F_K } from '../constants.js';
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
 import { fillingRule, isLpGas, referenceRules } from '../rules/gases.js';
@@ -41,6 +41,23 @@ const P_STEP = 100;
 
 /** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
 export function checkTank(input: TankCheckInput): TankCheckResult {
+  try {
+    return check(input);
+  } catch (e) {
+    // The core never hides a failed solve. Where it cannot solve this product at these
+    // temperatures, say so about the input rather than crash with another error type.
+    if (e instanceof ConvergenceError) {
+      throw new InputError(
+        'product',
+        `a product and temperatures the model can solve (${e.message})`,
+        undefined,
+      );
+    }
+    throw e;
+  }
+}
+
+function check(input: TankCheckInput): TankCheckResult {
   const c = validateInput(input);
   const model = new ProductModel(input.product);
   const b = model.basics;
@@ -131,10 +148,13 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
   refs.push({
     id: 'not-liquid-full-at-peak',
     kind: 'physical',
-    description: 'The tank must not become liquid-full at the forecast peak liquid temperature',
+    description:
+      c.Tpeak >= c.T
+        ? 'The tank must not become liquid-full at the forecast peak liquid temperature'
+        : 'The tank must not become liquid-full at the present liquid temperature (warmer than the forecast peak)',
     citation:
       'physics of a closed tank (a liquid-full tank’s pressure climbs steeply with temperature); the same principle as 49 CFR 173.304(b) — common practice for storage',
-    referenceTemperature: c.Tpeak,
+    referenceTemperature: Math.max(c.Tpeak, c.T),
   });
   const skippedRefs: number[] = [];
   for (const r of refs) {

@@ -11,7 +11,7 @@
  * Single-phase states of a blend still come from `closedTank`.
  */
 import { closedTank, criticalTemperature, maxDensity, saturation } from '../api.js';
-import { InputError } from '../errors.js';
+import { ConvergenceError, InputError } from '../errors.js';
 import { resolveProduct, type Product } from '../product.js';
 import { T_60F_K } from '../constants.js';
 import type { TankPhase } from './types.js';
@@ -111,7 +111,10 @@ export class ProductModel {
         const r = saturation(this.product, T);
         s = { p: r.p, rhoL: r.rhoL, rhoV: r.rhoV };
       } catch (e) {
-        if (!(e instanceof InputError && e.field === 'T')) throw e;
+        // No bubble point (the core says which T) or none found near a blend's critical
+        // region: no saturation state here, as the core's own closed tank treats it.
+        if (!((e instanceof InputError && e.field === 'T') || e instanceof ConvergenceError))
+          throw e;
       }
     }
     this.sats.set(T, s);
