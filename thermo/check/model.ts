@@ -93,12 +93,41 @@ export function productBasics(product: Product): ProductBasics {
   return b;
 }
 
+/** Top of each product's saturation curve, K (memoised by the product's JSON). */
+const topCache = new Map<string, number>();
+
 export class ProductModel {
   readonly basics: ProductBasics;
   private readonly sats = new Map<number, Sat | null>();
 
   constructor(readonly product: Product) {
     this.basics = productBasics(product);
+  }
+
+  /**
+   * Highest temperature (to 0.01 K, at most 400 K) with a saturation state: Tc − 0.5 K for a pure
+   * fluid; for a blend found once by bisection on where the core's bubble point stops existing
+   * (it ends in the blend's critical region), then memoised like the other product constants.
+   */
+  satTop(): number {
+    const b = this.basics;
+    if (b.pure) return Math.min(400, b.Tc - 0.5);
+    const key = JSON.stringify(this.product);
+    const hit = topCache.get(key);
+    if (hit !== undefined) return hit;
+    let lo = T_60F_K; // a liquefied gas has a bubble point at 60 °F (productBasics checked it)
+    let hi = 400;
+    if (this.sat(hi)) lo = hi;
+    else {
+      while (hi - lo > 0.01) {
+        const mid = 0.5 * (lo + hi);
+        if (this.sat(mid)) lo = mid;
+        else hi = mid;
+      }
+    }
+    if (topCache.size > 200) topCache.clear();
+    topCache.set(key, lo);
+    return lo;
   }
 
   /** Saturation (pure) or bubble point (blend) at T, or null above the critical point / region. */

@@ -16,10 +16,9 @@ import { bracketRoot, type ProductModel } from './model.js';
 /** Highest temperature searched, K. */
 export const T_SEARCH_MAX = 400;
 
-/** Upper end of the saturation curve searched: just below Tc for a pure fluid, else T_SEARCH_MAX (a blend's bubble points end where the core says). */
+/** Upper end of the saturation curve searched, K (see ProductModel.satTop). */
 export function satTop(model: ProductModel): number {
-  const b = model.basics;
-  return Math.min(T_SEARCH_MAX, b.pure ? b.Tc - 0.5 : T_SEARCH_MAX);
+  return Math.min(T_SEARCH_MAX, model.satTop());
 }
 
 /**
@@ -128,9 +127,12 @@ export function liquidFullTemperature(
     const d = s ? Math.max(0, s.rhoL - rhoc) : 0;
     return target - d ** 3;
   };
-  const hints: [number, number][] = [];
-  for (const T of hintsT) if (T >= Tlo && T <= Thi) hints.push([T, y(T)]);
-  if (hints.length === 0) hints.push([Tlo, y(Tlo)]);
+  // Still short of liquid-full where the saturation curve ends: it never fills (the liquid
+  // meets the vapour at the critical point instead).
+  const yTop = y(Thi);
+  if (yTop < 0) return null;
+  const hints: [number, number][] = [[Thi, yTop]];
+  for (const T of hintsT) if (T >= Tlo && T < Thi) hints.push([T, y(T)]);
   const T = solveIncreasing(y, hints, Tlo, Thi, 0.002);
   if (T === null) return null;
   const s = model.sat(T);
