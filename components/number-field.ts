@@ -155,9 +155,8 @@ export class NumberField extends LitElement {
   private _format(v: number | null): string {
     if (v === null || !Number.isFinite(v)) return '';
     if (this.quantity === null) return String(Number(v.toFixed(this.decimals ?? 2)));
-    const text = this.display.number(this.quantity, v, 'nearest', this.decimals);
     // Drop trailing zeros the user never typed ("68.0" → "68").
-    return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
+    return trimZeros(this.display.number(this.quantity, v, 'nearest', this.decimals));
   }
 
   private _unit(): string {
@@ -166,14 +165,15 @@ export class NumberField extends LitElement {
 
   /** The valid range in the user's unit, e.g. "from −40 to 140 °F". */
   private _range(): string {
-    const f = (v: number) =>
-      this.quantity === null ? String(v) : this.display.number(this.quantity, v, 'nearest');
+    // The shown limits are rounded inward, so typing a shown limit is always accepted.
+    const f = (v: number, round: 'up' | 'down') =>
+      this.quantity === null ? String(v) : trimZeros(this.display.number(this.quantity, v, round));
     const unit = this._unit();
     const u = unit ? ` ${unit}` : '';
     if (this.min !== undefined && this.max !== undefined)
-      return `from ${f(this.min)} to ${f(this.max)}${u}`;
-    if (this.min !== undefined) return `at least ${f(this.min)}${u}`;
-    if (this.max !== undefined) return `at most ${f(this.max)}${u}`;
+      return `from ${f(this.min, 'up')} to ${f(this.max, 'down')}${u}`;
+    if (this.min !== undefined) return `at least ${f(this.min, 'up')}${u}`;
+    if (this.max !== undefined) return `at most ${f(this.max, 'down')}${u}`;
     return 'a number';
   }
 
@@ -283,6 +283,11 @@ export function parseDecimal(text: string): number | null | undefined {
   if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(normal)) return undefined;
   const x = Number(normal);
   return Number.isFinite(x) ? x : undefined;
+}
+
+/** "68.0" → "68", "0.10" → "0.1"; integers are left alone. */
+function trimZeros(text: string): string {
+  return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
 }
 
 function sameNumber(a: number | null, b: number | null): boolean {

@@ -18,6 +18,8 @@ import { DisplayUnits } from '../../components/display.js';
 import { buildCheckInput } from '../../components/check-input.js';
 import { checkTank } from '../../thermo/index.js';
 import { toSI } from '../../thermo/units.js';
+import { byTestId, deep } from './dom.js';
+import { FIELD_ERROR } from './dom.js';
 
 const settings: Settings = {
   ...DEFAULT_SETTINGS,
@@ -49,25 +51,6 @@ function readings(patch: Partial<Readings> = {}): Readings {
     peakAirTemperature: toSI('temperature', 30, 'C'),
     ...patch,
   };
-}
-
-/** Finds an element through the nested shadow roots. */
-function deep(root: Element | ShadowRoot, selector: string): HTMLElement | null {
-  const direct = root.querySelector<HTMLElement>(selector);
-  if (direct) return direct;
-  for (const el of root.querySelectorAll('*')) {
-    if (el.shadowRoot) {
-      const hit = deep(el.shadowRoot, selector);
-      if (hit) return hit;
-    }
-  }
-  return null;
-}
-
-function byTestId(el: Element, id: string): HTMLElement {
-  const hit = deep(el.shadowRoot!, `[data-testid="${id}"]`);
-  if (!hit) throw new Error(`no [data-testid="${id}"]`);
-  return hit;
 }
 
 async function settle(el: CheckScreen): Promise<void> {
@@ -150,7 +133,7 @@ describe('check-screen', () => {
     );
     await settle(el);
     await typeInto(el, 'gauge-percent', '140');
-    const err = deep(el.shadowRoot!, 'number-field .error') ?? deep(el.shadowRoot!, '.error');
+    const err = deep(el, FIELD_ERROR);
     expect(err?.textContent).to.contain('Float gauge must be from 0 to 100 %');
     expect(byTestId(el, 'results-error').textContent).to.contain('not valid');
     expect(deep(el.shadowRoot!, '[data-testid="fill-limit"]')).to.equal(null);

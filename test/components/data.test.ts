@@ -1,0 +1,221 @@
+/// <reference types="mocha" />
+// Backup validation, CSV export, routes and chart helpers (pure functions, run in the browser
+// with the other app tests). Kind: identity / behaviour; records are placeholders.
+import { expect } from '@open-wc/testing';
+import { BACKUP_FORMAT, makeBackup, parseBackup } from '../../pwa/backup.js';
+import { checksToCsv } from '../../pwa/csv.js';
+import { href, parseRoute } from '../../pwa/router.js';
+import { buildDemo, DEMO_SITE } from '../../pwa/demo.js';
+import { niceAxis, labelRows } from '../../components/check-chart.js';
+import { DisplayUnits } from '../../components/display.js';
+import { blankTank } from '../../components/tank-form.js';
+import {
+  DEFAULT_SETTINGS,
+  emptyReadings,
+  type CheckRecord,
+  type TankRecord,
+} from '../../components/types.js';
+
+function tank(id: string, name = `Tank ${id}`): TankRecord {
+  return {
+    ...blankTank(id, '2024-01-01T00:00:00.000Z'),
+    site: 'S',
+    name,
+    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+  };
+}
+
+function check(id: string, tankId: string): CheckRecord {
+  return {
+    id,
+    tankId,
+    at: '2024-02-01T10:00:00.000Z',
+    demo: false,
+    productLabel: 'Propane',
+    readings: { ...emptyReadings(5), liquidTemperature: 293.15, gaugePercent: 50 },
+    summary: {
+      phase: 'two-phase',
+      pressure: 7e5,
+      totalMass: 200,
+      liquidVolume: 0.4,
+      fillingDensity: 0.2,
+      maxMass: 400,
+      roomLeftMass: 200,
+      stopAtGaugePercent: 80,
+      binding: 'rule',
+      peakTemperature: 303.15,
+      peakPressure: 9e5,
+      peakLiquidFraction: 0.55,
+      headroomToDesign: 1e5,
+      headroomToRelief: -2e4,
+      liquidFullTemperature: null,
+      topLevel: 'warning',
+      cautions: [
+        { level: 'warning', code: 'w', message: 'A warning, with "quotes"' },
+        { level: 'notice', code: 'standing', message: 'Standing.' },
+      ],
+    },
+  };
+}
+
+describe('parseBackup', () => {
+  it('parseBackup accepts what makeBackup wrote, unchanged', () => {
+    const data = {
+      tanks: [tank('a')],
+      checks: [check('c', 'a')],
+      settings: { ...DEFAULT_SETTINGS, theme: 'standard' as const },
+    };
+    const r = parseBackup(JSON.stringify(makeBackup(data)));
+    expect(r.ok).to.equal(true);
+    if (r.ok) expect(r.data).to.deep.equal(data);
+  });
+
+  it('parseBackup refuses text that is not JSON', () => {
+    const r = parseBackup('name,site\nx,y');
+    expect(r.ok).to.equal(false);
+    if (!r.ok) expect(r.reason).to.contain('not JSON');
+  });
+
+  it('parseBackup refuses a JSON file from something else', () => {
+    const r = parseBackup(JSON.stringify({ hello: 'world', tanks: [] }));
+    expect(r.ok).to.equal(false);
+    if (!r.ok) expect(r.reason).to.contain('not a backup from this app');
+  });
+
+  it('parseBackup refuses a backup from a newer version', () => {
+    const r = parseBackup(
+      JSON.stringify({ format: BACKUP_FORMAT, version: 99, tanks: [], checks: [] }),
+    );
+    expect(r.ok).to.equal(false);
+    if (!r.ok) expect(r.reason).to.contain('newer version');
+  });
+
+  it('parseBackup names the tank and the field that is wrong', () => {
+    const bad = {
+      ...tank('a', 'Broken one'),
+      nameplate: { waterCapacity: 'lots', designPressure: 1e6 },
+    };
+    const r = parseBackup(
+      JSON.stringify(
+        makeBackup({ tanks: [bad as unknown as TankRecord], checks: [], settings: null }),
+      ),
+    );
+    expect(r.ok).to.equal(false);
+    if (!r.ok) {
+      expect(r.reason).to.contain('Broken one');
+      expect(r.reason).to.contain('waterCapacity');
+      expect(r.reason).to.contain('Nothing was changed');
+    }
+  });
+
+  it('parseBackup refuses a check of a tank not in the file, duplicate ids and NaN figures', () => {
+    expect(
+      parseBackup(
+        JSON.stringify(
+          makeBackup({ tanks: [tank('a')], checks: [check('c', 'zzz')], settings: null }),
+        ),
+      ).ok,
+    ).to.equal(false);
+    expect(
+      parseBackup(
+        JSON.stringify(makeBackup({ tanks: [tank('a'), tank('a')], checks: [], settings: null })),
+      ).ok,
+    ).to.equal(false);
+    const c = check('c', 'a');
+    const text = JSON.stringify(
+      makeBackup({ tanks: [tank('a')], checks: [c], settings: null }),
+    ).replace('"maxMass":400', '"maxMass":"NaN"');
+    expect(parseBackup(text).ok).to.equal(false);
+  });
+
+  it('parseBackup refuses settings with an unknown unit', () => {
+    const s = { ...DEFAULT_SETTINGS, units: { ...DEFAULT_SETTINGS.units, pressure: 'mmHg' } };
+    const r = parseBackup(
+      JSON.stringify(makeBackup({ tanks: [], checks: [], settings: s as never })),
+    );
+    expect(r.ok).to.equal(false);
+    if (!r.ok) expect(r.reason).to.contain('pressure');
+  });
+});
+
+describe('checksToCsv', () => {
+  it('checksToCsv writes one row per check with the units in the headings and rounds toward safety', () => {
+    const d = new DisplayUnits({
+      pressure: 'kPag',
+      temperature: 'C',
+      volume: 'L',
+      mass: 'kg',
+      length: 'cm',
+    });
+    const csv = checksToCsv([tank('a', '=cmd()')], [check('c', 'a')], d);
+    const lines = csv.trimEnd().split('\r\n');
+    expect(lines).to.have.length(2);
+    expect(lines[0]).to.contain('fill limit (kg, rounded down)');
+    expect(lines[0]).to.contain('liquid temperature (°C)');
+    expect(lines[1]).to.contain("'=cmd()"); // a name that looks like a formula is made inert
+    expect(lines[1]).to.contain('"warning: A warning, with ""quotes"""');
+    expect(lines[1]).to.contain(',20.0,'); // 293.15 K = 20.0 °C
+    expect(lines[1]).to.contain(',-20,'); // headroom to relief, kPa, rounded down
+    expect(csv).not.to.contain('NaN');
+  });
+});
+
+describe('router', () => {
+  it('parseRoute reads every screen and href writes it back', () => {
+    const cases = [
+      ['', { name: 'tanks' }],
+      ['#/', { name: 'tanks' }],
+      ['#/tank/new', { name: 'new' }],
+      ['#/tank/abc-1', { name: 'check', id: 'abc-1' }],
+      ['#/tank/abc-1/edit', { name: 'edit', id: 'abc-1' }],
+      ['#/settings', { name: 'settings' }],
+      ['#/data', { name: 'data' }],
+    ] as const;
+    for (const [hash, route] of cases) {
+      expect(parseRoute(hash)).to.deep.equal(route);
+      if (hash) expect(parseRoute(href(route))).to.deep.equal(route);
+    }
+    expect(parseRoute('#/nowhere/at/all').name).to.equal('not-found');
+  });
+});
+
+describe('buildDemo', () => {
+  it('buildDemo makes six plainly invented tanks at one invented site, all marked demo, each with readings', () => {
+    const demo = buildDemo();
+    expect(demo.tanks).to.have.length(6);
+    for (const t of demo.tanks) {
+      expect(t.demo).to.equal(true);
+      expect(t.site).to.equal(DEMO_SITE);
+      expect(t.name).to.match(/^Demo: /);
+    }
+    expect(DEMO_SITE).to.contain('not a real place');
+    expect(demo.drafts.map((d) => d.tankId)).to.deep.equal(demo.tanks.map((t) => t.id));
+    for (const d of demo.drafts) expect(d.readings.liquidTemperature).to.be.a('number');
+  });
+});
+
+describe('check-chart helpers', () => {
+  it('niceAxis covers the range with round steps', () => {
+    const a = niceAxis(43.2, 287.9);
+    expect(a.min).to.be.at.most(43.2);
+    expect(a.max).to.be.at.least(287.9);
+    expect(a.ticks[1]! - a.ticks[0]!).to.equal(50);
+    const flat = niceAxis(100, 100);
+    expect(flat.max).to.be.greaterThan(flat.min);
+  });
+
+  it('labelRows merges labels of lines that sit on top of each other', () => {
+    expect(
+      labelRows([
+        { y: 50, text: 'design' },
+        { y: 52, text: 'relief' },
+      ]),
+    ).to.deep.equal([{ y: 50, text: 'design = relief' }]);
+    expect(
+      labelRows([
+        { y: 50, text: 'design' },
+        { y: 90, text: 'relief' },
+      ]),
+    ).to.have.length(2);
+  });
+});

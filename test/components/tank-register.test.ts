@@ -1,0 +1,149 @@
+/// <reference types="mocha" />
+// <tank-list> and <tank-form>: grouping, events out, validation. Test tanks are placeholders.
+import { expect, fixture, html, oneEvent } from '@open-wc/testing';
+import '../../components/tank-list.js';
+import '../../components/tank-form.js';
+import type { TankList } from '../../components/tank-list.js';
+import type { TankForm, TankSaveDetail } from '../../components/tank-form.js';
+import { blankTank } from '../../components/tank-form.js';
+import type { TankRecord } from '../../components/types.js';
+import { DisplayUnits } from '../../components/display.js';
+import { toSI } from '../../thermo/units.js';
+import { byTestId, deep, deepAll, typeText } from './dom.js';
+import { FIELD_ERROR } from './dom.js';
+
+const metric = new DisplayUnits({
+  pressure: 'barg',
+  temperature: 'C',
+  volume: 'L',
+  mass: 'kg',
+  length: 'cm',
+});
+
+function tank(id: string, site: string, name: string, demo = false): TankRecord {
+  return {
+    ...blankTank(id, '2024-01-01T00:00:00.000Z'),
+    site,
+    name,
+    demo,
+    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+  };
+}
+
+describe('tank-list', () => {
+  it('tank-list groups tanks by site, sites and names in order', async () => {
+    const el = await fixture<TankList>(
+      html`<tank-list
+        .tanks=${[tank('a', 'South yard', 'Tank 2'), tank('b', 'North yard', 'Tank 9'), tank('c', 'South yard', 'Tank 10')]}
+      ></tank-list>`,
+    );
+    const sites = [...el.shadowRoot!.querySelectorAll('h3.site')].map((h) => h.textContent);
+    expect(sites).to.deep.equal(['North yard', 'South yard']);
+    const ids = deepAll(el, '[data-testid="tank-item"]').map((li) => li.dataset.tankId);
+    expect(ids).to.deep.equal(['b', 'a', 'c']); // numeric-aware: Tank 2 before Tank 10
+  });
+
+  it('tank-list fires open, edit, duplicate and delete with the tank id', async () => {
+    const el = await fixture<TankList>(
+      html`<tank-list .tanks=${[tank('x', 'S', 'T')]}></tank-list>`,
+    );
+    for (const [sel, type] of [
+      ['button.open', 'tank-open'],
+      ['[data-testid="tank-edit"]', 'tank-edit'],
+      ['[data-testid="tank-duplicate"]', 'tank-duplicate'],
+      ['[data-testid="tank-delete"]', 'tank-delete'],
+    ] as const) {
+      const ev = oneEvent(el, type);
+      deep(el.shadowRoot!, sel)!.click();
+      expect(((await ev) as CustomEvent<{ id: string }>).detail.id).to.equal('x');
+    }
+  });
+
+  it('tank-list offers to clear the demo only when demo tanks exist', async () => {
+    const el = await fixture<TankList>(
+      html`<tank-list .tanks=${[tank('d', 'Demo', 'Demo: thing', true)]}></tank-list>`,
+    );
+    const ev = oneEvent(el, 'demo-clear');
+    byTestId(el, 'demo-clear').click();
+    await ev;
+    el.tanks = [tank('m', 'Mine', 'Mine')];
+    await el.updateComplete;
+    expect(deep(el.shadowRoot!, '[data-testid="demo-clear"]')).to.equal(null);
+  });
+
+  it('tank-list says so when there are no tanks', async () => {
+    const el = await fixture<TankList>(html`<tank-list .tanks=${[]}></tank-list>`);
+    expect(el.shadowRoot!.textContent).to.contain('No tanks yet');
+  });
+});
+
+describe('tank-form', () => {
+  it('tank-form refuses to save a new tank until name, water capacity and design pressure are given', async () => {
+    const el = await fixture<TankForm>(
+      html`<tank-form .tank=${blankTank('n1')} .display=${metric}></tank-form>`,
+    );
+    let fired = false;
+    el.addEventListener('tank-save', () => (fired = true));
+    byTestId(el, 'tank-save').click();
+    await el.updateComplete;
+    expect(fired).to.equal(false);
+    const msg = el.shadowRoot!.querySelector('.error[role="alert"]')!.textContent!;
+    expect(msg).to.contain('Name');
+    expect(msg).to.contain('Water capacity');
+    expect(msg).to.contain('Design pressure');
+  });
+
+  it('tank-form fires tank-save with the nameplate in SI', async () => {
+    const el = await fixture<TankForm>(
+      html`<tank-form .tank=${blankTank('n2')} .display=${metric}></tank-form>`,
+    );
+    typeText(byTestId(el, 'tank-name') as HTMLInputElement, ' Test tank ');
+    typeText(byTestId(el, 'tank-site') as HTMLInputElement, 'Bench');
+    typeText(byTestId(el, 'tank-water-capacity') as HTMLInputElement, '450');
+    typeText(byTestId(el, 'tank-design-pressure') as HTMLInputElement, '17,2');
+    const select = byTestId(el, 'tank-product') as HTMLSelectElement;
+    select.value = 'n-butane';
+    select.dispatchEvent(new Event('change'));
+    await el.updateComplete;
+    const ev = oneEvent(el, 'tank-save');
+    byTestId(el, 'tank-save').click();
+    const { tank: t } = ((await ev) as CustomEvent<TankSaveDetail>).detail;
+    expect(t.id).to.equal('n2');
+    expect(t.name).to.equal('Test tank');
+    expect(t.site).to.equal('Bench');
+    expect(t.productId).to.equal('n-butane');
+    expect(t.nameplate.waterCapacity).to.be.closeTo(toSI('volume', 450, 'L'), 1e-12);
+    expect(t.nameplate.designPressure).to.be.closeTo(toSI('gaugePressure', 17.2, 'barg'), 1e-6);
+    expect(t.nameplate.reliefSetPressure).to.equal(undefined);
+  });
+
+  it('tank-form blocks saving while a figure is out of range and names the range', async () => {
+    const t = tank('e1', 'S', 'Edit me');
+    const el = await fixture<TankForm>(html`<tank-form .tank=${t} .display=${metric}></tank-form>`);
+    typeText(byTestId(el, 'tank-design-pressure') as HTMLInputElement, '5000');
+    await el.updateComplete;
+    let fired = false;
+    el.addEventListener('tank-save', () => (fired = true));
+    byTestId(el, 'tank-save').click();
+    await el.updateComplete;
+    expect(fired).to.equal(false);
+    expect(deep(el, FIELD_ERROR)?.textContent).to.match(
+      /Design pressure \(MAWP\) must be from 0.1 to 1000 bar g/,
+    );
+  });
+
+  it('tank-form asks for the dimensions when a shape is chosen', async () => {
+    const el = await fixture<TankForm>(
+      html`<tank-form .tank=${tank('s1', 'S', 'Shape')} .display=${metric}></tank-form>`,
+    );
+    const shape = el.shadowRoot!.querySelector<HTMLSelectElement>('#shape')!;
+    shape.value = 'horizontal-cylinder';
+    shape.dispatchEvent(new Event('change'));
+    await el.updateComplete;
+    let fired = false;
+    el.addEventListener('tank-save', () => (fired = true));
+    byTestId(el, 'tank-save').click();
+    await el.updateComplete;
+    expect(fired).to.equal(false);
+  });
+});
