@@ -151,6 +151,18 @@ describe('checkTank property', () => {
     ).toBeGreaterThan(200);
   });
 
+  it('checkTank names contents.netMass for more product than the model can hold above Tc', () => {
+    // Found by this property: R-134a at 400 K (above its critical point) with 2,000 kg in 1.47 m³.
+    const input = {
+      tank: { waterCapacity: 1.4713, designPressure: 2e7 },
+      product: 'r134a',
+      liquidTemperature: 400,
+      contents: { netMass: 2000 },
+      peakTemperature: 322.4,
+    };
+    expect(() => checkTank(input)).toThrow(/contents\.netMass/);
+  });
+
   it('checkTank names only its own input fields in an InputError', () => {
     const own =
       /^(input|tank|product|specificGravity|liquidTemperature|contents|gaugePressure|pressureGauge|barometricPressure|elevation|peakTemperature)\b/;

@@ -81,7 +81,7 @@ function check(input: TankCheckInput): TankCheckResult {
     if (contents.netMass > cap) {
       throw new InputError(
         'contents.netMass',
-        `from 0 to ${Math.floor(cap)} kg for this tank (110 % of a liquid-full tank at the entered temperature)`,
+        `from 0 to ${Math.floor(cap)} kg for this tank (110 % of a liquid-full tank at the entered temperature, within what the model can hold)`,
         contents.netMass,
       );
     }
@@ -265,9 +265,10 @@ function check(input: TankCheckInput): TankCheckResult {
 
 function netMassCap(model: ProductModel, c: CleanInput): number {
   const s = model.sat(c.T);
-  if (s) return 1.1 * s.rhoL * c.V;
-  // Above the critical point: up to 110 % of the liquid density at 60 °F.
-  return 1.1 * model.basics.rho60 * c.V;
+  // 110 % of a liquid-full tank at this temperature (above the critical point: of the liquid
+  // density at 60 °F), and never beyond what the model can hold at this temperature.
+  const rhoCap = s ? 1.1 * s.rhoL : 1.1 * model.basics.rho60;
+  return Math.min(rhoCap, model.maxDensityAt(c.T)) * c.V;
 }
 
 function buildFillLimit(

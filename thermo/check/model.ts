@@ -160,6 +160,11 @@ export class ProductModel {
     return this.state(T, rho);
   }
 
+  /** The most the model can hold per m³ of tank at T, kg/m³ (the core's close-packed limit). */
+  maxDensityAt(T: number): number {
+    return maxDensity(this.product, T);
+  }
+
   /** Highest temperature in [Tlo, Thi] at which the model can hold overall density rho, K (bisection on the core's limit). */
   maxTemperatureFor(rho: number, Tlo: number, Thi: number): number {
     let lo = Tlo;
