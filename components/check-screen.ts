@@ -9,6 +9,9 @@
  * @fires readings-change - bubbles up from <check-form> (the shell keeps it as a draft).
  * @fires check-delete - bubbles up from <check-history>.
  *
+ * The host carries `data-check-input`: the JSON of the `checkTank` input behind the figures
+ * shown (absent while a reading is missing or invalid).
+ *
  * data-testid: `check-screen`, `check-save`, `check-share`, `check-print`, `readings-clear`,
  * `check-status`, `tank-heading`, plus those of <check-form>, <check-results>, <check-chart>
  * and <check-history>.
@@ -151,6 +154,14 @@ export class CheckScreen extends LitElement {
         font-size: 0.9em;
         line-height: 1.3;
       }
+      .print-only {
+        display: none;
+      }
+      @media print {
+        .print-only {
+          display: block;
+        }
+      }
       .keybar .small {
         font-weight: 400;
         font-size: 0.85em;
@@ -177,6 +188,14 @@ export class CheckScreen extends LitElement {
     }
     if (changed.has('readings') || changed.has('tank') || changed.has('settings'))
       this._recompute();
+  }
+
+  protected override updated(): void {
+    // The engine input behind the figures on screen, for end-to-end tests and for anyone who
+    // wants to re-run `checkTank` on exactly what the screen used (SI, as JSON).
+    const input = this._outcome?.input;
+    if (input && this._valid) this.dataset.checkInput = JSON.stringify(input);
+    else delete this.dataset.checkInput;
   }
 
   override disconnectedCallback(): void {
@@ -313,6 +332,7 @@ export class CheckScreen extends LitElement {
             ${d.format('gaugePressure', np.designPressure)} · relief
             ${d.format('gaugePressure', relief)}
           </p>
+          <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
           <button class="quiet no-print" @click=${this._editTank}>Edit tank</button>
         </div>
         <div class="layout">

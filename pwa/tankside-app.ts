@@ -128,7 +128,7 @@ export class TanksideApp extends LitElement {
       header {
         background: var(--ink);
         color: var(--paper);
-        padding: 0.25rem 0.5rem;
+        padding: 0.25rem 0.5rem 0.4rem;
         display: flex;
         flex-wrap: wrap;
         align-items: center;
@@ -137,21 +137,23 @@ export class TanksideApp extends LitElement {
       header .brand {
         font-weight: 800;
         font-size: 1.05rem;
-        margin-right: auto;
+        flex: 1 1 auto;
       }
       nav {
-        display: flex;
+        display: grid;
+        grid-template-columns: repeat(3, minmax(0, 1fr));
         gap: 0.25rem;
-        flex-wrap: wrap;
+        flex: 1 1 18rem;
       }
-      nav a {
+      nav a.button {
         color: var(--paper);
-        border-color: transparent;
-        background: transparent;
-        padding: 0.5rem 0.55rem;
-      }
-      nav a[aria-current='page'] {
         border-color: var(--paper);
+        background: transparent;
+        padding: 0.5rem 0.3rem;
+      }
+      nav a.button[aria-current='page'] {
+        background: var(--paper);
+        color: var(--ink);
       }
       main {
         padding: 0.75rem;
@@ -285,7 +287,9 @@ export class TanksideApp extends LitElement {
         };
     }
     await this.updateComplete;
-    this.renderRoot.querySelector<HTMLElement>('main')?.focus({ preventScroll: false });
+    // A new screen starts at its top, and a screen reader starts reading there.
+    window.scrollTo(0, 0);
+    this.renderRoot.querySelector<HTMLElement>('main')?.focus({ preventScroll: true });
   }
 
   /** Loads the check screen and the engine on first use (a separate chunk, precached for offline use). */

@@ -202,6 +202,35 @@ describe('tankside-app', () => {
     ).to.equal(false);
   });
 
+  it('tankside-app deletes a tank with its checks and undoes it on request', async () => {
+    const db = dbName();
+    const app = await start(db);
+    const first = deepAll(app, '[data-testid="tank-item"]')[0]!;
+    const id = first.dataset.tankId!;
+    first.querySelector<HTMLButtonElement>('[data-testid="tank-delete"]')!.click();
+    await waitUntil(
+      () => !deepAll(app, '[data-testid="tank-item"]').some((i) => i.dataset.tankId === id),
+      'deleted',
+    );
+    const notice = await waitFor(app, 'notice');
+    expect(notice.dataset.kind).to.equal('undo');
+    byTestId(app, 'notice-action').click();
+    await waitUntil(
+      () => deepAll(app, '[data-testid="tank-item"]').some((i) => i.dataset.tankId === id),
+      'restored',
+    );
+    expect((await (await Store.open(db)).getDraft(id))?.tankId).to.equal(id);
+  });
+
+  it('tankside-app duplicates a tank as a new, non-demo tank and opens it for editing', async () => {
+    const app = await start(dbName());
+    const first = deepAll(app, '[data-testid="tank-item"]')[0]!;
+    first.querySelector<HTMLButtonElement>('[data-testid="tank-duplicate"]')!.click();
+    const name = (await waitFor(app, 'tank-name')) as HTMLInputElement;
+    expect(name.value).to.match(/\(copy\)$/);
+    expect(location.hash).to.match(/\/edit$/);
+  });
+
   it('tankside-app says when a tank in a link does not exist', async () => {
     const app = await start(dbName());
     await go(app, '#/tank/no-such-tank');

@@ -87,6 +87,10 @@ describe('check-screen', () => {
     expect(Number(byTestId(el, 'peak-pressure').dataset.si)).to.equal(expected.peak.p);
     expect(byTestId(el, 'standing-caution').textContent).to.contain(expected.standingCaution);
     expect(el.shadowRoot!.textContent).not.to.contain('NaN');
+    // The host says which engine input the figures come from.
+    expect(JSON.parse(el.dataset.checkInput!)).to.deep.equal(
+      JSON.parse(JSON.stringify(buildCheckInput(tank, r, settings).input)),
+    );
   });
 
   it('check-screen updates the results live when the liquid temperature changes (no compute button)', async () => {
