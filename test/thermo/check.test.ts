@@ -14,6 +14,7 @@ import {
   type TankCheckResult,
 } from '../../thermo/index.js';
 import { WATER_FD_KG_M3 } from '../../thermo/rules/water.js';
+import { LPG_PRESETS } from '../../thermo/rules/presets.js';
 import { fromSI, toSI } from '../../thermo/units.js';
 import { expectRel, expectWithin } from './check-helpers.js';
 
@@ -510,6 +511,53 @@ describe('checkTank identities', () => {
       source: 'core closedTank',
       kind: 'regression',
     });
+  });
+});
+
+describe('checkTank fill limits end to end (FACTS cases 4, 5)', () => {
+  it('checkTank applies the 42 % / 45 % / 46 % and cargo dip-tube limits for SG 0.508', () => {
+    // derived, H-27 + 173.315 Note 1 (FACTS cases 4, 5); ±0.5 lb (case 4), ±1 lb (case 5).
+    // Peak 60 °F so that the not-liquid-full limit does not bind.
+    const run = (gallons: number, tank: Partial<TankCheckInput['tank']>) =>
+      checkTank(
+        base({
+          tank: { waterCapacity: gal(gallons), designPressure: psig(250), ...tank },
+          specificGravity: 0.508,
+          liquidTemperature: F(60),
+          peakTemperature: F(60),
+          contents: { gaugePercent: 20 },
+        }),
+      );
+    const cases: [number, Partial<TankCheckInput['tank']>, number, number, string][] = [
+      [1000, {}, 3497.9, 0.5, 'h27-aboveground-small'],
+      [2000, {}, 7495.5, 0.5, 'h27-aboveground-large'],
+      [2000, { placement: 'underground' }, 7662.0, 0.5, 'h27-underground'],
+      [3000, { containerClass: 'cargo', fixedDipTube: true }, 10905.8, 1, 'dot-cargo-large'],
+    ];
+    for (const [g, t, expected, tol, id] of cases) {
+      const r = run(g, t);
+      expect(r.fillLimit.binding).toBe(id);
+      expectWithin(lb(r.fillLimit.maxMass), expected, tol, {
+        input: { g, t },
+        source: FACTS(id.startsWith('dot') ? 5 : 4),
+        kind: 'published',
+      });
+      // rounded toward safety: never above the exact rule figure
+      expect(lb(r.fillLimit.maxMass)).toBeLessThanOrEqual(expected + tol);
+    }
+  });
+  it('checkTank gives every LP-gas preset a band and names a blend’s liquid-full temperature or says why not', () => {
+    for (const p of LPG_PRESETS) {
+      const r = checkTank(
+        base({ product: p.product, contents: { gaugePercent: 50 }, liquidTemperature: F(70) }),
+      );
+      expect(r.product.lpGas).toBe(true);
+      expect(r.fillLimit.limits.some((l) => l.kind === 'rule')).toBe(true);
+      if (r.liquidFullTemperature === null) expect(codes(r)).toContain('liquid-full-beyond-model');
+      const sum = p.product.components.reduce((s, c) => s + c.moleFraction, 0);
+      expect(sum).toBeCloseTo(1, 12);
+      expect(p.source.length).toBeGreaterThan(20);
+    }
   });
 });
 

@@ -214,6 +214,20 @@ export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] 
       'pressureDifference',
     );
   }
+  if (
+    r.liquidFullTemperature === null &&
+    !k.model.basics.pure &&
+    r.contents.overallDensity > k.model.basics.rhoc
+  ) {
+    const top = k.model.satTop();
+    add(
+      'notice',
+      'liquid-full-beyond-model',
+      `No liquid-full temperature is given: for this blend it lies above ${fmtT(top, 'down')}, beyond the range where the model finds its bubble point.`,
+      top,
+      'temperature',
+    );
+  }
   if (p.phase === 'supercritical' && r.phase !== 'supercritical') {
     add(
       'caution',
