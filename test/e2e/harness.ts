@@ -193,6 +193,8 @@ export function useApp(): AppFixture {
     },
     async newContext(options = {}) {
       const context = await fixture.browser.newContext({ ...PHONE, ...options });
+      // A step that hangs fails with its own locator in the message, well before the test timeout.
+      context.setDefaultTimeout(15_000);
       const requests = recordRequests(context);
       const page = await context.newPage();
       const o = { context, page, requests };
