@@ -18,7 +18,7 @@ import {
   flashPT,
   mixtureAtT,
   phaseAt,
-  saturationPressure,
+  saturationPointAt,
   stabilityTest,
 } from './solvers/mixture.js';
 import { pureSaturation, pureVolume } from './solvers/pure.js';
@@ -108,7 +108,7 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
   const mx = mixtureAtT(r, T);
   let b;
   try {
-    b = saturationPressure(mx, r.z, 'bubble');
+    b = saturationPointAt(r, T, 'bubble');
   } catch {
     throw new InputError(
       'T',
@@ -245,7 +245,7 @@ export function dewPoint(product: Product, T: number, options?: ModelOptions): D
   const mx = mixtureAtT(r, T);
   let d;
   try {
-    d = saturationPressure(mx, r.z, 'dew');
+    d = saturationPointAt(r, T, 'dew');
   } catch {
     throw new InputError('T', `below the blend's critical region (no dew point at ${fmt(T)} K)`, T);
   }

@@ -18,7 +18,7 @@ import { ConvergenceError } from '../errors.js';
 import type { ResolvedProduct } from '../product.js';
 import { R_J_molK } from '../constants.js';
 import { pressureForVolume } from './inverse.js';
-import { flashPT, mixtureAtT, phaseAt, saturationPressure, type MixtureAtT } from './mixture.js';
+import { flashPT, mixtureAtT, phaseAt, saturationPointAt, type MixtureAtT } from './mixture.js';
 import { pureSaturation, volumeAlong } from './pure.js';
 
 export type Phase = 'two-phase' | 'liquid' | 'vapour' | 'supercritical';
@@ -162,37 +162,6 @@ function singlePhase(
   };
 }
 
-/**
- * The last bubble and dew points found for each blend. A heating sweep or a bisection calls
- * this at nearby temperatures again and again; starting the successive substitution from the
- * last solution cuts its iterations by half or more. The answer does not depend on the start
- * (same convergence test), only the work does.
- */
-const warmStarts = new WeakMap<
-  ResolvedProduct,
-  { bubble?: { p: number; K: Float64Array }; dew?: { p: number; K: Float64Array } }
->();
-
-function saturationWarm(mx: MixtureAtT, product: ResolvedProduct, kind: 'bubble' | 'dew') {
-  const memo = warmStarts.get(product) ?? {};
-  warmStarts.set(product, memo);
-  const start = memo[kind];
-  let point;
-  try {
-    point = saturationPressure(mx, product.z, kind, start);
-  } catch (e) {
-    if (!start) throw e;
-    // A start from a distant temperature can mislead; retry from scratch before giving up.
-    point = saturationPressure(mx, product.z, kind);
-  }
-  const z = product.z;
-  memo[kind] = {
-    p: point.p,
-    K: Float64Array.from(point.incipient, (w, i) => (kind === 'bubble' ? w / z[i]! : z[i]! / w)),
-  };
-  return point;
-}
-
 function closedTankBlend(product: ResolvedProduct, T: number, rho: number): ClosedTankState {
   const mx = mixtureAtT(product, T);
   const z = product.z;
@@ -200,7 +169,7 @@ function closedTankBlend(product: ResolvedProduct, T: number, rho: number): Clos
   const v = M / rho;
   let bubble;
   try {
-    bubble = saturationWarm(mx, product, 'bubble');
+    bubble = saturationPointAt(product, T, 'bubble');
   } catch (e) {
     if (!(e instanceof ConvergenceError)) throw e;
   }
@@ -210,7 +179,7 @@ function closedTankBlend(product: ResolvedProduct, T: number, rho: number): Clos
   if (v <= bubble.vBulk) return singlePhase(mx, z, rho, v, 'liquid', true, { pLo: bubble.p });
   let dew;
   try {
-    dew = saturationWarm(mx, product, 'dew');
+    dew = saturationPointAt(product, T, 'dew');
   } catch (e) {
     if (!(e instanceof ConvergenceError)) throw e;
   }

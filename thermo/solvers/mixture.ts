@@ -24,10 +24,8 @@ export interface MixtureAtT {
   /** a_ij = √(a_i a_j)(1 − k_ij), row-major n×n. */
   readonly aij: Float64Array;
   readonly b: Float64Array;
-  /** Volume-correction terms per component at T: c_i(T), δ_i, ε_i(T), v_c,cub,i. */
-  readonly c: Float64Array;
-  readonly delta: Float64Array;
-  readonly eps: Float64Array;
+  /** Critical temperatures and cubic critical volumes of the components (for the volume correction). */
+  readonly Tc: Float64Array;
   readonly vcCub: Float64Array;
   readonly M: Float64Array;
   readonly product: ResolvedProduct;
@@ -37,18 +35,13 @@ export function mixtureAtT(product: ResolvedProduct, T: number): MixtureAtT {
   const n = product.components.length;
   const a = new Float64Array(n);
   const b = new Float64Array(n);
-  const c = new Float64Array(n);
-  const delta = new Float64Array(n);
-  const eps = new Float64Array(n);
+  const Tc = new Float64Array(n);
   const vcCub = new Float64Array(n);
   const M = new Float64Array(n);
   product.components.forEach((m, i) => {
     a[i] = m.ac * m.alpha(T).alpha;
     b[i] = m.b;
-    const k = correctionAtT(m.correction, m.Tc, m.vcCub, T);
-    c[i] = k.c;
-    delta[i] = k.delta;
-    eps[i] = k.eps;
+    Tc[i] = m.Tc;
     vcCub[i] = m.vcCub;
     M[i] = m.molarMass;
   });
@@ -56,7 +49,7 @@ export function mixtureAtT(product: ResolvedProduct, T: number): MixtureAtT {
   for (let i = 0; i < n; i++)
     for (let j = 0; j < n; j++)
       aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - (product.kij[i]?.[j] ?? 0));
-  return { T, n, aij, b, c, delta, eps, vcCub, M, product };
+  return { T, n, aij, b, Tc, vcCub, M, product };
 }
 
 export interface PhaseState {
@@ -73,12 +66,16 @@ export interface PhaseState {
 
 const family = (mx: MixtureAtT) => mx.product.components[0]!.family;
 
-/** Phase properties at (T, p) for composition x on the chosen root. */
+/**
+ * Phase properties at (T, p) for composition x on the chosen root. Iterations that need only
+ * ln φ pass `withVolume = false` (then `v` is NaN) and skip the volume correction.
+ */
 export function phaseAt(
   mx: MixtureAtT,
   p: number,
   x: ArrayLike<number>,
   choice: RootChoice,
+  withVolume = true,
 ): PhaseState {
   const { n, aij, b, T } = mx;
   const fam = family(mx);
@@ -129,10 +126,23 @@ export function phaseAt(
     [Z, lnPhi] = gL <= gV ? [zL, fL] : [zV, fV];
   }
   const vCub = (Z * R * T) / p;
-  return { Z, lnPhi, v: mixtureModelVolume(mx, x, vCub, am, bm), vCub, nRoots: roots.length };
+  return {
+    Z,
+    lnPhi,
+    v: withVolume ? mixtureModelVolume(mx, x, vCub, am, bm) : NaN,
+    vCub,
+    nRoots: roots.length,
+  };
 }
 
-/** The model's molar volume from the cubic's vCub for composition x (a_mix, b_mix given). */
+/**
+ * The model's molar volume from the cubic's vCub for composition x (a_mix, b_mix given).
+ * The correction terms mix linearly in mole fraction, each component's taken at the phase's
+ * reduced temperature T/Tpc (Kay's rule, Tpc = Σ x_i·Tc_i) rather than at T itself: the steep
+ * near-critical shape of c_i(T) then follows the blend's own critical region instead of
+ * switching on at each component's Tc (a propane-rich liquid at 370 K is far from critical even
+ * though propane alone would be). For a pure fluid this is exactly the pure-fluid correction.
+ */
 export function mixtureModelVolume(
   mx: MixtureAtT,
   x: ArrayLike<number>,
@@ -140,15 +150,22 @@ export function mixtureModelVolume(
   am: number,
   bm: number,
 ): number {
+  let Tpc = 0;
+  for (let i = 0; i < mx.n; i++) Tpc += x[i]! * mx.Tc[i]!;
   let c = 0;
   let delta = 0;
   let eps = 0;
   let vc = 0;
+  const comps = mx.product.components;
   for (let i = 0; i < mx.n; i++) {
-    c += x[i]! * mx.c[i]!;
-    delta += x[i]! * mx.delta[i]!;
-    eps += x[i]! * mx.eps[i]!;
-    vc += x[i]! * mx.vcCub[i]!;
+    const xi = x[i]!;
+    if (xi === 0) continue;
+    const m = comps[i]!;
+    const k = correctionAtT(m.correction, m.Tc, m.vcCub, (mx.T * m.Tc) / Tpc);
+    c += xi * k.c;
+    delta += xi * k.delta;
+    eps += xi * k.eps;
+    vc += xi * m.vcCub;
   }
   const T = mx.T;
   const d = -((vCub * vCub) / (R * T)) * dPdv(family(mx), R, T, vCub, am, bm);
@@ -181,10 +198,13 @@ function norm1(x: Float64Array): number {
 }
 
 /**
- * Bubble (kind = 'bubble') or dew (kind = 'dew') pressure at T for the given composition, by
- * successive substitution on K_i = φ_i,L/φ_i,V with the pressure update p ← p·Σ K_i x_i
- * (bubble) or p ← p/Σ y_i/K_i (dew). Residual: |Σ − 1|. Rejects the trivial solution (phases
- * of equal composition), which means T is above the mixture's critical region.
+ * Bubble (kind = 'bubble') or dew (kind = 'dew') pressure at T for the given composition.
+ * First successive substitution on K_i = φ_i,L/φ_i,V with the pressure update p ← p·Σ K_i x_i
+ * (bubble) or p ← p/Σ y_i/K_i (dew); where that is slow (near the blend's critical region)
+ * Newton's method on (ln K_i, ln p) with a finite-difference Jacobian takes over (Michelsen &
+ * Mollerup, Thermodynamic Models: Fundamentals and Computational Aspects, ch. 12). Residual:
+ * max of |Σ − 1| and the fugacity residuals. Rejects the trivial solution (phases of equal
+ * composition), which means T is above the blend's critical region.
  */
 export function saturationPressure(
   mx: MixtureAtT,
@@ -219,17 +239,37 @@ export function saturationPressure(
     p = s;
     K = Float64Array.from(ps, (x) => x / p);
   }
+  const bulkChoice = kind === 'bubble' ? 'liquid' : 'vapour';
+  const incChoice = kind === 'bubble' ? 'vapour' : 'liquid';
   const w = new Float64Array(n);
-  let resid = Infinity;
-  for (let it = 1; it <= 300; it++) {
+  const incipientOf = (Kv: ArrayLike<number>, out: Float64Array) => {
     let S = 0;
     for (let i = 0; i < n; i++) {
-      w[i] = kind === 'bubble' ? K[i]! * z[i]! : z[i]! / K[i]!;
-      S += w[i]!;
+      out[i] = kind === 'bubble' ? Kv[i]! * z[i]! : z[i]! / Kv[i]!;
+      S += out[i]!;
     }
-    for (let i = 0; i < n; i++) w[i] = w[i]! / S;
-    const bulk = phaseAt(mx, p, z, kind === 'bubble' ? 'liquid' : 'vapour');
-    const inc = phaseAt(mx, p, w, kind === 'bubble' ? 'vapour' : 'liquid');
+    for (let i = 0; i < n; i++) out[i] = out[i]! / S;
+    return S;
+  };
+  const finish = (it: number, resid: number): SaturationPoint => {
+    incipientOf(K, w);
+    return {
+      p,
+      incipient: Float64Array.from(w),
+      vBulk: phaseAt(mx, p, z, bulkChoice).v,
+      vIncipient: phaseAt(mx, p, w, incChoice).v,
+      converged: true,
+      iterations: it,
+      residual: resid,
+      reason: 'converged',
+    };
+  };
+  let resid = Infinity;
+  let it = 0;
+  for (; it < 25; it++) {
+    incipientOf(K, w);
+    const bulk = phaseAt(mx, p, z, bulkChoice, false);
+    const inc = phaseAt(mx, p, w, incChoice, false);
     let S2 = 0;
     let trivial = 0;
     for (let i = 0; i < n; i++) {
@@ -240,37 +280,96 @@ export function saturationPressure(
       S2 += kind === 'bubble' ? K[i]! * z[i]! : z[i]! / K[i]!;
     }
     resid = Math.abs(S2 - 1);
-    if (trivial < 1e-8) {
-      throw new ConvergenceError(
-        `${kind} pressure`,
-        `phases became identical at T = ${T} K (above the blend's critical region)`,
-        it,
-        resid,
-      );
-    }
-    if (resid < 1e-11) {
-      return {
-        p,
-        incipient: Float64Array.from(w),
-        vBulk: bulk.v,
-        vIncipient: inc.v,
-        converged: true,
-        iterations: it,
-        residual: resid,
-        reason: 'converged',
-      };
-    }
+    if (trivial < 1e-8) break;
+    if (resid < 1e-11) return finish(it + 1, resid);
     const pNew = kind === 'bubble' ? p * S2 : p / S2;
     // Damp large jumps so a poor start cannot throw the iteration out of the two-root region.
     p = Math.min(Math.max(pNew, p / 3), p * 3);
     if (!Number.isFinite(p) || p <= 0) break;
   }
+  // Newton on u = (ln K_1 … ln K_n, ln p).
+  const F = (u: Float64Array, out: Float64Array): boolean => {
+    const pp = Math.exp(u[n]!);
+    const Kv = u.subarray(0, n).map(Math.exp);
+    const S = incipientOf(Kv, w);
+    const bulk = phaseAt(mx, pp, z, bulkChoice, false);
+    const inc = phaseAt(mx, pp, w, incChoice, false);
+    if (bulk.nRoots === 1 && inc.nRoots === 1 && Math.abs(bulk.Z - inc.Z) < 1e-9) return false;
+    for (let i = 0; i < n; i++) {
+      out[i] =
+        kind === 'bubble'
+          ? u[i]! + inc.lnPhi[i]! - bulk.lnPhi[i]!
+          : u[i]! + bulk.lnPhi[i]! - inc.lnPhi[i]!;
+    }
+    out[n] = S - 1;
+    return true;
+  };
+  const u = new Float64Array(n + 1);
+  if (!Number.isFinite(p) || p <= 0) p = start?.p ?? product.components[0]!.pc * 0.5;
+  for (let i = 0; i < n; i++) u[i] = Math.log(K[i]!);
+  u[n] = Math.log(p);
+  const f0 = new Float64Array(n + 1);
+  const f1 = new Float64Array(n + 1);
+  for (let nit = 0; nit < 60; nit++, it++) {
+    if (!F(u, f0)) break;
+    resid = Math.max(...f0.map(Math.abs));
+    let trivial = 0;
+    for (let i = 0; i < n; i++) trivial += u[i]! * u[i]!;
+    if (trivial < 1e-8) break;
+    if (resid < 1e-10) {
+      p = Math.exp(u[n]!);
+      for (let i = 0; i < n; i++) K[i] = Math.exp(u[i]!);
+      return finish(it + 1, resid);
+    }
+    const J: number[][] = Array.from({ length: n + 1 }, () => new Array<number>(n + 1).fill(0));
+    for (let k = 0; k <= n; k++) {
+      const h = 1e-7;
+      const uk = u[k]!;
+      u[k] = uk + h;
+      const ok = F(u, f1);
+      u[k] = uk;
+      if (!ok) break;
+      for (let r = 0; r <= n; r++) J[r]![k] = (f1[r]! - f0[r]!) / h;
+    }
+    const step = solveDense(
+      J,
+      Array.from(f0, (x) => -x),
+    );
+    if (!step) break;
+    const big = Math.max(...step.map(Math.abs));
+    const scale = big > 0.3 ? 0.3 / big : 1;
+    for (let k = 0; k <= n; k++) u[k] = u[k]! + scale * step[k]!;
+  }
   throw new ConvergenceError(
     `${kind} pressure`,
-    `no ${kind} point found at T = ${T} K`,
-    300,
+    `no ${kind} point found at T = ${T} K (above the blend's critical region?)`,
+    it,
     resid,
   );
+}
+
+/** Gaussian elimination with partial pivoting; null when singular. */
+function solveDense(A: number[][], b: number[]): number[] | null {
+  const n = b.length;
+  for (let c = 0; c < n; c++) {
+    let piv = c;
+    for (let r = c + 1; r < n; r++) if (Math.abs(A[r]![c]!) > Math.abs(A[piv]![c]!)) piv = r;
+    if (Math.abs(A[piv]![c]!) < 1e-300) return null;
+    [A[c], A[piv]] = [A[piv]!, A[c]!];
+    [b[c], b[piv]] = [b[piv]!, b[c]!];
+    for (let r = c + 1; r < n; r++) {
+      const f = A[r]![c]! / A[c]![c]!;
+      for (let k = c; k < n; k++) A[r]![k]! -= f * A[c]![k]!;
+      b[r]! -= f * b[c]!;
+    }
+  }
+  const x = new Array<number>(n).fill(0);
+  for (let r = n - 1; r >= 0; r--) {
+    let s = b[r]!;
+    for (let k = r + 1; k < n; k++) s -= A[r]![k]! * x[k]!;
+    x[r] = s / A[r]![r]!;
+  }
+  return x.every(Number.isFinite) ? x : null;
 }
 
 /**
@@ -361,10 +460,8 @@ export function flashPT(
       x[i] = x[i]! / sx;
       y[i] = y[i]! / sy;
     }
-    const L = phaseAt(mx, p, x, 'liquid');
-    const V = phaseAt(mx, p, y, 'vapour');
-    vL = L.v;
-    vV = V.v;
+    const L = phaseAt(mx, p, x, 'liquid', false);
+    const V = phaseAt(mx, p, y, 'vapour', false);
     resid = 0;
     for (let i = 0; i < n; i++) {
       const lnK = L.lnPhi[i]! - V.lnPhi[i]!;
@@ -372,6 +469,9 @@ export function flashPT(
       K[i] = Math.exp(lnK);
     }
     if (resid < 1e-10) {
+      // Volumes only once, at the solution: the iterations need fugacities alone.
+      vL = phaseAt(mx, p, x, 'liquid').v;
+      vV = phaseAt(mx, p, y, 'vapour').v;
       return {
         beta,
         x,
@@ -406,7 +506,7 @@ export function stabilityTest(
 ): { stable: boolean; K?: Float64Array } {
   const { n } = mx;
   if (n === 1) return { stable: true };
-  const feed = phaseAt(mx, p, z, 'stable');
+  const feed = phaseAt(mx, p, z, 'stable', false);
   const d = new Float64Array(n);
   for (let i = 0; i < n; i++) d[i] = Math.log(Math.max(z[i]!, 1e-300)) + feed.lnPhi[i]!;
   const Kw = wilsonK(mx.product, mx.T, p);
@@ -417,7 +517,7 @@ export function stabilityTest(
     for (let it = 0; it < 200; it++) {
       sumW = norm1(W);
       const w = Float64Array.from(W, (v) => v / sumW);
-      const trial = phaseAt(mx, p, w, vapourLike ? 'vapour' : 'liquid');
+      const trial = phaseAt(mx, p, w, vapourLike ? 'vapour' : 'liquid', false);
       let change = 0;
       for (let i = 0; i < n; i++) {
         const next = Math.exp(d[i]! - trial.lnPhi[i]!);
@@ -438,4 +538,101 @@ export function stabilityTest(
     }
   }
   return best ? { stable: false, K: best.K } : { stable: true };
+}
+
+/**
+ * The last bubble and dew point found per blend. A heating sweep, a bisection or a live form
+ * calls at nearby temperatures again and again; starting from the last solution cuts the
+ * iterations by half or more. The answer does not depend on the start (same convergence
+ * test), only the work does.
+ */
+const lastPoints = new WeakMap<
+  ResolvedProduct,
+  Partial<Record<'bubble' | 'dew', { T: number; start: { p: number; K: Float64Array } }>>
+>();
+
+/**
+ * Bubble or dew point at T that does not depend on a good start: tries directly (from `start`
+ * or Raoult's law), and where that fails — near the blend's critical region a cold start lands
+ * on the trivial solution — converges at a lower temperature and marches back up to T, each
+ * step started from the last solution, halving the step on failure. Throws ConvergenceError
+ * when T lies beyond the end of the bubble (dew) curve, i.e. above the blend's critical region.
+ */
+export function saturationPointAt(
+  product: ResolvedProduct,
+  T: number,
+  kind: 'bubble' | 'dew',
+  start?: { p: number; K: Float64Array },
+): SaturationPoint {
+  const memo = lastPoints.get(product) ?? {};
+  lastPoints.set(product, memo);
+  const startOf = (s: SaturationPoint) => ({
+    p: s.p,
+    K: Float64Array.from(s.incipient, (w, i) =>
+      kind === 'bubble' ? w / product.z[i]! : product.z[i]! / w,
+    ),
+  });
+  const remember = (s: SaturationPoint, TT: number) => {
+    memo[kind] = { T: TT, start: startOf(s) };
+    return s;
+  };
+  const attempt = (TT: number, st?: { p: number; K: Float64Array }) =>
+    saturationPressure(mixtureAtT(product, TT), product.z, kind, st);
+  const recent = memo[kind];
+  const first = start ?? (recent && Math.abs(recent.T - T) < 20 ? recent.start : undefined);
+  try {
+    return remember(attempt(T, first), T);
+  } catch (e) {
+    if (!(e instanceof ConvergenceError)) throw e;
+  }
+  if (first) {
+    try {
+      return remember(attempt(T), T);
+    } catch (e) {
+      if (!(e instanceof ConvergenceError)) throw e;
+    }
+  }
+  // Find a lower temperature that converges from a cold start.
+  let T0 = T;
+  let base: SaturationPoint | undefined;
+  const Tfloor = Math.max(product.Tmin + 1, 0.5 * T);
+  for (let dT = 5; T0 > Tfloor && !base; dT *= 2) {
+    T0 = Math.max(Tfloor, T - dT);
+    try {
+      base = attempt(T0);
+    } catch (e) {
+      if (!(e instanceof ConvergenceError)) throw e;
+    }
+  }
+  if (!base)
+    throw new ConvergenceError(
+      `${kind} pressure`,
+      `no ${kind} point found at or below T = ${T} K`,
+      0,
+      NaN,
+    );
+  let step = Math.min(2, T - T0);
+  let Tk = T0;
+  let last = base;
+  while (Tk < T) {
+    const Tn = Math.min(T, Tk + step);
+    try {
+      last = attempt(Tn, startOf(last));
+      remember(last, Tn);
+      Tk = Tn;
+      step = Math.min(step * 1.5, 5);
+    } catch (e) {
+      if (!(e instanceof ConvergenceError)) throw e;
+      step /= 2;
+      if (step < 0.01) {
+        throw new ConvergenceError(
+          `${kind} pressure`,
+          `the ${kind} curve ends near ${Tk.toFixed(2)} K, below T = ${T} K`,
+          0,
+          NaN,
+        );
+      }
+    }
+  }
+  return last;
 }
