@@ -70,6 +70,11 @@ export class BackupPanel extends LitElement {
         padding: 0.6rem;
         font-weight: 600;
       }
+      /* The file input is hidden; its label is the button, and shows the input's keyboard focus. */
+      input[type='file']:focus-visible + label {
+        outline: 3px solid var(--focus);
+        outline-offset: 2px;
+      }
       .message.error {
         border-color: var(--danger);
       }
@@ -123,7 +128,6 @@ export class BackupPanel extends LitElement {
         >
           Export a backup (JSON)
         </button>
-        <label class="button" for="import">Import a backup…</label>
         <input
           id="import"
           class="visually-hidden"
@@ -132,6 +136,7 @@ export class BackupPanel extends LitElement {
           data-testid="backup-import"
           @change=${this._onFile}
         />
+        <label class="button" for="import">Import a backup…</label>
         <button data-testid="csv-export" @click=${() => this._fire('csv-export', {})}>
           Export checks (CSV)
         </button>

@@ -135,6 +135,7 @@ export class TanksideApp extends LitElement {
         gap: 0.25rem 0.75rem;
       }
       header .brand {
+        margin: 0;
         font-weight: 800;
         font-size: 1.05rem;
         flex: 1 1 auto;
@@ -610,7 +611,7 @@ export class TanksideApp extends LitElement {
     return html`
       <div data-testid="app" data-ready=${this._ready ? 'true' : 'false'}>
         <header>
-          <span class="brand">Tankside</span>
+          <h1 class="brand">Tankside</h1>
           <nav aria-label="Main">
             <a
               class="button"

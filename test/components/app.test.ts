@@ -3,7 +3,7 @@
 // (demo site), routes, create a tank and save a check that survives a "reload" (a new app element
 // on the same database), backup export → clear → import, and the field-use rules (48 px targets,
 // no sideways scroll at 320 px). Kind: behaviour.
-import { expect, fixture, html, waitUntil } from '@open-wc/testing';
+import { expect, fixtureSync, html, waitUntil } from '@open-wc/testing';
 import { deleteDB } from 'idb';
 import '../../pwa/tankside-app.js';
 import type { TanksideApp } from '../../pwa/tankside-app.js';
@@ -23,7 +23,9 @@ after(async () => {
 });
 
 async function start(db: string, width = 360): Promise<TanksideApp> {
-  const wrap = await fixture<HTMLDivElement>(
+  // fixtureSync: the async fixture waits an animation frame for a plain <div>, and a page that
+  // runs in the background (test files run two at a time) gets no animation frames.
+  const wrap = fixtureSync<HTMLDivElement>(
     html`<div style="width:${width}px"><tankside-app db-name=${db}></tankside-app></div>`,
   );
   const app = wrap.querySelector('tankside-app')!;
