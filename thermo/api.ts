@@ -319,3 +319,35 @@ export function flash(product: Product, T: number, p: number, options?: ModelOpt
     model: r.model,
   };
 }
+
+export interface ProductDescription {
+  /** Display label, e.g. `Propane` or `Propane 90.0 % + n-butane 10.0 %`. */
+  label: string;
+  /** Mole fractions by fluid id (a custom fluid appears as `custom:<name>`). */
+  components: { id: string; moleFraction: number }[];
+  /** Molar mass, kg/mol. */
+  molarMass: number;
+  /** Lowest temperature the API accepts, K (the highest triple point of the components). */
+  Tmin: number;
+  /** Critical temperature (pure) or Kay's-rule pseudo-critical temperature (blend), K. */
+  Tc: number;
+  /** Critical density of the model (pure), or Kay's rule on the components' critical molar volumes (blend), kg/m³. */
+  rhoc: number;
+  /** The model applied. */
+  model: ModelId;
+}
+
+/** What the core makes of a product: label, composition and the constants callers need. */
+export function describeProduct(product: Product, options?: ModelOptions): ProductDescription {
+  const r = resolveProduct(product, options);
+  const vc = r.components.reduce((s, m, i) => s + r.z[i]! * (m.molarMass / m.rhoc), 0);
+  return {
+    label: r.label,
+    components: r.components.map((m, i) => ({ id: m.id, moleFraction: r.z[i]! })),
+    molarMass: r.molarMass,
+    Tmin: r.Tmin,
+    Tc: r.components.reduce((s, m, i) => s + r.z[i]! * m.Tc, 0),
+    rhoc: r.molarMass / vc,
+    model: r.model,
+  };
+}

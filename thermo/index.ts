@@ -8,6 +8,7 @@ export {
   maxDensity,
   dewPoint,
   flash,
+  describeProduct,
 } from './api.js';
 export type {
   FluidSummary,
@@ -15,6 +16,7 @@ export type {
   ClosedTankResult,
   DewState,
   FlashState,
+  ProductDescription,
 } from './api.js';
 export type { Product, CustomFluid, BlendComponent, ModelOptions } from './product.js';
 export type { Phase } from './solvers/closedTank.js';

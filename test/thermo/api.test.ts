@@ -6,6 +6,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   closedTank,
+  describeProduct,
   InputError,
   liquidDensity,
   listFluids,
@@ -306,5 +307,25 @@ describe('property: invalid input always gives the clear error', () => {
         }
       }),
     );
+  });
+});
+
+describe('describeProduct', () => {
+  it('gives the label, composition and the constants of a pure fluid and of a blend', () => {
+    const pure = describeProduct('propane');
+    expect(pure.label).toBe('Propane');
+    expect(pure.Tc).toBe(369.89);
+    // Source: critical density of the propane reference EOS (Lemmon et al. 2009), 220.478 kg/m³;
+    // the tuned model holds it exactly by construction (identity, 1e-9).
+    expect(Math.abs(pure.rhoc / 220.478 - 1)).toBeLessThan(1e-9);
+    const blend = describeProduct({
+      components: [
+        { id: 'propane', moleFraction: 0.7 },
+        { id: 'n-butane', moleFraction: 0.3 },
+      ],
+    });
+    expect(blend.components.map((c) => c.id)).toEqual(['propane', 'n-butane']);
+    expect(blend.Tc).toBeCloseTo(0.7 * 369.89 + 0.3 * 425.125, 9);
+    expect(blend.Tmin).toBe(134.895);
   });
 });

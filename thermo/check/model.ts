@@ -10,9 +10,9 @@
  * fraction = (ρ − ρV)/(ρL − ρV) with the bubble-point liquid and incipient-vapour densities.
  * Single-phase states of a blend still come from `closedTank`.
  */
-import { closedTank, criticalTemperature, maxDensity, saturation } from '../api.js';
+import { closedTank, describeProduct, maxDensity, saturation } from '../api.js';
 import { ConvergenceError, InputError } from '../errors.js';
-import { resolveProduct, type Product } from '../product.js';
+import type { Product } from '../product.js';
 import { T_60F_K } from '../constants.js';
 import type { TankPhase } from './types.js';
 
@@ -64,8 +64,8 @@ export function productBasics(product: Product): ProductBasics {
   const key = JSON.stringify(product);
   const hit = basicsCache.get(key);
   if (hit) return hit;
-  const r = resolveProduct(product);
-  const Tc = criticalTemperature(product);
+  const r = describeProduct(product);
+  const Tc = r.Tc;
   let rho60: number;
   try {
     rho60 = saturation(product, T_60F_K).rhoL;
@@ -79,14 +79,13 @@ export function productBasics(product: Product): ProductBasics {
     }
     throw e;
   }
-  const vc = r.components.reduce((sum, m, i) => sum + r.z[i]! * (m.molarMass / m.rhoc), 0);
   const b: ProductBasics = {
     label: r.label,
     pure: r.components.length === 1,
     Tmin: r.Tmin,
     Tc,
     rho60,
-    rhoc: r.molarMass / vc,
+    rhoc: r.rhoc,
   };
   if (basicsCache.size > 200) basicsCache.clear();
   basicsCache.set(key, b);
