@@ -119,7 +119,12 @@ export class TankForm extends LitElement {
   ];
 
   protected override willUpdate(changed: PropertyValues<this>): void {
-    if (changed.has('tank')) {
+    // A new tank object for the same tank (the shell re-reading storage) must not wipe what the
+    // user is typing: the draft restarts only for another tank.
+    if (
+      changed.has('tank') &&
+      (changed.get('tank') as TankRecord | undefined)?.id !== this.tank.id
+    ) {
       this._draft = structuredClone(this.tank);
       // A new tank starts with its required figures empty (NaN): they stay invalid until typed.
       const np = this._draft.nameplate;

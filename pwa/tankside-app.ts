@@ -91,6 +91,8 @@ export class TanksideApp extends LitElement {
   /** The check screen (with the check engine) is loaded; it comes in its own chunk. */
   declare _checkScreenReady: boolean;
 
+  /** The blank tank of the "add a tank" screen, made once per visit so a re-render keeps the typing. */
+  private _newTank: TankRecord = blankTank(newId());
   private _store: Store | null = null;
   private _meta: Meta | null = null;
   private _undoTimer: ReturnType<typeof setTimeout> | undefined;
@@ -275,6 +277,7 @@ export class TanksideApp extends LitElement {
 
   private async _go(route: Route): Promise<void> {
     this._flushDraft();
+    if (route.name === 'new' && this._route.name !== 'new') this._newTank = blankTank(newId());
     this._route = route;
     this._dataMessage = '';
     if (route.name === 'check' && this._store) {
@@ -535,7 +538,7 @@ export class TanksideApp extends LitElement {
       case 'new':
         return html`<tank-form
           heading="Add a tank"
-          .tank=${blankTank(newId())}
+          .tank=${this._newTank}
           .display=${display}
           .sites=${sites}
           @tank-save=${this._saveTank}

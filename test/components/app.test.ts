@@ -233,6 +233,16 @@ describe('tankside-app', () => {
     expect(location.hash).to.match(/\/edit$/);
   });
 
+  it('tankside-app keeps a half-typed new tank when a notice re-renders the shell', async () => {
+    const app = await start(dbName());
+    await go(app, '#/tank/new');
+    typeText((await waitFor(app, 'tank-name')) as HTMLInputElement, 'Half typed');
+    await app.offlineReady();
+    app.offerUpdate(() => undefined);
+    await settleAll(app.shadowRoot!);
+    expect((byTestId(app, 'tank-name') as HTMLInputElement).value).to.equal('Half typed');
+  });
+
   it('tankside-app says when a tank in a link does not exist', async () => {
     const app = await start(dbName());
     await go(app, '#/tank/no-such-tank');
