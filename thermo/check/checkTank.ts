@@ -299,7 +299,11 @@ function buildFillLimit(
   }
   return {
     maxMass,
-    maxFillingDensity: floorTo(maxMass / waterWeight, 1e-5),
+    // The binding limit's own figure (a table's 42 % stays 42 %, not 41.999 % from the mass
+    // rounded down to 0.01 kg); never above the rounded-down mass.
+    maxFillingDensity: binding
+      ? Math.min(binding.fillingDensity, maxMass / waterWeight + 1e-12)
+      : floorTo(maxMass / waterWeight, 1e-5),
     binding: binding ? binding.id : 'none',
     limits,
     roomLeftMass,
