@@ -266,6 +266,12 @@ export function saturationPressure(
   };
   let resid = Infinity;
   let it = 0;
+  // Successive substitution, accelerated every fourth step by the dominant-eigenvalue
+  // extrapolation (Crowe & Nishio 1975, AIChE J. 21, 528): the iterates of (ln K, ln p) approach
+  // the solution along one direction, with ratio λ; jump ahead by λ/(1 − λ) of the last step.
+  const u0 = new Float64Array(n + 1);
+  const u1 = new Float64Array(n + 1);
+  const u2 = new Float64Array(n + 1);
   for (; it < 25; it++) {
     incipientOf(K, w);
     const bulk = phaseAt(mx, p, z, bulkChoice, false);
@@ -286,6 +292,26 @@ export function saturationPressure(
     // Damp large jumps so a poor start cannot throw the iteration out of the two-root region.
     p = Math.min(Math.max(pNew, p / 3), p * 3);
     if (!Number.isFinite(p) || p <= 0) break;
+    u0.set(u1);
+    u1.set(u2);
+    for (let i = 0; i < n; i++) u2[i] = Math.log(K[i]!);
+    u2[n] = Math.log(p);
+    if (it >= 2 && it % 4 === 3) {
+      let dd = 0;
+      let dp = 0;
+      for (let i = 0; i <= n; i++) {
+        const d1 = u2[i]! - u1[i]!;
+        dd += d1 * d1;
+        dp += d1 * (u1[i]! - u0[i]!);
+      }
+      const lambda = dp !== 0 ? dd / dp : 0;
+      if (lambda > 0 && lambda < 0.95) {
+        const f = lambda / (1 - lambda);
+        for (let i = 0; i <= n; i++) u2[i] = u2[i]! + f * (u2[i]! - u1[i]!);
+        for (let i = 0; i < n; i++) K[i] = Math.exp(u2[i]!);
+        p = Math.exp(u2[n]!);
+      }
+    }
   }
   // Newton on u = (ln K_1 … ln K_n, ln p).
   const F = (u: Float64Array, out: Float64Array): boolean => {
@@ -446,6 +472,10 @@ export function flashPT(
   let beta = 0;
   let vL = NaN;
   let vV = NaN;
+  // Dominant-eigenvalue acceleration every fourth step, as in saturationPressure.
+  const u0 = new Float64Array(n);
+  const u1 = new Float64Array(n);
+  const u2 = new Float64Array(n);
   for (let it = 1; it <= 500; it++) {
     beta = rachfordRice(z, K);
     let sx = 0;
@@ -463,10 +493,27 @@ export function flashPT(
     const L = phaseAt(mx, p, x, 'liquid', false);
     const V = phaseAt(mx, p, y, 'vapour', false);
     resid = 0;
+    u0.set(u1);
+    u1.set(u2);
     for (let i = 0; i < n; i++) {
       const lnK = L.lnPhi[i]! - V.lnPhi[i]!;
       resid = Math.max(resid, Math.abs(lnK - Math.log(K[i]!)));
       K[i] = Math.exp(lnK);
+      u2[i] = lnK;
+    }
+    if (resid >= 1e-10 && it >= 3 && it % 4 === 3) {
+      let dd = 0;
+      let dp = 0;
+      for (let i = 0; i < n; i++) {
+        const d1 = u2[i]! - u1[i]!;
+        dd += d1 * d1;
+        dp += d1 * (u1[i]! - u0[i]!);
+      }
+      const lambda = dp !== 0 ? dd / dp : 0;
+      if (lambda > 0 && lambda < 0.95) {
+        const f = lambda / (1 - lambda);
+        for (let i = 0; i < n; i++) K[i] = Math.exp(u2[i]! + f * (u2[i]! - u1[i]!));
+      }
     }
     if (resid < 1e-10) {
       // Volumes only once, at the solution: the iterations need fugacities alone.
