@@ -12,7 +12,8 @@ export function readCsv(path: string): Record<string, string>[] {
   });
 }
 
-function splitLine(line: string): string[] {
+/** Splits one CSV line, honouring double quotes around cells that contain commas. */
+export function splitLine(line: string): string[] {
   const out: string[] = [];
   let cur = '';
   let quoted = false;

@@ -1,29 +1,13 @@
 /** Small dense linear algebra for the fitting scripts (not used by the app). */
+import { solveDense } from '../../thermo/solvers/linear.js';
 
-/** Solves A·x = b by Gaussian elimination with partial pivoting. A is n×n (copied). */
+/** Solves A·x = b (A n×n, copied) with the core's Gaussian elimination; throws when singular. */
 export function solve(Ain: number[][], bin: number[]): number[] {
-  const n = bin.length;
-  const A = Ain.map((r) => r.slice());
-  const b = bin.slice();
-  for (let c = 0; c < n; c++) {
-    let piv = c;
-    for (let r = c + 1; r < n; r++) if (Math.abs(A[r]![c]!) > Math.abs(A[piv]![c]!)) piv = r;
-    [A[c], A[piv]] = [A[piv]!, A[c]!];
-    [b[c], b[piv]] = [b[piv]!, b[c]!];
-    const d = A[c]![c]!;
-    if (d === 0) throw new Error('singular matrix');
-    for (let r = c + 1; r < n; r++) {
-      const f = A[r]![c]! / d;
-      for (let k = c; k < n; k++) A[r]![k]! -= f * A[c]![k]!;
-      b[r]! -= f * b[c]!;
-    }
-  }
-  const x = new Array<number>(n).fill(0);
-  for (let r = n - 1; r >= 0; r--) {
-    let s = b[r]!;
-    for (let k = r + 1; k < n; k++) s -= A[r]![k]! * x[k]!;
-    x[r] = s / A[r]![r]!;
-  }
+  const x = solveDense(
+    Ain.map((r) => r.slice()),
+    bin.slice(),
+  );
+  if (!x) throw new Error('singular matrix');
   return x;
 }
 

@@ -4,6 +4,7 @@
  * Shared by scripts/accuracy.ts (the README table) and test/thermo/reference.test.ts.
  */
 import { readFileSync } from 'node:fs';
+import { splitLine } from '../../scripts/lib/csv.js';
 import { closedTank, liquidDensity, saturation } from '../../thermo/index.js';
 import { fluidById } from '../../thermo/data/fluids.js';
 
@@ -27,27 +28,11 @@ const DIR = new URL('./', import.meta.url);
 export function readTable(name: string): Record<string, string>[] {
   const text = readFileSync(new URL(name, DIR), 'utf8');
   const lines = text.split(/\r?\n/).filter((l) => l.trim() !== '' && !l.startsWith('#'));
-  const head = splitCsvLine(lines[0]!);
+  const head = splitLine(lines[0]!);
   return lines.slice(1).map((l) => {
-    const cells = splitCsvLine(l);
+    const cells = splitLine(l);
     return Object.fromEntries(head.map((h, i) => [h, cells[i] ?? '']));
   });
-}
-
-/** Splits one CSV line, honouring double quotes around cells that contain commas. */
-function splitCsvLine(line: string): string[] {
-  const out: string[] = [];
-  let cur = '';
-  let quoted = false;
-  for (const ch of line) {
-    if (ch === '"') quoted = !quoted;
-    else if (ch === ',' && !quoted) {
-      out.push(cur);
-      cur = '';
-    } else cur += ch;
-  }
-  out.push(cur);
-  return out;
 }
 
 export const REFERENCE_FLUIDS = readTable('fluids.csv').map((r) => r.fluid!);

@@ -13,6 +13,7 @@ import { correctedVolume, correctionAtT } from '../eos/volumeCorrection.js';
 import type { ResolvedProduct } from '../product.js';
 import type { RootChoice } from './pure.js';
 import { pureSaturation } from './pure.js';
+import { extrapolate, solveDense } from './linear.js';
 import type { SolverReport } from './result.js';
 
 const R = R_J_molK;
@@ -296,21 +297,9 @@ export function saturationPressure(
     u1.set(u2);
     for (let i = 0; i < n; i++) u2[i] = Math.log(K[i]!);
     u2[n] = Math.log(p);
-    if (it >= 2 && it % 4 === 3) {
-      let dd = 0;
-      let dp = 0;
-      for (let i = 0; i <= n; i++) {
-        const d1 = u2[i]! - u1[i]!;
-        dd += d1 * d1;
-        dp += d1 * (u1[i]! - u0[i]!);
-      }
-      const lambda = dp !== 0 ? dd / dp : 0;
-      if (lambda > 0 && lambda < 0.95) {
-        const f = lambda / (1 - lambda);
-        for (let i = 0; i <= n; i++) u2[i] = u2[i]! + f * (u2[i]! - u1[i]!);
-        for (let i = 0; i < n; i++) K[i] = Math.exp(u2[i]!);
-        p = Math.exp(u2[n]!);
-      }
+    if (it >= 2 && it % 4 === 3 && extrapolate(u0, u1, u2)) {
+      for (let i = 0; i < n; i++) K[i] = Math.exp(u2[i]!);
+      p = Math.exp(u2[n]!);
     }
   }
   // Newton on u = (ln K_1 … ln K_n, ln p).
@@ -372,30 +361,6 @@ export function saturationPressure(
     it,
     resid,
   );
-}
-
-/** Gaussian elimination with partial pivoting; null when singular. */
-function solveDense(A: number[][], b: number[]): number[] | null {
-  const n = b.length;
-  for (let c = 0; c < n; c++) {
-    let piv = c;
-    for (let r = c + 1; r < n; r++) if (Math.abs(A[r]![c]!) > Math.abs(A[piv]![c]!)) piv = r;
-    if (Math.abs(A[piv]![c]!) < 1e-300) return null;
-    [A[c], A[piv]] = [A[piv]!, A[c]!];
-    [b[c], b[piv]] = [b[piv]!, b[c]!];
-    for (let r = c + 1; r < n; r++) {
-      const f = A[r]![c]! / A[c]![c]!;
-      for (let k = c; k < n; k++) A[r]![k]! -= f * A[c]![k]!;
-      b[r]! -= f * b[c]!;
-    }
-  }
-  const x = new Array<number>(n).fill(0);
-  for (let r = n - 1; r >= 0; r--) {
-    let s = b[r]!;
-    for (let k = r + 1; k < n; k++) s -= A[r]![k]! * x[k]!;
-    x[r] = s / A[r]![r]!;
-  }
-  return x.every(Number.isFinite) ? x : null;
 }
 
 /**
@@ -501,19 +466,8 @@ export function flashPT(
       K[i] = Math.exp(lnK);
       u2[i] = lnK;
     }
-    if (resid >= 1e-10 && it >= 3 && it % 4 === 3) {
-      let dd = 0;
-      let dp = 0;
-      for (let i = 0; i < n; i++) {
-        const d1 = u2[i]! - u1[i]!;
-        dd += d1 * d1;
-        dp += d1 * (u1[i]! - u0[i]!);
-      }
-      const lambda = dp !== 0 ? dd / dp : 0;
-      if (lambda > 0 && lambda < 0.95) {
-        const f = lambda / (1 - lambda);
-        for (let i = 0; i < n; i++) K[i] = Math.exp(u2[i]! + f * (u2[i]! - u1[i]!));
-      }
+    if (resid >= 1e-10 && it >= 3 && it % 4 === 3 && extrapolate(u0, u1, u2)) {
+      for (let i = 0; i < n; i++) K[i] = Math.exp(u2[i]!);
     }
     if (resid < 1e-10) {
       // Volumes only once, at the solution: the iterations need fugacities alone.
