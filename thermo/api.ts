@@ -4,7 +4,7 @@
  * valid range; solvers that cannot converge throw `ConvergenceError`, never a silent value.
  */
 import { FLUIDS } from './data/fluids.js';
-import { InputError } from './errors.js';
+import { InputError, type InputLimits } from './errors.js';
 import type { ModelId } from './eos/model.js';
 import {
   resolveProduct,
@@ -58,8 +58,16 @@ export function listFluids(): FluidSummary[] {
 function checkTemperature(r: ResolvedProduct, T: unknown, field = 'T'): asserts T is number {
   const range = `from ${fmt(r.Tmin)} K (the triple point) to ${T_MAX_K} K`;
   if (typeof T !== 'number' || !Number.isFinite(T) || T <= 0 || T < r.Tmin || T > T_MAX_K)
-    throw new InputError(field, range, T);
+    throw new InputError(field, range, T, {
+      min: r.Tmin,
+      max: T_MAX_K,
+      quantity: 'temperature',
+      note: '(from the triple point)',
+    });
 }
+
+/** Pressures the API takes, Pa absolute: above 0 and at most 1 GPa. */
+const P_LIMITS: InputLimits = { min: 0, minExclusive: true, max: 1e9, quantity: 'pressure' };
 
 function fmt(x: number): string {
   return String(Number(x.toPrecision(6)));
@@ -101,6 +109,12 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
         'T',
         `from ${fmt(r.Tmin)} K to ${fmt(m.Tc - 0.5)} K (0.5 K below the critical temperature)`,
         T,
+        {
+          min: r.Tmin,
+          max: m.Tc - 0.5,
+          quantity: 'temperature',
+          note: '(up to just below the critical temperature)',
+        },
       );
     const s = pureSaturation(m, T);
     return { p: s.p, rhoL: m.molarMass / s.vL, rhoV: m.molarMass / s.vV, y: [1], model: r.model };
@@ -139,13 +153,19 @@ export function liquidDensity(
   const r = resolveProduct(product, options);
   checkTemperature(r, T);
   if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9)
-    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p);
+    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p, P_LIMITS);
   const sat = saturation(product, T, options);
   if (p < sat.p * (1 - 1e-9)) {
     throw new InputError(
       'p',
       `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.p)} Pa) for a liquid`,
       p,
+      {
+        min: sat.p,
+        max: P_LIMITS.max,
+        quantity: 'pressure',
+        note: `(the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this temperature) for a liquid`,
+      },
     );
   }
   if (r.components.length === 1) {
@@ -202,6 +222,13 @@ export function closedTank(
       'density',
       `above 0 and at most ${fmt(dmax)} kg/m³ for this product at this temperature`,
       density,
+      {
+        min: 0,
+        minExclusive: true,
+        max: dmax,
+        quantity: 'density',
+        note: 'for this product at this temperature',
+      },
     );
   }
   const s: ClosedTankState = closedTankState(r, T, density);
@@ -281,7 +308,7 @@ export function flash(product: Product, T: number, p: number, options?: ModelOpt
   const r = resolveProduct(product, options);
   checkTemperature(r, T);
   if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9)
-    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p);
+    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p, P_LIMITS);
   const mx = mixtureAtT(r, T);
   const z = r.z;
   const single = (): FlashState => {

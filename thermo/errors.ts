@@ -1,14 +1,38 @@
+import type { Quantity } from './units.js';
+
+/**
+ * The valid range of a refused number, for an app that shows it in the user's units. The
+ * bounds are in the field's own unit as the API takes it: SI for a `quantity` of
+ * `thermo/units.ts` (K, Pa, Pa gauge, m³, kg, kg/m³, m, fraction 0…1), or a plain number
+ * (a percent 0…100, a specific gravity) when `quantity` is absent.
+ */
+export interface InputLimits {
+  /** Lowest valid value; inclusive unless `minExclusive`. */
+  readonly min?: number;
+  /** The lowest value itself is refused (e.g. a pressure must be above 0). */
+  readonly minExclusive?: boolean;
+  /** Highest valid value, inclusive. */
+  readonly max?: number;
+  /** What the bounds measure, when it is a quantity of `thermo/units.ts`. */
+  readonly quantity?: Quantity;
+  /** Why the range is what it is, in words holding no figure in a unit (e.g. `for this product`). */
+  readonly note?: string;
+}
+
 /**
  * The one error type the public API throws for bad input. The message always names the
- * argument (field) and its valid range, so an app can show it as is.
+ * argument (field) and its valid range in SI, so a script can read it as is; `limits`, where
+ * given, carries the same range as numbers so an app can show it in the user's units.
  */
 export class InputError extends Error {
   /** Dotted path of the offending argument, e.g. `product.components[1].moleFraction`. */
   readonly field: string;
   /** Human-readable valid range, e.g. `> 0 K and at or above the triple point (85.5 K)`. */
   readonly validRange: string;
+  /** The range of `validRange` as numbers, when the field is a number with a numeric range. */
+  readonly limits?: InputLimits;
 
-  constructor(field: string, validRange: string, got?: unknown) {
+  constructor(field: string, validRange: string, got?: unknown, limits?: InputLimits) {
     const shown =
       got === undefined
         ? ''
@@ -17,6 +41,7 @@ export class InputError extends Error {
     this.name = 'InputError';
     this.field = field;
     this.validRange = validRange;
+    if (limits !== undefined) this.limits = limits;
   }
 }
 

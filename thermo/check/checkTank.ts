@@ -29,7 +29,7 @@ import type {
   TankCheckInput,
   TankCheckResult,
 } from './types.js';
-import { validateInput, type CleanInput } from './validate.js';
+import { T_CHECK_MAX_K, validateInput, type CleanInput } from './validate.js';
 
 /** x rounded down / up to a multiple of step (steps are powers of ten; dividing by 1/step keeps 0.01 steps exact). */
 const floorTo = (x: number, step: number) =>
@@ -63,8 +63,14 @@ function check(input: TankCheckInput): TankCheckResult {
   const b = model.basics;
   const Tlo = Math.max(b.Tmin + 0.01, 150);
   const tRange = `from ${Tlo.toFixed(2)} K (this product's lower limit) to 400 K`;
-  if (c.T < Tlo) throw new InputError('liquidTemperature', tRange, c.T);
-  if (c.Tpeak < Tlo) throw new InputError('peakTemperature', tRange, c.Tpeak);
+  const tLimits = {
+    min: Tlo,
+    max: T_CHECK_MAX_K,
+    quantity: 'temperature',
+    note: 'for this product',
+  } as const;
+  if (c.T < Tlo) throw new InputError('liquidTemperature', tRange, c.T, tLimits);
+  if (c.Tpeak < Tlo) throw new InputError('peakTemperature', tRange, c.Tpeak, tLimits);
 
   const lpGas = isLpGas(input.product);
   const sgModel = b.rho60 / WATER_SG_KG_M3;
@@ -83,6 +89,12 @@ function check(input: TankCheckInput): TankCheckResult {
         'contents.netMass',
         `from 0 to ${Math.floor(cap)} kg for this tank (110 % of a liquid-full tank at the entered temperature, within what the model can hold)`,
         contents.netMass,
+        {
+          min: 0,
+          max: cap,
+          quantity: 'mass',
+          note: 'for this tank (110 % of a liquid-full tank at the entered temperature, within what the model can hold)',
+        },
       );
     }
     // An empty tank still holds a trace of vapour; 1e-6 kg/m³ keeps the state defined.
@@ -105,6 +117,7 @@ function check(input: TankCheckInput): TankCheckResult {
           'contents.levelHeight',
           `from 0 to ${H.toFixed(3)} m (the inside height of this tank)`,
           contents.levelHeight,
+          { min: 0, max: H, quantity: 'length', note: '(the inside height of this tank)' },
         );
       f = fractionAtLevel(shape!, contents.levelHeight);
     }
@@ -195,6 +208,11 @@ function check(input: TankCheckInput): TankCheckResult {
       'peakTemperature',
       `at most ${Tmax.toFixed(1)} K for this fill: beyond it the model cannot hold this much product in the tank (it would be liquid-full long before)`,
       c.Tpeak,
+      {
+        max: Tmax,
+        quantity: 'temperature',
+        note: 'for this fill: beyond it the model cannot hold this much product in the tank (it would be liquid-full long before)',
+      },
     );
   }
   const peak = buildPeak(peakState, c);

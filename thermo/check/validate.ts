@@ -4,7 +4,8 @@
  * possible-but-odd values pass and become cautions later.
  */
 import { InputError } from '../errors.js';
-import { validateShape } from '../tank/geometry.js';
+import type { Quantity } from '../units.js';
+import { tankHeight, validateShape } from '../tank/geometry.js';
 import { barometricPressureAtElevation } from '../units.js';
 import type { ContainerClass, Placement, TankCheckInput } from './types.js';
 
@@ -27,9 +28,21 @@ export interface CleanInput {
   specificGravity: number | null;
 }
 
-function num(field: string, x: unknown, lo: number, hi: number, range: string): number {
+/**
+ * `x` if it is a finite number from `lo` to `hi` (inclusive); otherwise an `InputError` with
+ * `range` as its words and the same bounds as `limits`. `quantity` is what the bounds measure
+ * (absent for a plain number such as a percent 0…100).
+ */
+function num(
+  field: string,
+  x: unknown,
+  lo: number,
+  hi: number,
+  range: string,
+  quantity: Quantity | undefined,
+): number {
   if (typeof x !== 'number' || !Number.isFinite(x) || x < lo || x > hi)
-    throw new InputError(field, range, x);
+    throw new InputError(field, range, x, { min: lo, max: hi, ...(quantity ? { quantity } : {}) });
   return x;
 }
 
@@ -53,13 +66,21 @@ export function validateInput(input: TankCheckInput): CleanInput {
   const tank = input.tank;
   if (!tank || typeof tank !== 'object')
     throw new InputError('tank', 'an object { waterCapacity, designPressure, … }', tank);
-  const V = num('tank.waterCapacity', tank.waterCapacity, 1e-4, 1e5, 'from 0.0001 to 100 000 m³');
+  const V = num(
+    'tank.waterCapacity',
+    tank.waterCapacity,
+    1e-4,
+    1e5,
+    'from 0.0001 to 100 000 m³',
+    'volume',
+  );
   const designPressure = num(
     'tank.designPressure',
     tank.designPressure,
     1e4,
     1e8,
     'from 10 000 to 100 000 000 Pa gauge',
+    'gaugePressure',
   );
   const reliefGiven = tank.reliefSetPressure !== undefined;
   const reliefSetPressure = reliefGiven
@@ -69,6 +90,7 @@ export function validateInput(input: TankCheckInput): CleanInput {
         1e4,
         1e8,
         'from 10 000 to 100 000 000 Pa gauge',
+        'gaugePressure',
       )
     : designPressure;
   const placement = tank.placement ?? 'aboveground';
@@ -94,11 +116,26 @@ export function validateInput(input: TankCheckInput): CleanInput {
           73.15,
           373.15,
           'from 73.15 to 373.15 K',
+          'temperature',
         );
 
   const range = `from ${T_CHECK_MIN_K} to ${T_CHECK_MAX_K} K`;
-  const T = num('liquidTemperature', input.liquidTemperature, T_CHECK_MIN_K, T_CHECK_MAX_K, range);
-  const Tpeak = num('peakTemperature', input.peakTemperature, T_CHECK_MIN_K, T_CHECK_MAX_K, range);
+  const T = num(
+    'liquidTemperature',
+    input.liquidTemperature,
+    T_CHECK_MIN_K,
+    T_CHECK_MAX_K,
+    range,
+    'temperature',
+  );
+  const Tpeak = num(
+    'peakTemperature',
+    input.peakTemperature,
+    T_CHECK_MIN_K,
+    T_CHECK_MAX_K,
+    range,
+    'temperature',
+  );
 
   let baro: number;
   if (input.barometricPressure !== undefined) {
@@ -108,9 +145,10 @@ export function validateInput(input: TankCheckInput): CleanInput {
       20_000,
       120_000,
       'from 20 000 to 120 000 Pa absolute',
+      'pressure',
     );
   } else if (input.elevation !== undefined) {
-    const z = num('elevation', input.elevation, -500, 11_000, 'from −500 to 11 000 m');
+    const z = num('elevation', input.elevation, -500, 11_000, 'from −500 to 11 000 m', 'length');
     baro = barometricPressureAtElevation(z);
   } else baro = 101_325;
 
@@ -123,6 +161,7 @@ export function validateInput(input: TankCheckInput): CleanInput {
           -baro,
           1e8,
           `from −${Math.round(baro)} Pa (full vacuum at this barometric pressure) to 100 000 000 Pa gauge`,
+          'gaugePressure',
         );
   const pg = input.pressureGauge;
   if (pg !== undefined && (pg === null || typeof pg !== 'object'))
@@ -136,6 +175,7 @@ export function validateInput(input: TankCheckInput): CleanInput {
           1e4,
           1e8,
           'from 10 000 to 100 000 000 Pa gauge',
+          'gaugePressure',
         );
   const accuracy =
     pg?.accuracy === undefined
@@ -146,11 +186,19 @@ export function validateInput(input: TankCheckInput): CleanInput {
           0,
           0.2,
           'a fraction of full scale from 0 to 0.2',
+          'fraction',
         );
   const specificGravity =
     input.specificGravity === undefined
       ? null
-      : num('specificGravity', input.specificGravity, 0.2, 2, 'from 0.2 to 2 (liquid, 60/60 °F)');
+      : num(
+          'specificGravity',
+          input.specificGravity,
+          0.2,
+          2,
+          'from 0.2 to 2 (liquid, 60/60 °F)',
+          undefined,
+        );
 
   const c = input.contents;
   if (!c || typeof c !== 'object')
@@ -163,8 +211,9 @@ export function validateInput(input: TankCheckInput): CleanInput {
       Object.keys(c),
     );
   if ('gaugePercent' in c)
-    num('contents.gaugePercent', c.gaugePercent, 0, 100, 'a percent from 0 to 100');
-  if ('netMass' in c) num('contents.netMass', c.netMass, 0, 1e8, 'from 0 to 100 000 000 kg');
+    num('contents.gaugePercent', c.gaugePercent, 0, 100, 'a percent from 0 to 100', undefined);
+  if ('netMass' in c)
+    num('contents.netMass', c.netMass, 0, 1e8, 'from 0 to 100 000 000 kg', 'mass');
   if ('levelHeight' in c) {
     if (tank.shape === undefined)
       throw new InputError(
@@ -172,7 +221,16 @@ export function validateInput(input: TankCheckInput): CleanInput {
         'given when contents.levelHeight is used (the level needs the tank shape)',
         undefined,
       );
-    num('contents.levelHeight', c.levelHeight, 0, 1e3, 'from 0 m to the inside height of the tank');
+    const h = c.levelHeight;
+    if (typeof h !== 'number' || !Number.isFinite(h) || h < 0 || h > 1e3) {
+      // The limits give the range the whole check takes, up to this tank's inside height
+      // (checkTank refuses a level above it), as the words say.
+      throw new InputError('contents.levelHeight', 'from 0 m to the inside height of the tank', h, {
+        min: 0,
+        max: tankHeight(tank.shape),
+        quantity: 'length',
+      });
+    }
   }
   return {
     V,

@@ -33,7 +33,11 @@ export function validateShape(shape: unknown, field = 'tank.shape'): asserts sha
   const positive = (name: string, lo: number, hi: number) => {
     const x = s[name];
     if (typeof x !== 'number' || !Number.isFinite(x) || x < lo || x > hi) {
-      throw new InputError(`${field}.${name}`, `a length from ${lo} to ${hi} m`, x);
+      throw new InputError(`${field}.${name}`, `a length from ${lo} to ${hi} m`, x, {
+        min: lo,
+        max: hi,
+        quantity: 'length',
+      });
     }
   };
   if (s.kind === 'sphere') {
@@ -53,7 +57,13 @@ export function validateShape(shape: unknown, field = 'tank.shape'): asserts sha
   positive('diameter', 0.05, 20);
   positive('shellLength', 0, 200);
   if (s.heads === 'flat' && (s.shellLength as number) <= 0) {
-    throw new InputError(`${field}.shellLength`, 'above 0 m for flat heads', s.shellLength);
+    throw new InputError(`${field}.shellLength`, 'above 0 m for flat heads', s.shellLength, {
+      min: 0,
+      minExclusive: true,
+      max: 200,
+      quantity: 'length',
+      note: 'for flat heads',
+    });
   }
 }
 
