@@ -3,8 +3,9 @@
  * `TankCheckInput`, or a list of what is still missing. No arithmetic on units here: the only
  * sum is peak liquid temperature = peak air temperature + sun allowance, both already in K.
  */
-import { checkTank, InputError } from '../thermo/index.js';
+import { checkTank, InputError, type InputLimits } from '../thermo/index.js';
 import type { TankCheckInput, TankCheckResult } from '../thermo/check/types.js';
+import type { DisplayUnits } from './display.js';
 import { productFor, productLabel, tripleTemperatures } from './products.js';
 import type { CheckSummary, Readings, Settings, TankRecord } from './types.js';
 
@@ -77,13 +78,65 @@ export function buildCheckInput(tank: TankRecord, r: Readings, settings: Setting
   return { input, missing: [], peakEstimated };
 }
 
+/** An engine refusal: the field it names, its message (SI) and, for a number, its valid range. */
+export interface CheckError {
+  field: string;
+  message: string;
+  limits?: InputLimits;
+}
+
 export interface CheckOutcome {
   input: TankCheckInput | null;
   result: TankCheckResult | null;
   missing: string[];
   peakEstimated: boolean;
   /** The engine refused the input: its message, and the field it names. */
-  error: { field: string; message: string } | null;
+  error: CheckError | null;
+}
+
+/** The engine's fields as the app's forms label them (readings, tank form, settings). */
+export const FIELD_LABELS: Record<string, string> = {
+  liquidTemperature: 'Liquid temperature',
+  peakTemperature: 'Peak liquid temperature',
+  'contents.gaugePercent': 'Float gauge',
+  'contents.netMass': 'Net product mass',
+  'contents.levelHeight': 'Liquid level height',
+  gaugePressure: 'Pressure gauge',
+  'tank.waterCapacity': 'Water capacity',
+  'tank.designPressure': 'Design pressure (MAWP)',
+  'tank.reliefSetPressure': 'Relief valve set pressure',
+  'tank.minDesignMetalTemperature': 'Minimum design metal temperature',
+  'tank.shape.diameter': 'Inside diameter',
+  'tank.shape.shellLength': 'Shell length between head seams',
+  barometricPressure: 'Barometric pressure',
+  elevation: 'Site elevation',
+  'pressureGauge.fullScale': 'Pressure gauge full scale',
+  'pressureGauge.accuracy': 'Pressure gauge accuracy (of full scale)',
+};
+
+/** Unit text of the engine's plain-number fields (those whose limits carry no quantity). */
+const PLAIN_UNITS: Record<string, string> = { 'contents.gaugePercent': '%' };
+
+/**
+ * An engine refusal in words, with its range in the user's units when the engine gave the range
+ * as numbers (e.g. "Liquid temperature must be from -189.6 to 260.3 °F for this product"), else
+ * the engine's own message. The range goes through `DisplayUnits` (thermo/units.ts), rounded
+ * inward. No full stop at the end.
+ */
+export function errorText(error: CheckError, display: DisplayUnits): string {
+  const l = error.limits;
+  const name = FIELD_LABELS[error.field];
+  if (!l || !name || (l.min === undefined && l.max === undefined)) return error.message;
+  try {
+    const range = display.range(l.quantity ?? null, l.min, l.max, {
+      ...(l.minExclusive ? { minExclusive: true } : {}),
+      unitText: PLAIN_UNITS[error.field] ?? '',
+    });
+    return `${name} must be ${range}${l.note ? ` ${l.note}` : ''}`;
+  } catch {
+    // A range the units cannot show (not expected): the engine's own words are still right.
+    return error.message;
+  }
 }
 
 /** Builds the input and runs the check. Never throws: an engine refusal comes back as `error`. */
@@ -93,8 +146,11 @@ export function runCheck(tank: TankRecord, readings: Readings, settings: Setting
   try {
     return { ...built, result: checkTank(built.input), error: null };
   } catch (e) {
-    if (e instanceof InputError)
-      return { ...built, result: null, error: { field: e.field, message: e.message } };
+    if (e instanceof InputError) {
+      const error: CheckError = { field: e.field, message: e.message };
+      if (e.limits) error.limits = e.limits;
+      return { ...built, result: null, error };
+    }
     return {
       ...built,
       result: null,

@@ -25,7 +25,13 @@ import './check-results.js';
 import './check-chart.js';
 import './check-history.js';
 import type { ReadingsChange } from './check-form.js';
-import { minTemperatureFor, runCheck, summarize, type CheckOutcome } from './check-input.js';
+import {
+  errorText,
+  minTemperatureFor,
+  runCheck,
+  summarize,
+  type CheckOutcome,
+} from './check-input.js';
 import { heatingCurve, type HeatingCurve } from './chart-data.js';
 import { productFor, productLabel } from './products.js';
 import { summaryText } from './summary.js';
@@ -313,12 +319,14 @@ export class CheckScreen extends LitElement {
       error = 'A reading above is not valid: fix the marked field to see the figures.';
     else if (o?.error) {
       const key = FIELD_OF[o.error.field];
-      if (key) fieldErrors[key] = `The check cannot use this value: ${o.error.message}.`;
+      // In the user's units when the engine gave the range as numbers.
+      const message = errorText(o.error, d);
+      if (key) fieldErrors[key] = `The check cannot use this value: ${message}.`;
       error = o.error.field.startsWith('tank')
-        ? `The tank’s nameplate has a figure the check cannot use (${o.error.message}). Edit the tank to fix it.`
+        ? `The tank’s nameplate has a figure the check cannot use (${message}). Edit the tank to fix it.`
         : key
           ? 'The check cannot use a reading: see the message next to the field.'
-          : o.error.message;
+          : message;
     }
     const result = this._valid && !o?.error ? (o?.result ?? null) : null;
     const relief = np.reliefSetPressure ?? np.designPressure;

@@ -131,6 +131,33 @@ export class DisplayUnits {
     });
   }
 
+  /**
+   * A valid range in the user's unit, e.g. `from -189.6 to 260.3 °F`, `at least 0 lb`,
+   * `above 0 and at most 145038 psia`. Bounds are SI (per `q`); with `q` null they are plain
+   * numbers shown with `unitText`. The shown bounds are rounded inward (the lower one up, the
+   * upper one down), so a value typed as shown is always one that is accepted.
+   */
+  range(
+    q: Quantity | null,
+    min: number | undefined,
+    max: number | undefined,
+    options: { minExclusive?: boolean; unitText?: string } = {},
+  ): string {
+    const f = (v: number, round: Rounding) =>
+      q === null ? String(v) : trimZeros(this.number(q, v, round));
+    const unit = q === null ? (options.unitText ?? '') : this.label(q);
+    const u = unit ? ` ${unit}` : '';
+    const low =
+      min === undefined ? '' : `${options.minExclusive ? 'above' : 'at least'} ${f(min, 'up')}`;
+    if (min !== undefined && max !== undefined)
+      return options.minExclusive
+        ? `${low} and at most ${f(max, 'down')}${u}`
+        : `from ${f(min, 'up')} to ${f(max, 'down')}${u}`;
+    if (min !== undefined) return `${low}${u}`;
+    if (max !== undefined) return `at most ${f(max, 'down')}${u}`;
+    return 'a number';
+  }
+
   /** Display number without its unit (for an input's value). */
   number(
     q: Quantity,
@@ -166,4 +193,9 @@ export function formatPercent(
 ): string {
   if (percent === null || percent === undefined || !Number.isFinite(percent)) return '–';
   return `${formatNumber(percent, decimals, round)} %`;
+}
+
+/** "68.0" → "68", "0.10" → "0.1"; integers are left alone. */
+export function trimZeros(text: string): string {
+  return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
 }

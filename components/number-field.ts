@@ -11,7 +11,7 @@
  */
 import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
 import { baseStyles } from './styles.js';
-import { DisplayUnits, type Quantity } from './display.js';
+import { DisplayUnits, trimZeros, type Quantity } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
 
 export interface NumberFieldChange {
@@ -163,18 +163,9 @@ export class NumberField extends LitElement {
     return this.quantity === null ? this.unitText : this.display.label(this.quantity);
   }
 
-  /** The valid range in the user's unit, e.g. "from −40 to 140 °F". */
+  /** The valid range in the user's unit, e.g. "from −40 to 140 °F" (rounded inward). */
   private _range(): string {
-    // The shown limits are rounded inward, so typing a shown limit is always accepted.
-    const f = (v: number, round: 'up' | 'down') =>
-      this.quantity === null ? String(v) : trimZeros(this.display.number(this.quantity, v, round));
-    const unit = this._unit();
-    const u = unit ? ` ${unit}` : '';
-    if (this.min !== undefined && this.max !== undefined)
-      return `from ${f(this.min, 'up')} to ${f(this.max, 'down')}${u}`;
-    if (this.min !== undefined) return `at least ${f(this.min, 'up')}${u}`;
-    if (this.max !== undefined) return `at most ${f(this.max, 'down')}${u}`;
-    return 'a number';
+    return this.display.range(this.quantity, this.min, this.max, { unitText: this.unitText });
   }
 
   private _validate(v: number | null): { error: string } {
@@ -283,11 +274,6 @@ export function parseDecimal(text: string): number | null | undefined {
   if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(normal)) return undefined;
   const x = Number(normal);
   return Number.isFinite(x) ? x : undefined;
-}
-
-/** "68.0" → "68", "0.10" → "0.1"; integers are left alone. */
-function trimZeros(text: string): string {
-  return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
 }
 
 function sameNumber(a: number | null, b: number | null): boolean {
