@@ -1,6 +1,8 @@
-// Component tests in real headless Chromium (Debian's `chromium`; no tool downloads a browser).
-//   npm run test:browser            all of test/components/**/*.test.ts
-//   npx wtr --files test/components/foo.test.ts
+// Component and app-shell tests in real headless Chromium (Debian's `chromium`; no tool downloads
+// a browser): test/components/ for the lit elements, test/pwa/ for the pwa/ modules (storage,
+// backup, CSV, routes, demo site), which run there too (storage needs its IndexedDB).
+//   npm run test:browser            all of test/components/**/*.test.ts and test/pwa/**/*.test.ts
+//   npx wtr --files test/pwa/foo.test.ts
 // Versions and flags: see the toolchain notes (WTR 0.20.x stays on Node 20).
 import { execSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
@@ -67,7 +69,7 @@ function countsReporter() {
 }
 
 export default {
-  files: ['test/components/**/*.test.ts'],
+  files: ['test/components/**/*.test.ts', 'test/pwa/**/*.test.ts'],
   nodeResolve: true,
   // 127.1 is 127.0.0.1: with '127.0.0.1' or 'localhost' WTR's server listens on all interfaces.
   hostname: '127.1',

@@ -1,12 +1,11 @@
 /// <reference types="mocha" />
-// Backup validation, CSV export, routes and chart helpers (pure functions, run in the browser
-// with the other app tests). Kind: identity / behaviour; records are placeholders.
+// pwa/ modules as pure functions: backup validation, CSV export, routes and the demo site (run in
+// the browser with the other app tests). Kind: identity / behaviour; records are placeholders.
 import { expect } from '@open-wc/testing';
 import { BACKUP_FORMAT, makeBackup, parseBackup } from '../../pwa/backup.js';
 import { checksToCsv } from '../../pwa/csv.js';
 import { href, parseRoute } from '../../pwa/router.js';
 import { buildDemo, DEMO_SITE } from '../../pwa/demo.js';
-import { niceAxis, labelRows } from '../../components/check-chart.js';
 import { DisplayUnits } from '../../components/display.js';
 import { blankTank } from '../../components/tank-form.js';
 import {
@@ -191,31 +190,5 @@ describe('buildDemo', () => {
     expect(DEMO_SITE).to.contain('not a real place');
     expect(demo.drafts.map((d) => d.tankId)).to.deep.equal(demo.tanks.map((t) => t.id));
     for (const d of demo.drafts) expect(d.readings.liquidTemperature).to.be.a('number');
-  });
-});
-
-describe('check-chart helpers', () => {
-  it('niceAxis covers the range with round steps', () => {
-    const a = niceAxis(43.2, 287.9);
-    expect(a.min).to.be.at.most(43.2);
-    expect(a.max).to.be.at.least(287.9);
-    expect(a.ticks[1]! - a.ticks[0]!).to.equal(50);
-    const flat = niceAxis(100, 100);
-    expect(flat.max).to.be.greaterThan(flat.min);
-  });
-
-  it('labelRows merges labels of lines that sit on top of each other', () => {
-    expect(
-      labelRows([
-        { y: 50, text: 'design' },
-        { y: 52, text: 'relief' },
-      ]),
-    ).to.deep.equal([{ y: 50, text: 'design = relief' }]);
-    expect(
-      labelRows([
-        { y: 50, text: 'design' },
-        { y: 90, text: 'relief' },
-      ]),
-    ).to.have.length(2);
   });
 });
