@@ -4,7 +4,7 @@
  * valid range; solvers that cannot converge throw `ConvergenceError`, never a silent value.
  */
 import { FLUIDS } from './data/fluids.js';
-import { InputError, type InputLimits } from './errors.js';
+import { ConvergenceError, InputError, type InputLimits } from './errors.js';
 import type { ModelId } from './eos/model.js';
 import {
   resolveProduct,
@@ -13,7 +13,7 @@ import {
   type Product,
   type ResolvedProduct,
 } from './product.js';
-import { closedTankState, type ClosedTankState, type Phase } from './solvers/closedTank.js';
+import { closedTankState, type ClosedTankState } from './solvers/closedTank.js';
 import {
   flashPT,
   mixtureAtT,
@@ -119,24 +119,33 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
     const s = pureSaturation(m, T);
     return { p: s.p, rhoL: m.molarMass / s.vL, rhoV: m.molarMass / s.vV, y: [1], model: r.model };
   }
-  const mx = mixtureAtT(r, T);
-  let b;
+  const b = blendPoint(r, T, 'bubble');
+  return { p: b.p, rhoL: b.rhoBulk, rhoV: b.rhoIncipient, y: b.incipient, model: r.model };
+}
+
+/**
+ * A blend's bubble or dew point at T with the densities of both phases; an InputError on T
+ * when T lies beyond the end of that curve (the blend's critical region).
+ */
+function blendPoint(r: ResolvedProduct, T: number, kind: 'bubble' | 'dew') {
+  let point;
   try {
-    b = saturationPointAt(r, T, 'bubble');
-  } catch {
+    point = saturationPointAt(r, T, kind);
+  } catch (e) {
+    if (!(e instanceof ConvergenceError)) throw e;
     throw new InputError(
       'T',
-      `below the blend's critical region (no bubble point at ${fmt(T)} K)`,
+      `below the blend's critical region (no ${kind} point at ${fmt(T)} K)`,
       T,
     );
   }
-  const My = b.incipient.reduce((s, y, i) => s + y * mx.M[i]!, 0);
+  const M = r.components.map((m) => m.molarMass);
+  const Minc = point.incipient.reduce((s, w, i) => s + w * M[i]!, 0);
   return {
-    p: b.p,
-    rhoL: r.molarMass / b.vBulk,
-    rhoV: My / b.vIncipient,
-    y: Array.from(b.incipient),
-    model: r.model,
+    p: point.p,
+    rhoBulk: r.molarMass / point.vBulk,
+    rhoIncipient: Minc / point.vIncipient,
+    incipient: Array.from(point.incipient),
   };
 }
 
@@ -176,21 +185,8 @@ export function liquidDensity(
   return r.molarMass / phaseAt(mx, p, r.z, 'liquid').v;
 }
 
-export interface ClosedTankResult {
-  phase: Phase;
-  /** Absolute pressure, Pa. */
-  p: number;
-  /** Liquid volume ÷ tank volume, 0…1 (1 when liquid-full). */
-  liquidFraction: number;
-  /** Density of the liquid present, kg/m³, or null. */
-  rhoL: number | null;
-  /** Density of the vapour present, kg/m³, or null. */
-  rhoV: number | null;
-  /** Vapour mass ÷ contents mass. */
-  vapourMassFraction: number;
-  /** Liquid and vapour mole fractions, in the product's component order. */
-  x: number[];
-  y: number[];
+/** The closed-tank state as the API returns it (see solvers/closedTank.ts for each field). */
+export interface ClosedTankResult extends Omit<ClosedTankState, 'iterations'> {
   model: ModelId;
 }
 
@@ -231,18 +227,8 @@ export function closedTank(
       },
     );
   }
-  const s: ClosedTankState = closedTankState(r, T, density);
-  return {
-    phase: s.phase,
-    p: s.p,
-    liquidFraction: s.liquidFraction,
-    rhoL: s.rhoL,
-    rhoV: s.rhoV,
-    vapourMassFraction: s.vapourMassFraction,
-    x: s.x,
-    y: s.y,
-    model: r.model,
-  };
+  const { iterations, ...state } = closedTankState(r, T, density);
+  return { ...state, model: r.model };
 }
 
 /** Dew point of a vapour of the product's composition at T. */
@@ -269,21 +255,8 @@ export function dewPoint(product: Product, T: number, options?: ModelOptions): D
     const s = saturation(product, T, options);
     return { p: s.p, rhoV: s.rhoV, rhoL: s.rhoL, x: [1], model: r.model };
   }
-  const mx = mixtureAtT(r, T);
-  let d;
-  try {
-    d = saturationPointAt(r, T, 'dew');
-  } catch {
-    throw new InputError('T', `below the blend's critical region (no dew point at ${fmt(T)} K)`, T);
-  }
-  const Mx = d.incipient.reduce((s, x, i) => s + x * mx.M[i]!, 0);
-  return {
-    p: d.p,
-    rhoV: r.molarMass / d.vBulk,
-    rhoL: Mx / d.vIncipient,
-    x: Array.from(d.incipient),
-    model: r.model,
-  };
+  const d = blendPoint(r, T, 'dew');
+  return { p: d.p, rhoV: d.rhoBulk, rhoL: d.rhoIncipient, x: d.incipient, model: r.model };
 }
 
 export interface FlashState {
