@@ -4,7 +4,7 @@
  * caution always last. Messages say what the figures show and which limit applies; they never
  * give permission to fill.
  */
-import { MODEL_ALLOWANCE } from '../rules/allowance.js';
+import { peakPressureAllowance } from '../rules/allowance.js';
 import { fmtAbs, fmtDiff, fmtGauge, fmtMass, fmtPct, fmtT } from './format.js';
 import type { ProductModel, State } from './model.js';
 import { saturationTemperature } from './search.js';
@@ -192,7 +192,7 @@ export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] 
     add(
       'danger',
       'design-at-peak',
-      `At the forecast peak ${fmtT(p.temperature)} the expected pressure ${g(p.p, 'up')} (with the model allowance of ${(MODEL_ALLOWANCE.vapourPressure * 100).toFixed(1)} %) is above the design pressure ${g(c.designPressure)} by ${fmtDiff(-p.headroomToDesign, 'up')}.`,
+      `At the forecast peak ${fmtT(p.temperature)} the expected pressure ${g(p.p, 'up')} (with the model allowance of ${(peakPressureAllowance(p.phase) * 100).toFixed(1)} %) is above the design pressure ${g(c.designPressure)} by ${fmtDiff(-p.headroomToDesign, 'up')}.`,
       -p.headroomToDesign,
       'pressureDifference',
     );

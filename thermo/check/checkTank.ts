@@ -9,7 +9,7 @@
  */
 import { ConvergenceError, InputError } from '../errors.js';
 import { T_60F_K } from '../constants.js';
-import { MODEL_ALLOWANCE } from '../rules/allowance.js';
+import { MODEL_ALLOWANCE, peakPressureAllowance } from '../rules/allowance.js';
 import { fillingRule, isLpGas, referenceRules } from '../rules/gases.js';
 import { maxLiquidVolumePercent } from '../rules/lpgas.js';
 import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
@@ -333,7 +333,7 @@ function buildFillLimit(
 }
 
 function buildPeak(s: State, c: CleanInput): PeakResult {
-  const raised = s.pAbs * (1 + MODEL_ALLOWANCE.vapourPressure) - c.baro;
+  const raised = s.pAbs * (1 + peakPressureAllowance(s.phase)) - c.baro;
   return {
     temperature: c.Tpeak,
     phase: s.phase,

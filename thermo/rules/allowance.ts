@@ -8,6 +8,10 @@
  *   the headroom to design and relief is taken, so model error cannot hide a lack of headroom.
  * - "Not liquid full at T_ref" limits use the liquid density at T_ref lowered by
  *   `LIQUID_DENSITY`, so model error cannot let the tank reach liquid-full below T_ref.
+ * - A liquid-full tank's pressure follows the liquid's compressibility, where 0.1 % in density
+ *   is several percent in pressure: the core reproduces the reference pressures 2 K and 5 K past
+ *   liquid-full within about 8 % (README, limits of validity), so a liquid-full peak is raised by
+ *   `liquidFullPressure` instead.
  * Filling-density rules from the tables are applied exactly as printed (no allowance).
  */
 export const MODEL_ALLOWANCE = {
@@ -15,4 +19,13 @@ export const MODEL_ALLOWANCE = {
   vapourPressure: 0.005,
   /** Relative uncertainty of saturated liquid density, fraction. */
   liquidDensity: 0.005,
+  /** Relative uncertainty of the pressure of a liquid-full (hydraulically full) tank, fraction. */
+  liquidFullPressure: 0.1,
 } as const;
+
+/** The allowance on a peak pressure in the given phase state, fraction. */
+export function peakPressureAllowance(phase: string): number {
+  return phase === 'liquid-full'
+    ? MODEL_ALLOWANCE.liquidFullPressure
+    : MODEL_ALLOWANCE.vapourPressure;
+}
