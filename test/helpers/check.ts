@@ -17,6 +17,8 @@ export interface Check {
   atol?: number;
   kind: CheckKind;
   source: string;
+  /** Why this tolerance (printed with it). */
+  why?: string;
 }
 
 export function checkClose(c: Check): void {
@@ -32,7 +34,7 @@ export function checkClose(c: Check): void {
     `  actual:    ${c.actual}`,
     `  expected:  ${c.expected}`,
     `  delta:     ${delta} (relative ${rel.toExponential(3)})`,
-    `  tolerance: ${c.rtol !== undefined ? `rtol ${c.rtol}` : ''}${c.atol !== undefined ? ` atol ${c.atol}` : ''}`,
+    `  tolerance: ${c.rtol !== undefined ? `rtol ${c.rtol}` : ''}${c.atol !== undefined ? ` atol ${c.atol}` : ''}${c.why ? ` (${c.why})` : ''}`,
     `  source:    ${c.source}`,
   ].join('\n');
   expect(ok, msg).toBe(true);

@@ -1,10 +1,11 @@
 /**
- * Shared assertion for numeric checks: the failure message prints the input, actual,
- * expected, delta, tolerance, source and the kind of check (published / identity / regression).
+ * Positional shorthands over the one numeric assertion, `checkClose` (test/helpers/check.ts),
+ * used by the tank-check tests: the failure message prints the input, actual, expected, delta,
+ * tolerance, source and the kind of check (published / identity / regression).
  */
-import { expect } from 'vitest';
+import { checkClose, type CheckKind } from '../helpers/check.js';
 
-export type CheckKind = 'published' | 'identity' | 'regression';
+export type { CheckKind };
 
 export interface CheckInfo {
   /** What went in, in words or a short object. */
@@ -23,18 +24,10 @@ export function expectWithin(
   atol: number,
   info: CheckInfo,
 ): void {
-  const delta = actual - expected;
-  const ok = Number.isFinite(actual) && Math.abs(delta) <= atol;
-  expect(
-    ok,
-    `[${info.kind}] input: ${JSON.stringify(info.input)}\n  actual: ${actual}\n  expected: ${expected}\n  delta: ${delta}\n  tolerance: ±${atol}${info.why ? ` (${info.why})` : ''}\n  source: ${info.source}`,
-  ).toBe(true);
+  checkClose({ what: 'value', actual, expected, atol, ...info });
 }
 
 /** |actual/expected − 1| ≤ rtol. */
 export function expectRel(actual: number, expected: number, rtol: number, info: CheckInfo): void {
-  expectWithin(actual, expected, Math.abs(expected) * rtol, {
-    ...info,
-    why: `${info.why ? `${info.why}; ` : ''}rtol ${rtol}`,
-  });
+  checkClose({ what: 'value', actual, expected, rtol, ...info });
 }
