@@ -458,7 +458,11 @@ describe('checkTank identities', () => {
       const stop = r.fillLimit.stopAtGaugePercent;
       if (stop <= 0 || stop >= 100) continue;
       const at = checkTank({ ...i, contents: { gaugePercent: stop } });
-      expect(at.contents.totalMass).toBeLessThanOrEqual(r.fillLimit.maxMass + 1e-9);
+      // A printed volume percent is the stop itself; its mass is rounded down to 0.01 kg, so the
+      // tank at exactly that percent may hold up to 0.01 kg more than maxMass.
+      const bind = r.fillLimit.limits[0]!;
+      const slack = bind.kind === 'volume' || bind.kind === 'gauge-setting' ? 0.0101 : 1e-9;
+      expect(at.contents.totalMass).toBeLessThanOrEqual(r.fillLimit.maxMass + slack);
       const above = checkTank({ ...i, contents: { gaugePercent: stop + 0.1 } });
       expect(above.contents.totalMass).toBeGreaterThan(r.fillLimit.maxMass);
     }
@@ -536,14 +540,18 @@ describe('checkTank fill limits end to end (FACTS cases 4, 5)', () => {
     ];
     for (const [g, t, expected, tol, id] of cases) {
       const r = run(g, t);
-      expect(r.fillLimit.binding).toBe(id);
-      expectWithin(lb(r.fillLimit.maxMass), expected, tol, {
+      // A fixed gauge is set for the weight limit at 40 °F (49 CFR 173.315(h)(3)); at 60 °F the
+      // liquid at that level weighs less, so the gauge's setting binds below the weight figure.
+      expect(r.fillLimit.binding).toBe(t.fixedDipTube ? 'lpg-fixed-gauge' : id);
+      const lim = r.fillLimit.limits.find((l) => l.id === id)!;
+      expect(lb(lim.maxMass)).toBeGreaterThan(lb(r.fillLimit.maxMass) - 1e-9);
+      expectWithin(lb(lim.maxMass), expected, tol, {
         input: { g, t },
         source: FACTS(id.startsWith('dot') ? 5 : 4),
         kind: 'published',
       });
       // rounded toward safety: never above the exact rule figure
-      expect(lb(r.fillLimit.maxMass)).toBeLessThanOrEqual(expected + tol);
+      expect(lb(lim.maxMass)).toBeLessThanOrEqual(expected + tol);
     }
   });
   it('checkTank gives every LP-gas preset a band and names a blend’s liquid-full temperature or says why not', () => {

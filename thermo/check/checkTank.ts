@@ -10,25 +10,19 @@
 import { ConvergenceError, InputError } from '../errors.js';
 import { T_60F_K } from '../constants.js';
 import { MODEL_ALLOWANCE, peakPressureAllowance } from '../rules/allowance.js';
-import { fillingRule, isLpGas, referenceRules } from '../rules/gases.js';
-import { maxLiquidVolumePercent } from '../rules/lpgas.js';
+import { isLpGas } from '../rules/gases.js';
 import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
 import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../tank/geometry.js';
 import { buildCautions } from './cautions.js';
 import { diagnose } from './diagnosis.js';
+import { computeFillLimit } from './fillLimit.js';
 import { ProductModel, type State } from './model.js';
 import {
   liquidFullTemperature as findLiquidFullTemperature,
   reliefTemperature as findReliefTemperature,
 } from './search.js';
 import { STANDING_CAUTION } from './standing.js';
-import type {
-  FillLimitResult,
-  LimitEntry,
-  PeakResult,
-  TankCheckInput,
-  TankCheckResult,
-} from './types.js';
+import type { PeakResult, TankCheckInput, TankCheckResult } from './types.js';
 import { T_CHECK_MAX_K, validateInput, type CleanInput } from './validate.js';
 
 /** x rounded down / up to a multiple of step (steps are powers of ten; dividing by 1/step keeps 0.01 steps exact). */
@@ -131,74 +125,16 @@ function check(input: TankCheckInput): TankCheckResult {
   const vapourMass = Math.max(0, totalMass - liquidMass);
   const waterWeight = c.V * WATER_FD_KG_M3;
 
-  // --- Fill limit. ---
-  const limits: LimitEntry[] = [];
-  const rule = fillingRule({
+  // --- Fill limit (fillLimit.ts). ---
+  const { fillLimit, ruleFound, skippedRefs } = computeFillLimit({
+    model,
     product: input.product,
-    containerClass: c.containerClass,
-    placement: c.placement,
-    insulated: c.insulated,
-    fixedDipTube: c.fixedDipTube,
-    waterCapacity: c.V,
-    specificGravity: sg,
-  });
-  if (rule) {
-    limits.push({
-      id: rule.id,
-      kind: 'rule',
-      description: rule.description,
-      citation: rule.citation,
-      maxMass: floorTo(rule.fillingDensity * waterWeight, 0.01),
-      fillingDensity: rule.fillingDensity,
-      referenceTemperature: null,
-      modelAllowance: 0,
-    });
-  }
-  const refs = referenceRules(input.product, c.containerClass).map((r) => ({
-    ...r,
-    kind: r.id === 'refrigerant-130F' ? ('rule' as const) : ('physical' as const),
-  }));
-  refs.push({
-    id: 'not-liquid-full-at-peak',
-    kind: 'physical',
-    description:
-      c.Tpeak >= c.T
-        ? 'The tank must not become liquid-full at the forecast peak liquid temperature'
-        : 'The tank must not become liquid-full at the present liquid temperature (warmer than the forecast peak)',
-    citation:
-      'physics of a closed tank (a liquid-full tank’s pressure climbs steeply with temperature); the same principle as 49 CFR 173.304(b) — common practice for storage',
-    referenceTemperature: Math.max(c.Tpeak, c.T),
-  });
-  const skippedRefs: number[] = [];
-  for (const r of refs) {
-    const s = model.sat(r.referenceTemperature);
-    if (!s) {
-      skippedRefs.push(r.referenceTemperature);
-      continue;
-    }
-    const mass = floorTo(c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
-    limits.push({
-      id: r.id,
-      kind: r.kind,
-      description: r.description,
-      citation: r.citation,
-      maxMass: mass,
-      fillingDensity: mass / waterWeight,
-      referenceTemperature: r.referenceTemperature,
-      modelAllowance: MODEL_ALLOWANCE.liquidDensity,
-    });
-  }
-  limits.sort((p, q) => p.maxMass - q.maxMass);
-  const fillLimit = buildFillLimit(
-    limits,
+    c,
+    sg,
+    satNow,
     totalMass,
     waterWeight,
-    c,
-    satNow,
-    b.rho60,
-    rule?.fillingDensity ?? null,
-    sg,
-  );
+  });
 
   // --- Peak. ---
   const peakState = c.Tpeak === c.T ? now : model.stateOrNull(c.Tpeak, rho);
@@ -272,7 +208,7 @@ function check(input: TankCheckInput): TankCheckResult {
     clean: c,
     now,
     model,
-    rule: rule !== null,
+    rule: ruleFound,
     sgModel,
     skippedRefs,
     shapeVolume,
@@ -287,49 +223,6 @@ function netMassCap(model: ProductModel, c: CleanInput): number {
   // density at 60 °F), and never beyond what the model can hold at this temperature.
   const rhoCap = s ? 1.1 * s.rhoL : 1.1 * model.basics.rho60;
   return Math.min(rhoCap, model.maxDensityAt(c.T)) * c.V;
-}
-
-function buildFillLimit(
-  limits: LimitEntry[],
-  totalMass: number,
-  waterWeight: number,
-  c: CleanInput,
-  satNow: { rhoL: number; rhoV: number } | null,
-  rho60: number,
-  ruleFd: number | null,
-  sg: number,
-): FillLimitResult {
-  const binding = limits[0];
-  // With no limit at all (no rule, no liquid at any reference temperature) the check claims no room.
-  const maxMass = binding ? binding.maxMass : floorTo(totalMass, 0.01);
-  const roomLeftMass = floorTo(maxMass - totalMass, 0.01);
-  const rhoLiquidNow = satNow?.rhoL ?? rho60;
-  let stop = 0;
-  if (satNow) {
-    const target = maxMass / c.V;
-    stop = ((target - satNow.rhoV) / (satNow.rhoL - satNow.rhoV)) * 100;
-    stop = Math.min(100, Math.max(0, floorTo(stop, 0.1)));
-  }
-  let volumetric: number | null = null;
-  if (ruleFd !== null && satNow) {
-    const vcf = satNow.rhoL / rho60;
-    volumetric = maxLiquidVolumePercent(ruleFd * 100, sg, vcf);
-  }
-  return {
-    maxMass,
-    // The binding limit's own figure (a table's 42 % stays 42 %, not 41.999 % from the mass
-    // rounded down to 0.01 kg); never above the rounded-down mass.
-    maxFillingDensity: binding
-      ? Math.min(binding.fillingDensity, maxMass / waterWeight + 1e-12)
-      : floorTo(maxMass / waterWeight, 1e-5),
-    binding: binding ? binding.id : 'none',
-    limits,
-    roomLeftMass,
-    roomLeftVolume: floorTo(roomLeftMass / rhoLiquidNow, 1e-6),
-    roomLeftVolumeAt60F: floorTo(roomLeftMass / rho60, 1e-6),
-    stopAtGaugePercent: stop,
-    volumetricMaxPercent: volumetric,
-  };
 }
 
 function buildPeak(s: State, c: CleanInput): PeakResult {

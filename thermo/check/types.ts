@@ -7,6 +7,9 @@
  * Convert user units with `thermo/units.ts` only.
  */
 import type { Product } from '../product.js';
+import type { FillMethod } from '../rules/volumeLimits.js';
+
+export type { FillMethod };
 
 /** Where the container sits. A partly buried container counts as aboveground (29 CFR 1910.110(d)(7)(iv)(e)). */
 export type Placement = 'aboveground' | 'underground';
@@ -61,7 +64,16 @@ export interface TankInput {
   insulated?: boolean;
   /** Default `storage`. */
   containerClass?: ContainerClass;
-  /** A fixed maximum-level gauge (dip tube) is used to fill: DOT cargo/portable tanks then take 97 % of the weight limit (49 CFR 173.315(b) Note 1). Default false. */
+  /**
+   * How the tank is filled (default `gauge`):
+   * - `gauge`: by a float, rotary or slip-tube gauge: the rule's volume limits apply beside its weight limit;
+   * - `fixed-gauge`: until liquid appears at a fixed maximum-level gauge (dip tube): its setting is the stop
+   *   (ammonia 85 %, 29 CFR 1910.111(b)(14)(v)); DOT cargo/portable LP-gas tanks take 97 % of the weight
+   *   limit (49 CFR 173.315(b) Note 1);
+   * - `weight`: on a scale: the weight column applies.
+   */
+  fillMethod?: FillMethod;
+  /** Older records' form of `fillMethod: 'fixed-gauge'`; used only when `fillMethod` is absent. Default false. */
   fixedDipTube?: boolean;
   /** Shape and inside dimensions; needed only for `contents.levelHeight`. */
   shape?: TankShape;
@@ -177,8 +189,12 @@ export interface ContentsResult {
 export interface LimitEntry {
   /** Stable id, e.g. `osha-h27`, `dot-173.315b`, `nh3-1910.111b11`, `not-liquid-full`. */
   id: string;
-  /** `rule`: a filling-density rule; `physical`: never liquid-full up to a reference temperature. */
-  kind: 'rule' | 'physical';
+  /**
+   * `rule`: a filling-density (weight) rule; `volume`: a rule's printed percent by volume;
+   * `gauge-setting`: a fixed maximum-level gauge's setting; `physical`: never liquid-full up to a
+   * reference temperature.
+   */
+  kind: 'rule' | 'volume' | 'gauge-setting' | 'physical';
   /** What the limit is, in words. */
   description: string;
   /** Where it comes from (regulation, table, edition) or "common practice". */
@@ -191,6 +207,12 @@ export interface LimitEntry {
   referenceTemperature: number | null;
   /** Fraction taken off the model's liquid density for this limit (0 for a table rule; see rules/allowance.ts). */
   modelAllowance: number;
+  /**
+   * The limit as a float-gauge percent at the current liquid temperature (not rounded): a volume
+   * limit's or gauge setting's own percent; for a mass limit, the liquid percent at which the tank
+   * holds `maxMass`. Null above the critical temperature (no liquid level).
+   */
+  gaugePercent: number | null;
 }
 
 export interface FillLimitResult {
@@ -208,15 +230,30 @@ export interface FillLimitResult {
   roomLeftVolume: number;
   /** Room left as liquid volume at 60 °F, m³ (rounded down; negative when over). */
   roomLeftVolumeAt60F: number;
-  /** Float-gauge percent at which the tank holds `maxMass` at the current liquid temperature, percent (rounded down to 0.1; 100 when even a liquid-full tank would hold less). */
+  /**
+   * Float-gauge percent to stop at, at the current liquid temperature: the binding limit's
+   * `gaugePercent` — the lowest of every weight limit, volume limit, gauge setting and
+   * not-liquid-full limit that applies to this fill method — rounded down to 0.1 (100 when even a
+   * liquid-full tank would hold less; 0 above the critical temperature).
+   */
   stopAtGaugePercent: number;
   /**
-   * The regulation's volumetric maximum at the current temperature, percent of the container:
-   * FD·100 / (SG · VCF), VCF = ρL(T)/ρL(60 °F) (29 CFR 1910.110(b)(19)(v), generalised from 40/50 °F).
-   * It ignores the vapour's mass, so it is a little above `stopAtGaugePercent`. Null when no
-   * filling-density rule applies.
+   * The lowest rule limit by volume that applies now, percent of the container (a printed volume
+   * limit, a fixed gauge's setting, or for LP-gas the weight limit as a volume, FD·100 / (SG · VCF),
+   * VCF = ρL(T)/ρL(60 °F), 29 CFR 1910.110(b)(19)(v)). Null when none applies (for example a fill
+   * by weight).
    */
   volumetricMaxPercent: number | null;
+  /** How the tank is filled, as the check applied it (`fixedDipTube: true` reads as `fixed-gauge`). */
+  fillMethod: FillMethod;
+  /** True when a fixed maximum-level gauge's setting binds: the fill stops when liquid first appears at the gauge. */
+  stopAtFixedGauge: boolean;
+  /**
+   * One line saying why the stop is where it is, when that is not simply the weight limit: a volume
+   * limit below the weight limit at this temperature, a fixed gauge's setting, a fill by weight, or
+   * the not-liquid-full limit. Null when the weight limit binds on a gauge fill.
+   */
+  bindingNote: string | null;
 }
 
 export interface PeakResult {

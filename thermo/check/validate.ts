@@ -7,7 +7,8 @@ import { InputError } from '../errors.js';
 import type { Quantity } from '../units.js';
 import { tankHeight, validateShape } from '../tank/geometry.js';
 import { barometricPressureAtElevation } from '../units.js';
-import type { ContainerClass, Placement, TankCheckInput } from './types.js';
+import { FILL_METHODS } from '../rules/volumeLimits.js';
+import type { ContainerClass, FillMethod, Placement, TankCheckInput } from './types.js';
 
 export interface CleanInput {
   V: number;
@@ -18,6 +19,8 @@ export interface CleanInput {
   insulated: boolean;
   containerClass: ContainerClass;
   fixedDipTube: boolean;
+  /** `tank.fillMethod`, or `fixed-gauge` for an older record with `fixedDipTube: true`. */
+  fillMethod: FillMethod;
   mdmt: number | null;
   T: number;
   Tpeak: number;
@@ -106,6 +109,9 @@ export function validateInput(input: TankCheckInput): CleanInput {
   }
   const insulated = optBool('tank.insulated', tank.insulated);
   const fixedDipTube = optBool('tank.fixedDipTube', tank.fixedDipTube);
+  const fillMethod = tank.fillMethod ?? (fixedDipTube ? 'fixed-gauge' : 'gauge');
+  if (!FILL_METHODS.includes(fillMethod))
+    throw new InputError('tank.fillMethod', "'gauge', 'fixed-gauge' or 'weight'", fillMethod);
   if (tank.shape !== undefined) validateShape(tank.shape, 'tank.shape');
   const mdmt =
     tank.minDesignMetalTemperature === undefined
@@ -241,6 +247,7 @@ export function validateInput(input: TankCheckInput): CleanInput {
     insulated,
     containerClass,
     fixedDipTube,
+    fillMethod,
     mdmt,
     T,
     Tpeak,
