@@ -102,6 +102,7 @@ const valid = fc.record(
           'portable' as const,
         ),
         fixedDipTube: fc.boolean(),
+        fillMethod: fc.constantFrom('gauge' as const, 'fixed-gauge' as const, 'weight' as const),
         shape,
         minDesignMetalTemperature: fc.double({ min: 180, max: 370, noNaN: true }),
       },

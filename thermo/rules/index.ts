@@ -21,6 +21,8 @@ export {
   T_131F_K,
 } from './gases.js';
 export type { RuleChoice, PhysicalRuleChoice, RuleContext } from './gases.js';
+export { volumeRules, FILL_METHODS } from './volumeLimits.js';
+export type { FillMethod, VolumeRuleChoice, VolumeRuleContext } from './volumeLimits.js';
 export {
   reliefRange,
   containerTypeFor,
