@@ -10,7 +10,7 @@
  *
  * No result is worded as permission: the element says what the figures are, never "go".
  *
- * data-testid: `results`, `standing-caution`, `fill-limit`, `fill-stop-percent`, `room-left`,
+ * data-testid: `results`, `standing-caution`, `fill-limit`, `fill-stop-percent`, `fill-stop-why` (why the stop is where it is, when not simply the weight limit), `room-left`,
  * `room-left-volume`, `room-left-volume-60f`, `fill-binding`, `result-phase`, `result-pressure`,
  * `result-total-mass`, `result-liquid-volume`, `result-filling-density`, `result-volume-60f`,
  * `peak-temperature`, `peak-pressure`, `peak-headroom-design`, `peak-headroom-relief`,
@@ -24,6 +24,7 @@ import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './dis
 import { DEFAULT_SETTINGS } from './types.js';
 import type { Caution, TankCheckResult, TankPhase } from '../thermo/check/types.js';
 import { T_60F_K } from '../thermo/constants.js';
+import { stopPlace } from './fill-words.js';
 
 /** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
 export const STANDING_FALLBACK =
@@ -149,7 +150,8 @@ export class CheckResults extends LitElement {
       .over {
         color: var(--danger);
       }
-      .note {
+      .note,
+      .why {
         font-size: 0.92em;
       }
       section {
@@ -192,7 +194,7 @@ export class CheckResults extends LitElement {
     const d = this.display;
     const top = r.cautions.find((c) => c.code !== 'standing');
     return [
-      `Fill limit ${d.format('mass', r.fillLimit.maxMass, 'down')}; stop at ${formatPercent(r.fillLimit.stopAtGaugePercent, 'down')} on the float gauge.`,
+      `Fill limit ${d.format('mass', r.fillLimit.maxMass, 'down')}; stop at ${formatPercent(r.fillLimit.stopAtGaugePercent, 'down')} ${stopPlace(r.fillLimit)}.`,
       `Peak-day pressure ${d.format('gaugePressure', r.peak.p, 'up')}.`,
       top ? `${capital(top.level)}: ${top.message}` : '',
     ]
@@ -276,8 +278,9 @@ export class CheckResults extends LitElement {
                 >${formatPercent(f.stopAtGaugePercent, 'down')}</span
               ></strong
             >
-            on the float gauge at today’s liquid temperature.
+            ${stopPlace(f)}.
           </p>
+          ${f.bindingNote ? html`<p class="why" data-testid="fill-stop-why">${f.bindingNote}</p>` : nothing}
           <p>
             ${
               over
@@ -378,7 +381,7 @@ export class CheckResults extends LitElement {
           <dd>${this._fig('room-left-volume-60f', 'volume', f.roomLeftVolumeAt60F, 'down')}</dd>
           ${
             f.volumetricMaxPercent !== null
-              ? html`<dt>Rule’s volumetric maximum now</dt>
+              ? html`<dt>Rule’s lowest volume limit now</dt>
                   <dd>${formatPercent(f.volumetricMaxPercent, 'down')}</dd>`
               : nothing
           }

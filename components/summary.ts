@@ -5,6 +5,7 @@
  */
 import { DisplayUnits, formatPercent } from './display.js';
 import { PHASE_WORDS, STANDING_FALLBACK } from './check-results.js';
+import { stopPlace } from './fill-words.js';
 import { productLabel } from './products.js';
 import type { CheckRecord, Readings, TankRecord } from './types.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
@@ -46,7 +47,8 @@ export function summaryText(
     '',
     `Phase: ${PHASE_WORDS[result.phase]}`,
     `Contents: ${d.format('mass', result.contents.totalMass)} (filling density ${d.format('fraction', result.contents.fillingDensity)})`,
-    `Fill limit: ${d.format('mass', f.maxMass, 'down')}; stop at ${formatPercent(f.stopAtGaugePercent, 'down')} on the float gauge at today’s temperature`,
+    `Fill limit: ${d.format('mass', f.maxMass, 'down')}; stop at ${formatPercent(f.stopAtGaugePercent, 'down')} ${stopPlace(f)}`,
+    ...(f.bindingNote ? [`Why: ${f.bindingNote}`] : []),
     f.roomLeftMass < 0
       ? `Over the limit by ${d.format('mass', -f.roomLeftMass, 'up')}`
       : `Room left: ${d.format('mass', f.roomLeftMass, 'down')}`,

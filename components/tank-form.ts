@@ -17,8 +17,10 @@ import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
 import { productChoices, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
+import { FILL_METHOD_WORDS } from './fill-words.js';
 import type {
   ContainerClass,
+  FillMethod,
   HeadKind,
   Placement,
   TankInput,
@@ -353,14 +355,16 @@ export class TankForm extends LitElement {
             />
             Insulated shell
           </label>
-          <label class="check">
-            <input
-              type="checkbox"
-              .checked=${np.fixedDipTube ?? false}
-              @change=${(e: Event) => this._setNameplate({ fixedDipTube: (e.target as HTMLInputElement).checked || undefined })}
-            />
-            Filled by a fixed maximum-level gauge (dip tube)
-          </label>
+          <div class="field">
+            <label for="fill-method">How it is filled</label>
+            <select
+              id="fill-method"
+              data-testid="tank-fill-method"
+              @change=${(e: Event) => this._setNameplate({ fillMethod: (e.target as HTMLSelectElement).value as FillMethod, fixedDipTube: undefined })}
+            >
+              ${FILL_METHOD_WORDS.map(([v, text]) => html`<option value=${v} ?selected=${fillMethodOf(np) === v}>${text}</option>`)}
+            </select>
+          </div>
           <number-field
             label="Minimum design metal temperature"
             name="mdmt"
@@ -461,6 +465,10 @@ export class TankForm extends LitElement {
     `;
   }
 }
+
+/** The fill method of a nameplate; an older record's `fixedDipTube: true` reads as the fixed gauge. */
+const fillMethodOf = (np: TankInput): FillMethod =>
+  np.fillMethod ?? (np.fixedDipTube ? 'fixed-gauge' : 'gauge');
 
 const CLASSES: [ContainerClass, string][] = [
   ['storage', 'Storage container (stationary, ASME)'],

@@ -117,6 +117,7 @@ function validateTank(t: unknown, i: number): TankRecord {
   oneOf(np, 'containerClass', nw, ['storage', 'cylinder', 'cargo', 'portable'] as const, true);
   bool(np, 'insulated', nw, true);
   bool(np, 'fixedDipTube', nw, true);
+  oneOf(np, 'fillMethod', nw, ['gauge', 'fixed-gauge', 'weight'] as const, true);
   optNum(np, 'minDesignMetalTemperature', nw, 73.15, 373.15);
   if (np.shape !== undefined) {
     const s = np.shape;

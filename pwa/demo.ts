@@ -99,6 +99,7 @@ function specs(): DemoSpec[] {
         designPressure: psig(250),
         placement: 'aboveground',
         containerClass: 'cargo',
+        fillMethod: 'gauge',
       },
       readings: {
         liquidTemperature: F(72),
