@@ -199,7 +199,7 @@ function buildFillLimit(k: FillLimitContext, limits: LimitEntry[]): FillLimitRes
   };
 }
 
-const pct = (x: number) => `${floorTo(x, 0.1).toFixed(1)} %`;
+const pct = (x: number) => `${+floorTo(x, 0.1).toFixed(1)} %`;
 
 /** One line saying why the stop is where it is (see FillLimitResult.bindingNote). */
 function bindingNote(
@@ -212,10 +212,11 @@ function bindingNote(
   const weight = limits.find((l) => l.kind === 'rule' && l.referenceTemperature === null);
   const setting = limits.find((l) => l.kind === 'gauge-setting');
   const weightWords = weight
-    ? `its weight limit, ${+(weight.fillingDensity * 100).toFixed(2)} % of the water weight${weight.gaugePercent !== null ? ` (${pct(Math.min(100, weight.gaugePercent))} on the gauge now)` : ''}`
+    ? `its weight limit of ${+(weight.fillingDensity * 100).toFixed(2)} % of the water weight${weight.gaugePercent !== null ? ` (${pct(Math.min(100, weight.gaugePercent))} on the gauge now)` : ''}`
     : null;
+  const cite = b.citation.replace(' (CFR 2015 ed.)', '');
   if (b.kind === 'gauge-setting')
-    return `Filled by the fixed maximum-level gauge: the fill stops when liquid first appears at the gauge, set at ${pct(b.gaugePercent ?? stop)} (${b.citation}).`;
+    return `Filled by the fixed maximum-level gauge: the fill stops when liquid first appears at the gauge, set at ${pct(b.gaugePercent ?? stop)}; ${cite}.`;
   const lead =
     c.fillMethod === 'weight'
       ? 'Filled by weight on a scale: the rule’s weight column applies, not its volume column. '
@@ -223,7 +224,7 @@ function bindingNote(
         ? `The fixed maximum-level gauge is set at ${pct(setting.gaugePercent ?? 100)}, above the limit at this temperature: stop by the float gauge at ${pct(stop)}, before liquid appears at the fixed gauge. `
         : '';
   if (b.kind === 'volume')
-    return `${lead}The rule’s volume limit at this temperature binds: ${pct(b.gaugePercent ?? stop)} by volume${weightWords ? `, below ${weightWords}` : ''} (${b.citation}).`;
+    return `${lead}The rule’s volume limit at this temperature binds: ${pct(b.gaugePercent ?? stop)} by volume${weightWords ? `, below ${weightWords}` : ''}; ${cite}.`;
   const ruled = limits.some((l) => l.kind !== 'physical');
   if (b.kind === 'physical' && ruled)
     return `${lead}The not-liquid-full limit binds below the rule’s limits: ${b.description.charAt(0).toLowerCase()}${b.description.slice(1)}.`;
