@@ -310,6 +310,98 @@ describe('LP-gas: the fixed maximum-level gauge', () => {
   });
 });
 
+describe('refrigerated CO2 and N2O in DOT-4L cylinders (49 CFR 173.304a(e)(2))', () => {
+  /** The row's percent for the relief-setting column, from filling_density_other.csv. */
+  function column(gas: string, setting: number): number {
+    const row = OTHER.find((r) => r.gas === gas && r.regulation === '49 CFR 173.304a(e)(2)')!;
+    const settings = row.container_or_packaging!.match(/relief set ([\d/]+) psig/)![1]!.split('/');
+    const pcts = row.max_filling_density_pct_by_weight!.split('/');
+    return Number(pcts[settings.indexOf(String(setting))]);
+  }
+  it('an insulated cylinder with its relief set at or below a column takes that column’s weight figure', () => {
+    const cases: [string, string, number, number][] = [
+      ['carbon-dioxide', 'carbon dioxide, refrigerated liquid', 200, 230],
+      ['carbon-dioxide', 'carbon dioxide, refrigerated liquid', 625, 625],
+      ['nitrous-oxide', 'nitrous oxide, refrigerated liquid', 105, 105],
+      ['nitrous-oxide', 'nitrous oxide, refrigerated liquid', 400, 450],
+    ];
+    for (const [product, gas, set, col] of cases) {
+      const r = checkTank({
+        tank: {
+          waterCapacity: toSI('volume', 180, 'L'),
+          designPressure: psig(set),
+          reliefSetPressure: psig(set),
+          containerClass: 'cylinder',
+          insulated: true,
+        },
+        product,
+        liquidTemperature: F(-40),
+        contents: { gaugePercent: 20 },
+        peakTemperature: F(-40),
+      });
+      const lim = r.fillLimit.limits.find((l) => l.id === 'dot-4l')!;
+      expectWithin(lim.fillingDensity * 100, column(gas, col), 1e-9, {
+        input: { product, set },
+        source: '49 CFR 173.304a(e)(2) (filling_density_other.csv)',
+        kind: 'published',
+      });
+      expect(lim.citation).toContain('173.304a(e)(2)');
+    }
+  });
+  it('a relief setting above 625 psig is not a DOT-4L: the 68 % rule of 173.304a(a)(2) applies', () => {
+    const r = checkTank({
+      tank: {
+        waterCapacity: toSI('volume', 34, 'L'),
+        designPressure: psig(1800),
+        reliefSetPressure: psig(3000),
+        containerClass: 'cylinder',
+        insulated: true,
+      },
+      product: 'carbon-dioxide',
+      liquidTemperature: F(70),
+      contents: { netMass: 10 },
+      peakTemperature: F(70),
+    });
+    expect(r.fillLimit.limits.some((l) => l.id === 'dot-4l')).toBe(false);
+    expect(r.fillLimit.limits.find((l) => l.id === 'co2-cylinder')!.fillingDensity).toBe(
+      Number(
+        OTHER.find((x) => x.gas === 'carbon dioxide' && x.regulation === '49 CFR 173.304a(a)(2)')!
+          .max_filling_density_pct_by_weight,
+      ) / 100,
+    );
+  });
+});
+
+describe('LP-gas by gauge: the weight limit as a volume at today’s temperature', () => {
+  it('follows the derived maximum-liquid-volume rows for SG 0.508 (max_liquid_volume.csv, formula of 1910.110(b)(19)(v))', () => {
+    const rows = readCsv(
+      fileURLToPath(new URL('../reference/trade/max_liquid_volume.csv', import.meta.url)),
+    ).filter((r) => r.sg_60F === '0.508' && r.container_class === 'aboveground_le_1200gal');
+    expect(rows.length).toBeGreaterThan(5);
+    for (const row of rows) {
+      const t = Number(row.liquid_temp_F);
+      if (t < -40 || t > 120) continue;
+      const r = checkTank({
+        tank: { waterCapacity: gal(500), designPressure: psig(250) },
+        product: 'propane',
+        specificGravity: 0.508,
+        liquidTemperature: F(t),
+        contents: { gaugePercent: 20 },
+        peakTemperature: F(t),
+      });
+      const v = r.fillLimit.limits.find((l) => l.id === 'lpg-volume-now')!;
+      // derived table (VCF interpolated to SG 0.508) vs the model's propane VCF: within 0.3 point
+      expectWithin(v.gaugePercent!, Number(row.max_liquid_volume_pct_of_container), 0.3, {
+        input: { t },
+        source: 'max_liquid_volume.csv (derived from 29 CFR 1910.110(b)(19)(v) and Table H-27)',
+        kind: 'published',
+        why: 'the table’s VCF is for SG 0.508, the model’s for pure propane (0.5072)',
+      });
+      expect(r.fillLimit.stopAtGaugePercent).toBeLessThanOrEqual(v.gaugePercent! + 1e-9);
+    }
+  });
+});
+
 /** The printed volume limits from filling_density_other.csv that bind a fill by gauge, by container. */
 function printedCeiling(product: string, tank: TankCheckInput['tank'], tempF: number): number {
   const cls = tank.containerClass ?? 'storage';

@@ -15,6 +15,7 @@
 import type { Product } from '../product.js';
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
 import { fillingRule, referenceRules } from '../rules/gases.js';
+import { dot4lRule } from '../rules/refrigerated.js';
 import { volumeRules } from '../rules/volumeLimits.js';
 import type { ProductModel, Sat } from './model.js';
 import type { FillLimitResult, LimitEntry } from './types.js';
@@ -56,15 +57,22 @@ function percentForMass(k: FillLimitContext, mass: number): number | null {
 export function computeFillLimit(k: FillLimitContext): FillLimitOutcome {
   const { c, model } = k;
   const limits: LimitEntry[] = [];
-  const rule = fillingRule({
-    product: k.product,
-    containerClass: c.containerClass,
-    placement: c.placement,
-    insulated: c.insulated,
-    fixedDipTube: c.fillMethod === 'fixed-gauge',
-    waterCapacity: c.V,
-    specificGravity: k.sg,
-  });
+  // An insulated DOT cylinder with a low relief setting is read as a DOT-4L (refrigerated) cylinder.
+  const rule4l =
+    c.containerClass === 'cylinder' && c.insulated
+      ? dot4lRule(k.product, c.reliefSetPressure)
+      : null;
+  const rule =
+    rule4l ??
+    fillingRule({
+      product: k.product,
+      containerClass: c.containerClass,
+      placement: c.placement,
+      insulated: c.insulated,
+      fixedDipTube: c.fillMethod === 'fixed-gauge',
+      waterCapacity: c.V,
+      specificGravity: k.sg,
+    });
   if (rule) {
     const maxMass = floorTo(rule.fillingDensity * k.waterWeight, 0.01);
     limits.push({

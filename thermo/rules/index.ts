@@ -22,6 +22,7 @@ export {
 } from './gases.js';
 export type { RuleChoice, PhysicalRuleChoice, RuleContext } from './gases.js';
 export { volumeRules, FILL_METHODS } from './volumeLimits.js';
+export { dot4lRule, DOT_4L_RELIEF_PSIG, DOT_4L_PERCENT } from './refrigerated.js';
 export type { FillMethod, VolumeRuleChoice, VolumeRuleContext } from './volumeLimits.js';
 export {
   reliefRange,
