@@ -353,7 +353,7 @@ export class TankForm extends LitElement {
               .checked=${np.insulated ?? false}
               @change=${(e: Event) => this._setNameplate({ insulated: (e.target as HTMLInputElement).checked || undefined })}
             />
-            Insulated shell
+            Insulated shell (a DOT cylinder so marked is read as a DOT-4L)
           </label>
           <div class="field">
             <label for="fill-method">How it is filled</label>
