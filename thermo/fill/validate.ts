@@ -5,7 +5,9 @@
  */
 import { InputError } from '../errors.js';
 import type { Quantity } from '../units.js';
-import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../check/validate.js';
+import { describeProduct } from '../api.js';
+import type { TankCheckInput } from '../check/types.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K, validateInput } from '../check/validate.js';
 import { FILL_ACCURACY_DEFAULTS, FILL_ACCURACY_LIMITS } from './defaults.js';
 import type { FillInput, FillStart, MeterBasis } from './types.js';
 
@@ -142,14 +144,7 @@ export function validateFillStart(x: unknown, field: string): asserts x is FillS
   if (!isObject(x)) throw new InputError(field, 'an object { check, before, startedAt }', x);
   if (!isObject(x.check) || !isObject(x.check.tank))
     throw new InputError(`${field}.check`, 'the tank check input the fill started from', x.check);
-  num(
-    `${field}.check.tank.waterCapacity`,
-    x.check.tank.waterCapacity,
-    1e-4,
-    1e5,
-    'from 0.0001 to 100 000 m³',
-    'volume',
-  );
+  validateCheckInput(x.check, `${field}.check`);
   date(`${field}.startedAt`, x.startedAt);
   const b = x.before;
   if (!isObject(b)) throw new InputError(`${field}.before`, 'the figures of the check before', b);
@@ -177,4 +172,16 @@ export function oneOf(field: string, x: unknown, allowed: readonly string[]): vo
 export function date(field: string, x: unknown): void {
   if (typeof x !== 'string' || Number.isNaN(Date.parse(x)))
     throw new InputError(field, 'an ISO 8601 date and time', x);
+}
+
+/** The check input a fill started from, as the check itself validates it, fields prefixed. */
+function validateCheckInput(check: unknown, field: string): void {
+  try {
+    validateInput(check as TankCheckInput);
+    describeProduct((check as TankCheckInput).product);
+  } catch (e) {
+    if (e instanceof InputError)
+      throw new InputError(`${field}.${e.field}`, e.validRange, undefined, e.limits);
+    throw e;
+  }
 }
