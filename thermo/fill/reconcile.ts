@@ -158,7 +158,7 @@ function saturationAt(check: TankCheckInput, T: number, field: string): Sat {
     if (e instanceof InputError && e.field === 'T') {
       throw new InputError(
         field,
-        `${e.validRange}: the product has a liquid level there (a gauge reading or a metered liquid volume means nothing above the critical temperature)`,
+        `${e.validRange}, where this product has a liquid level (there is none above the critical temperature, so a gauge reading or a metered liquid volume means nothing there)`,
         T,
         e.limits,
       );
