@@ -50,32 +50,11 @@ function reconcile(c: CleanFill): FillReconciliation {
   const V = check.tank.waterCapacity;
   const satAfter = saturationAt(check, c.afterTemperature, 'after.liquidTemperature');
 
-  // --- Delivered mass from the meter. ---
-  const Tref =
-    c.basis === 'compensated-60F'
-      ? T_60F_K
-      : c.basis === 'compensated-15C'
-        ? T_15C_K
-        : (c.meterTemperature ?? c.afterTemperature);
-  const field = c.basis === 'gross' ? 'delivered.meterTemperature' : 'delivered.basis';
-  const rhoRef = saturationAt(check, Tref, field).rhoL;
+  const { Tref, rhoRef } = meterDensity(c);
   const deliveredMass = c.volume * rhoRef;
   const expectedMass = before.totalMass + deliveredMass;
 
-  // --- What the contents before would read at the after temperature with nothing delivered. ---
-  const floorReading = floorTo(leverPercent(before.totalMass / V, satAfter), 0.1);
-  if (deliveredMass > 0 && c.afterGauge < floorReading - 1e-9) {
-    throw new InputError(
-      'after.gaugePercent',
-      `from ${floorReading.toFixed(1)} to 100 %: the contents before the delivery alone read ${floorReading.toFixed(1)} % at the after temperature, and a metered delivery cannot lower the level (check the readings; a gauge that reads this is faulty)`,
-      c.afterGauge,
-      {
-        min: floorReading,
-        max: 100,
-        note: 'the contents before the delivery alone, at the after temperature',
-      },
-    );
-  }
+  if (deliveredMass > 0) refuseLowerLevel(c, satAfter);
 
   // --- The expected after-state, by the tank check. ---
   const expected = expectedCheck(c, expectedMass, rhoRef);
@@ -88,7 +67,7 @@ function reconcile(c: CleanFill): FillReconciliation {
   const maxMass = Math.min(before.maxMass, expected.fillLimit.maxMass);
   const stopAt = Math.min(
     expected.fillLimit.stopAtGaugePercent,
-    Math.max(0, Math.min(100, floorTo(leverPercent(before.maxMass / V, satAfter), 0.1))),
+    floorTo(leverPercent(before.maxMass / V, satAfter), 0.1),
   );
   const over = Math.max(expectedMass, gaugeMass) - maxMass;
   // Masses are rounded to 0.01 kg by the check; less than that over is rounding, not over.
@@ -139,6 +118,35 @@ function reconcile(c: CleanFill): FillReconciliation {
     baro: expected.barometricPressure,
   });
   return result;
+}
+
+/** The meter's base temperature and the model's liquid density there. */
+function meterDensity(c: CleanFill): { Tref: number; rhoRef: number } {
+  const Tref =
+    c.basis === 'compensated-60F'
+      ? T_60F_K
+      : c.basis === 'compensated-15C'
+        ? T_15C_K
+        : (c.meterTemperature ?? c.afterTemperature);
+  const field = c.basis === 'gross' ? 'delivered.meterTemperature' : 'delivered.basis';
+  return { Tref, rhoRef: saturationAt(c.start.check, Tref, field).rhoL };
+}
+
+/** Refuses an after-reading below what the contents before alone read at the after temperature. */
+function refuseLowerLevel(c: CleanFill, satAfter: Sat): void {
+  const V = c.start.check.tank.waterCapacity;
+  const floorReading = floorTo(leverPercent(c.start.before.totalMass / V, satAfter), 0.1);
+  if (c.afterGauge >= floorReading - 1e-9) return;
+  throw new InputError(
+    'after.gaugePercent',
+    `from ${floorReading.toFixed(1)} to 100 %: the contents before the delivery alone read ${floorReading.toFixed(1)} % at the after temperature, and a metered delivery cannot lower the level (check the readings; a gauge that reads this is faulty)`,
+    c.afterGauge,
+    {
+      min: floorReading,
+      max: 100,
+      note: 'the contents before the delivery alone, at the after temperature',
+    },
+  );
 }
 
 /**

@@ -97,7 +97,24 @@ export function validateFillInput(input: FillInput): CleanFill {
           'from −120 000 to 100 000 000 Pa gauge',
           'gaugePressure',
         );
-  const acc: unknown = input.accuracy ?? {};
+  const { gaugePoints, meterFraction } = validateAccuracy(input.accuracy);
+  return {
+    start,
+    volume,
+    basis,
+    meterTemperature,
+    interrupted: d.interrupted === true,
+    afterGauge,
+    afterTemperature,
+    afterPressure,
+    gaugePoints,
+    meterFraction,
+  };
+}
+
+/** The instruments' accuracies, defaults filled in. */
+function validateAccuracy(accuracy: unknown): { gaugePoints: number; meterFraction: number } {
+  const acc: unknown = accuracy ?? {};
   if (!isObject(acc))
     throw new InputError('accuracy', 'an object { gaugePoints?, meterFraction? }', acc);
   const L = FILL_ACCURACY_LIMITS;
@@ -122,18 +139,7 @@ export function validateFillInput(input: FillInput): CleanFill {
           'a fraction of the delivered volume from 0 to 0.1',
           'fraction',
         );
-  return {
-    start,
-    volume,
-    basis,
-    meterTemperature,
-    interrupted: d.interrupted === true,
-    afterGauge,
-    afterTemperature,
-    afterPressure,
-    gaugePoints,
-    meterFraction,
-  };
+  return { gaugePoints, meterFraction };
 }
 
 const SOURCES = ['gaugePercent', 'levelHeight', 'netMass'] as const;
