@@ -55,13 +55,13 @@ export function buildFindings(r: FillReconciliation, k: FindingContext): FillFin
     difference: P(r.difference, 'gaugePoints'),
     band: P(r.band.halfWidth, 'gaugePoints'),
   };
-  const seen = `the gauge reads ${pct(r.gaugePercent)}; the contents before and the metered delivery put it at ${pct(r.expectedGaugePercent)}, within ±${pts(r.band.halfWidth, 'down')}`;
+  const seen = `the gauge reads ${pct(r.gaugePercent)}; the contents before and the metered delivery put it at ${pct(r.expectedGaugePercent)} (agreement band ±${pts(r.band.halfWidth, 'down')})`;
 
   if (r.overMass > 0) {
     add(
       'danger',
       'fill-over-limit',
-      `Over the fill limit after the delivery by ${fmtMass(r.overMass, 'up')} (about ${vol(r.overVolume, 'up')} of liquid): the limit is ${fmtMass(r.maxMass, 'down')}, the gauge reading stands for ${fmtMass(r.gaugeMass)} and the metered delivery for ${fmtMass(r.expectedMass)}. A tank over its limit can become liquid-full as it warms. Follow the site's procedure for an overfilled tank.`,
+      `Over the fill limit after the delivery by ${fmtMass(r.overMass, 'up')} (about ${vol(r.overVolume, 'up')} of liquid): the limit is ${fmtMass(r.maxMass, 'down')}, the gauge reading stands for ${fmtMass(r.gaugeMass)}, and the contents before plus the metered delivery come to ${fmtMass(r.expectedMass)}. A tank over its limit can become liquid-full as it warms. Follow the site's procedure for an overfilled tank.`,
       {
         overMass: P(r.overMass, 'mass'),
         overVolume: P(r.overVolume, 'volume'),
