@@ -65,10 +65,7 @@ function reconcile(c: CleanFill): FillReconciliation {
 
   // --- The fill limit after: the lower of the check's limit before and at the after temperature. ---
   const maxMass = Math.min(before.maxMass, expected.fillLimit.maxMass);
-  const stopAt = Math.min(
-    expected.fillLimit.stopAtGaugePercent,
-    floorTo(leverPercent(before.maxMass / V, satAfter), 0.1),
-  );
+  const stopAt = expected.fillLimit.stopAtGaugePercent;
   const over = Math.max(expectedMass, gaugeMass) - maxMass;
   // Masses are rounded to 0.01 kg by the check; less than that over is rounding, not over.
   const overMass = over > 0.005 ? ceilTo(over, 0.01) : 0;
@@ -188,6 +185,10 @@ function expectedCheck(c: CleanFill, mass: number, rhoRef: number): TankCheckRes
     ...c.start.check,
     liquidTemperature: c.afterTemperature,
     contents: { netMass: mass },
+    // The not-liquid-full limit takes the warmest of the peak, now and the temperature before
+    // (the tank was there today), so the check's limit and stop-at are never above the limit
+    // before the delivery.
+    peakTemperature: Math.max(c.start.check.peakTemperature, c.start.before.liquidTemperature),
   };
   delete input.gaugePressure;
   if (c.afterPressure !== null) input.gaugePressure = c.afterPressure;
