@@ -240,6 +240,43 @@ describe('reconcileFill: identities and edge cases', () => {
     // A stuck gauge: 200 gal delivered, the gauge has not moved from 20 %.
     expect(fill({ volume: gal(200) }, { gaugePercent: 20 }).verdict).toBe('gauge-low');
   });
+
+  it('the start is a copy: editing the screen’s input later changes nothing', () => {
+    const input = tank({ contents: { gaugePercent: 35 } });
+    const s = startFill(input, undefined, at);
+    (input.contents as { gaugePercent: number }).gaugePercent = 90;
+    input.tank.waterCapacity = 1;
+    expect(s.before.gaugePercent).toBe(35);
+    expect(s.check.tank.waterCapacity).toBe(gal(1000));
+  });
+
+  it('a gross meter without its own temperature takes the after temperature', () => {
+    const a = fill(
+      { volume: gal(400), basis: 'gross' },
+      { gaugePercent: 60, liquidTemperature: F(80) },
+    );
+    const b = fill(
+      { volume: gal(400), basis: 'gross', meterTemperature: F(80) },
+      { gaugePercent: 60, liquidTemperature: F(80) },
+    );
+    expect(a.meterReferenceTemperature).toBe(F(80));
+    expect(a.deliveredMass).toBe(b.deliveredMass);
+  });
+
+  it('a level-height start counts the before reading’s error like a gauge', () => {
+    const shape = { kind: 'sphere' as const, diameter: 2 };
+    const s = startFill(
+      tank({
+        tank: { waterCapacity: (Math.PI * 8) / 6, designPressure: psig(250), shape },
+        contents: { levelHeight: 0.5 },
+      }),
+      undefined,
+      at,
+    );
+    const r = fill({ volume: 1 }, { gaugePercent: 60 }, s);
+    expect(r.band.beforeGauge).toBeGreaterThan(0);
+    expect(s.before.contentsSource).toBe('levelHeight');
+  });
 });
 
 describe('reconcileFill: refusals name the field and range', () => {

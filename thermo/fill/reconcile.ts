@@ -136,7 +136,7 @@ function refuseLowerLevel(c: CleanFill, satAfter: Sat): void {
   if (c.afterGauge >= floorReading - 1e-9) return;
   throw new InputError(
     'after.gaugePercent',
-    `from ${floorReading.toFixed(1)} to 100 %: the contents before the delivery alone read ${floorReading.toFixed(1)} % at the after temperature, and a metered delivery cannot lower the level (check the readings; a gauge that reads this is faulty)`,
+    `from ${floorReading.toFixed(1)} to 100 %: the contents before the delivery alone read ${floorReading.toFixed(1)} % at the after temperature, and a metered delivery cannot lower the level (check the readings; if the gauge does read this it is faulty: do not fill by it, and follow the site's procedures)`,
     c.afterGauge,
     {
       min: floorReading,
