@@ -1,6 +1,6 @@
 /**
- * Properties of the fill reconciliation over random tanks, products, temperatures and
- * deliveries (fast-check):
+ * Properties of the fill reconciliation over random tanks, products (pure and LP-gas blends),
+ * temperatures and deliveries (fast-check):
  * - delivering exactly the room left (as a meter compensated to 60 °F reads it) at the same
  *   temperature reconciles to the stop-at percent: the expected level is the stop-at percent
  *   (within its 0.1-point rounding) and a gauge reading the stop-at is consistent, not over;
@@ -16,9 +16,17 @@ import {
   type FillStart,
   type TankCheckInput,
 } from '../../thermo/index.js';
+import { LPG_PRESETS } from '../../thermo/rules/presets.js';
 import { checkClose } from '../helpers/check.js';
 
-const products = fc.constantFrom('propane', 'n-butane', 'isobutane', 'ammonia', 'propylene');
+const products = fc.oneof(
+  {
+    weight: 8,
+    arbitrary: fc.constantFrom('propane', 'n-butane', 'isobutane', 'ammonia', 'propylene'),
+  },
+  // A commercial LP-gas blend now and then (slower: bubble points).
+  { weight: 1, arbitrary: fc.constantFrom(...LPG_PRESETS.map((p) => p.product)) },
+);
 
 /** A random tank and a before-check that the check accepts (two-phase, below the limit). */
 const starts = fc
