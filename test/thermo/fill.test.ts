@@ -241,6 +241,22 @@ describe('reconcileFill: identities and edge cases', () => {
     expect(fill({ volume: gal(200) }, { gaugePercent: 20 }).verdict).toBe('gauge-low');
   });
 
+  it('a reading at the stop-at is not over; one above it stands for contents over the limit', () => {
+    const room = { volume: start20.before.roomLeftVolumeAt60F };
+    const atStop = fill(room, { gaugePercent: start20.before.stopAtGaugePercent });
+    expect(atStop.verdict).toBe('consistent');
+    // 1 point above the stop-at of a 1,000 gal tank at 60 °F is 0.01 × 3.785412 m³ ×
+    // (506.7 − 16.05) kg/m³ = 18.6 kg of contents over (saturation_properties.csv, by hand).
+    const above = fill(room, { gaugePercent: start20.before.stopAtGaugePercent + 1 });
+    expect(above.verdict).toBe('over-limit');
+    expectWithin(above.overMass, 18.6, 1.5, {
+      input: 'room left delivered, gauge 1 point above the stop-at',
+      source: `${CASES} case 4 with saturation_properties.csv`,
+      kind: 'published',
+      why: 'the stop-at is rounded down by up to 0.1 point (1.9 kg), model density ±0.5 %',
+    });
+  });
+
   it('the start is a copy: editing the screen’s input later changes nothing', () => {
     const input = tank({ contents: { gaugePercent: 35 } });
     const s = startFill(input, undefined, at);

@@ -66,7 +66,11 @@ function reconcile(c: CleanFill): FillReconciliation {
   // --- The fill limit after: the lower of the check's limit before and at the after temperature. ---
   const maxMass = Math.min(before.maxMass, expected.fillLimit.maxMass);
   const stopAt = expected.fillLimit.stopAtGaugePercent;
-  const over = Math.max(expectedMass, gaugeMass) - maxMass;
+  // Over by the meter: the expected contents above the limit. Over by the gauge: a reading
+  // above the stop-at percent, by the contents it stands for (a reading at the stop-at is not
+  // over, even where the check rounds the limit's mass down and not its percent).
+  const overByGauge = c.afterGauge > stopAt + 1e-9 ? gaugeMass - maxMass : 0;
+  const over = Math.max(expectedMass - maxMass, overByGauge);
   // Masses are rounded to 0.01 kg by the check; less than that over is rounding, not over.
   const overMass = over > 0.005 ? ceilTo(over, 0.01) : 0;
 
