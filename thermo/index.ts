@@ -25,3 +25,4 @@ export { InputError, ConvergenceError } from './errors.js';
 export type { InputLimits } from './errors.js';
 export { R_J_molK, P_ATM_Pa, T_60F_K } from './constants.js';
 export * from './check/index.js';
+export * from './fill/index.js';
