@@ -176,8 +176,11 @@ export class DisplayUnits {
   /** Shown digits: per quantity and unit, and no finer than the figure's size warrants. */
   private _decimals(q: Quantity, valueSI: number | null | undefined): number | undefined {
     const base = decimalsFor(q, this.unit(q));
-    if (base === undefined || valueSI === null || valueSI === undefined) return base;
-    return fitPrecision(q, this.fromSI(q, valueSI), base);
+    if (valueSI === null || valueSI === undefined || !Number.isFinite(valueSI)) return base;
+    const x = this.fromSI(q, valueSI);
+    if (base !== undefined) return fitPrecision(q, x, base);
+    // Volumes otherwise take formatQuantity's size-based digits; from 100 up, ours.
+    return q === 'volume' && Math.abs(x) >= 100 ? fitPrecision(q, x, 1) : undefined;
   }
 
   /**

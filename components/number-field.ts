@@ -190,9 +190,6 @@ export class NumberField extends LitElement {
             : this._error && this._validate(this.value).error;
       }
     }
-  }
-
-  protected override updated(changed: PropertyValues<this>): void {
     // The plausible range moved (e.g. another container class): ask again about typed text.
     if (
       this._typed &&
