@@ -24,7 +24,7 @@ export interface TankRecord {
   nameplate: TankInput;
   /** What the tank holds: a product choice of the app (see components/products.ts). */
   productId: string;
-  /** Part of the invented demo site (one tap clears every such record). */
+  /** Part of the invented demo site; false once the user edits it or saves a check on it. */
   demo: boolean;
   /** ISO 8601 timestamps. */
   createdAt: string;

@@ -12,6 +12,7 @@ import { toSI } from '../../thermo/units.js';
 import { byTestId, deep, deepAll, typeText } from './dom.js';
 import { FIELD_ERROR } from './dom.js';
 import { NUMBER_FORMATS } from '../../components/number-parse.js';
+import { lastCheckByTank } from '../../pwa/lookups.js';
 import type { NumberField } from '../../components/number-field.js';
 
 // Metric units with the decimal comma (de-DE style), so "17,2" reads as 17.2.
@@ -37,6 +38,16 @@ function tank(id: string, site: string, name: string, demo = false): TankRecord 
 }
 
 describe('tank-list', () => {
+  it('tank-list shows tanks whose ids are named like object built-ins (a backup may hold them)', async () => {
+    const ids = ['constructor', '__proto__', 'toString'];
+    const el = await fixture<TankList>(
+      html`<tank-list .tanks=${ids.map((id) => tank(id, 'S', `Tank ${id}`))} .lastChecks=${lastCheckByTank([])}></tank-list>`,
+    );
+    const items = deepAll(el, '[data-testid="tank-item"]');
+    expect(items.map((i) => i.dataset.tankId).sort()).to.deep.equal([...ids].sort());
+    for (const i of items) expect(i.textContent).to.contain('No saved check yet');
+  });
+
   it('tank-list groups tanks by site, sites and names in order', async () => {
     const el = await fixture<TankList>(
       html`<tank-list
