@@ -67,18 +67,15 @@ export class ConfirmBar extends LitElement {
   }
 
   override render() {
-    return html`<div
-      class="bar"
-      role="alertdialog"
-      aria-labelledby="q"
-      data-testid="confirm-bar"
-    >
+    return html`<div class="bar" role="alertdialog" aria-labelledby="q" data-testid="confirm-bar">
       <p id="q">${this.text}</p>
       <div class="buttons">
         <button class="primary" data-testid="confirm-yes" @click=${() => this._fire('confirm-yes')}>
           ${this.yes}
         </button>
-        <button data-testid="confirm-no" @click=${() => this._fire('confirm-no')}>${this.no}</button>
+        <button data-testid="confirm-no" @click=${() => this._fire('confirm-no')}>
+          ${this.no}
+        </button>
       </div>
     </div>`;
   }

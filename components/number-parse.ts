@@ -66,8 +66,7 @@ export function resolveNumberFormat(id: NumberFormatId | undefined, locale?: str
 }
 
 export type ParsedNumber =
-  | { ok: true; value: number | null; alternative?: number }
-  | { ok: false; message: string };
+  { ok: true; value: number | null; alternative?: number } | { ok: false; message: string };
 
 const SPACES = /[\s\u00a0\u202f\u2009\u2007]/g;
 /** Full-width digits and signs (East Asian keyboards) and the true minus sign. */
@@ -107,7 +106,10 @@ function parse(text: string, fmt: NumberFormat, suggest: boolean): ParsedNumber 
   const sign = /^[+-]/.test(t) ? t[0] : '';
   const body = sign ? t.slice(1).trim() : t;
   if (!/^[\d.,'\s\u00a0\u202f\u2009\u2007]+$/.test(body) || !/\d/.test(body))
-    return { ok: false, message: `“${shown}” is not a number. Type digits only, e.g. 1${fmt.decimal}5.` };
+    return {
+      ok: false,
+      message: `“${shown}” is not a number. Type digits only, e.g. 1${fmt.decimal}5.`,
+    };
   const dec = fmt.decimal;
   const pieces = body.split(dec);
   if (pieces.length > 2) return wrongMark(shown, body, fmt, suggest);
@@ -149,8 +151,7 @@ function groupName(fmt: NumberFormat): string {
 
 /** The text read in the other decimal convention, to suggest what to type. */
 function otherReading(body: string, fmt: NumberFormat): number | null {
-  const swapped: NumberFormat =
-    fmt.decimal === '.' ? NUMBER_FORMATS.comma : NUMBER_FORMATS.point;
+  const swapped: NumberFormat = fmt.decimal === '.' ? NUMBER_FORMATS.comma : NUMBER_FORMATS.point;
   const r = parse(body, swapped, false);
   return r.ok && r.value !== null ? r.value : null;
 }
@@ -173,7 +174,8 @@ function ambiguous(shown: string, int: string, frac: string, fmt: NumberFormat):
     message:
       `“${shown}” is ambiguous: with a decimal comma it is ${small ? `${int},${small}` : int}, ` +
       `but it is also how ${thousand} is written with a comma between thousands. ` +
-      `Type ${thousand} for ${thousand}, or ${int},${frac}0 for ${int} and ${frac} thousandths.`,
+      `Type ${thousand} for ${thousand} (or ${formatDigits(thousand, fmt, 1000)}), ` +
+      `or ${int},${frac}0 for ${int} and ${frac} thousandths.`,
   };
 }
 
@@ -195,7 +197,6 @@ export function formatDigits(fixed: string, fmt: NumberFormat, groupFrom = 10_00
   const m = /^(-?)(\d+)(?:\.(\d+))?$/.exec(fixed);
   if (!m) return fixed;
   const [, sign, int, frac] = m as unknown as [string, string, string, string | undefined];
-  const grouped =
-    Number(int) >= groupFrom ? int.replace(/\B(?=(\d{3})+(?!\d))/g, fmt.group) : int;
+  const grouped = Number(int) >= groupFrom ? int.replace(/\B(?=(\d{3})+(?!\d))/g, fmt.group) : int;
   return `${sign}${grouped}${frac === undefined ? '' : fmt.decimal + frac}`;
 }

@@ -29,7 +29,11 @@ export const PLAUSIBLE_WATER_CAPACITY: Record<ContainerClass, Plausible> = {
   // Common practice: the smallest refillable cylinders (lecture bottles) hold about 0.4 L;
   // DOT-4B/4BA/4BW cylinders are limited to 1 000 lb water capacity (49 CFR 178.50–178.61,
   // from memory): 1 000 lb ÷ 8.32828 lb/US gal = 120 US gal.
-  cylinder: { min: toSI('volume', 0.25, 'L'), max: gal(1000 / LB_WATER_PER_GAL), what: 'for a cylinder' },
+  cylinder: {
+    min: toSI('volume', 0.25, 'L'),
+    max: gal(1000 / LB_WATER_PER_GAL),
+    what: 'for a cylinder',
+  },
   // Nurse tanks of 49 CFR 173.315(m) hold up to 3 000 US gal; common practice: cargo tanks
   // hold from a few hundred US gal to rail tank cars of about 34 000 US gal.
   cargo: { min: gal(250), max: gal(40_000), what: 'for a cargo tank' },

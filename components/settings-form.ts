@@ -190,8 +190,8 @@ export class SettingsForm extends LitElement {
           </select>
           <p class="note" id="number-format-note">
             Type numbers as ${formatDigits('12345.6', resolveNumberFormat(s.numberFormat))}: the
-            decimal mark is never taken for a thousands separator, and an entry that could be
-            read both ways is refused.
+            decimal mark is never taken for a thousands separator, and an entry that could be read
+            both ways is refused.
           </p>
         </div>
         <p class="note">

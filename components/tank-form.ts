@@ -18,11 +18,7 @@ import type { NumberFieldChange } from './number-field.js';
 import { productChoices, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
 import { TEXT_LIMITS } from './limits.js';
-import {
-  PLAUSIBLE_DESIGN_PRESSURE,
-  PLAUSIBLE_WATER_CAPACITY,
-  plausibleFor,
-} from './plausible.js';
+import { PLAUSIBLE_DESIGN_PRESSURE, PLAUSIBLE_WATER_CAPACITY, plausibleFor } from './plausible.js';
 import type { NumberField } from './number-field.js';
 import type {
   ContainerClass,

@@ -15,7 +15,10 @@ import type { CheckRecord, TankRecord } from '../components/types.js';
  * line break. (OWASP, "CSV Injection", names = + - @ tab and carriage return.)
  */
 export function looksLikeFormula(v: string): boolean {
-  return /^[\s\u00a0\u2000-\u200b\u202f\u3000\ufeff]*[=+\-@\uff1d\uff0b\uff0d\uff20\u2212]/.test(v) || /^[\t\r\n]/.test(v);
+  return (
+    /^[\s\u00a0\u2000-\u200b\u202f\u3000\ufeff]*[=+\-@\uff1d\uff0b\uff0d\uff20\u2212]/.test(v) ||
+    /^[\t\r\n]/.test(v)
+  );
 }
 
 function cell(v: string): string {

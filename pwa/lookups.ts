@@ -12,7 +12,9 @@ export function table<V>(): Record<string, V | undefined> {
 }
 
 /** The newest check of each tank (checks come newest first). */
-export function lastCheckByTank(checks: readonly CheckRecord[]): Record<string, CheckRecord | undefined> {
+export function lastCheckByTank(
+  checks: readonly CheckRecord[],
+): Record<string, CheckRecord | undefined> {
   const last = table<CheckRecord>();
   for (const c of checks) if (last[c.tankId] === undefined) last[c.tankId] = c;
   return last;

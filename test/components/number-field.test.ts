@@ -214,11 +214,18 @@ describe('number-field', () => {
 
   it('reportValidity marks an empty required field with its own message', async () => {
     const el = await fixture<NumberField>(
-      html`<number-field label="Design pressure" required quantity="gaugePressure" .display=${fahrenheit}></number-field>`,
+      html`<number-field
+        label="Design pressure"
+        required
+        quantity="gaugePressure"
+        .display=${fahrenheit}
+      ></number-field>`,
     );
     expect(el.reportValidity()).to.equal(false);
     await el.updateComplete;
-    expect(el.shadowRoot!.querySelector('.error')!.textContent).to.contain('Design pressure is needed');
+    expect(el.shadowRoot!.querySelector('.error')!.textContent).to.contain(
+      'Design pressure is needed',
+    );
     expect(input(el).getAttribute('aria-invalid')).to.equal('true');
   });
 });

@@ -41,7 +41,10 @@ describe('tank-list', () => {
   it('tank-list shows tanks whose ids are named like object built-ins (a backup may hold them)', async () => {
     const ids = ['constructor', '__proto__', 'toString'];
     const el = await fixture<TankList>(
-      html`<tank-list .tanks=${ids.map((id) => tank(id, 'S', `Tank ${id}`))} .lastChecks=${lastCheckByTank([])}></tank-list>`,
+      html`<tank-list
+        .tanks=${ids.map((id) => tank(id, 'S', `Tank ${id}`))}
+        .lastChecks=${lastCheckByTank([])}
+      ></tank-list>`,
     );
     const items = deepAll(el, '[data-testid="tank-item"]');
     expect(items.map((i) => i.dataset.tankId).sort()).to.deep.equal([...ids].sort());
@@ -115,7 +118,9 @@ describe('tank-form', () => {
       expect(err, id).to.match(/is needed: enter/);
     }
     // The relief setting is optional: no message.
-    expect((byTestId(el, 'tank-relief-pressure') as HTMLInputElement).getAttribute('aria-invalid')).to.equal('false');
+    expect(
+      (byTestId(el, 'tank-relief-pressure') as HTMLInputElement).getAttribute('aria-invalid'),
+    ).to.equal('false');
   });
 
   it('tank-form reads "1,000" US gal as one thousand and saves 1000 US gal', async () => {
@@ -146,11 +151,15 @@ describe('tank-form', () => {
     byTestId(el, 'tank-save').click();
     await el.updateComplete;
     expect(fired).to.equal(false);
-    const wc = (byTestId(el, 'tank-water-capacity').getRootNode() as ShadowRoot).querySelector('.question')!;
+    const wc = (byTestId(el, 'tank-water-capacity').getRootNode() as ShadowRoot).querySelector(
+      '.question',
+    )!;
     // 100 US gal: smallest stationary storage tanks (common practice, components/plausible.ts)
     expect(wc.textContent).to.contain('1 US gal is unusual for a storage tank');
     expect(wc.textContent).to.contain('100 to 1,000,000 US gal');
-    const dp = (byTestId(el, 'tank-design-pressure').getRootNode() as ShadowRoot).querySelector('.question')!;
+    const dp = (byTestId(el, 'tank-design-pressure').getRootNode() as ShadowRoot).querySelector(
+      '.question',
+    )!;
     // 80 psig: lowest container type of 29 CFR 1910.110(d)(2) Table H-31
     expect(dp.textContent).to.contain('2 psig is unusual for a storage tank');
     expect(dp.textContent).to.contain('80 to 600 psig');
@@ -160,7 +169,7 @@ describe('tank-form', () => {
     cls.dispatchEvent(new Event('change'));
     await el.updateComplete;
     const field = byTestId(el, 'tank-water-capacity').getRootNode() as ShadowRoot;
-    await ((field.host as NumberField).updateComplete);
+    await (field.host as NumberField).updateComplete;
     expect(field.querySelector('.question')).to.equal(null);
   });
 

@@ -81,21 +81,31 @@ describe('parseBackup', () => {
       expect(r.reason).to.contain('Nothing was changed');
     }
     const long = { ...tank('b'), name: 'n'.repeat(TEXT_LIMITS.name + 1) };
-    expect(parseBackup(JSON.stringify(makeBackup({ tanks: [long], checks: [], settings: null }))).ok).to.equal(false);
+    expect(
+      parseBackup(JSON.stringify(makeBackup({ tanks: [long], checks: [], settings: null }))).ok,
+    ).to.equal(false);
     const notes = { ...tank('c'), notes: 'n'.repeat(TEXT_LIMITS.notes) };
-    expect(parseBackup(JSON.stringify(makeBackup({ tanks: [notes], checks: [], settings: null }))).ok).to.equal(true);
+    expect(
+      parseBackup(JSON.stringify(makeBackup({ tanks: [notes], checks: [], settings: null }))).ok,
+    ).to.equal(true);
   });
 
   it('parseBackup checks the number format setting', () => {
     const ok = { ...DEFAULT_SETTINGS, numberFormat: 'comma' as const };
-    expect(parseBackup(JSON.stringify(makeBackup({ tanks: [], checks: [], settings: ok }))).ok).to.equal(true);
+    expect(
+      parseBackup(JSON.stringify(makeBackup({ tanks: [], checks: [], settings: ok }))).ok,
+    ).to.equal(true);
     const bad = { ...DEFAULT_SETTINGS, numberFormat: 'roman' };
-    const r = parseBackup(JSON.stringify({ ...makeBackup({ tanks: [], checks: [], settings: null }), settings: bad }));
+    const r = parseBackup(
+      JSON.stringify({ ...makeBackup({ tanks: [], checks: [], settings: null }), settings: bad }),
+    );
     expect(r.ok).to.equal(false);
     // A backup from before the setting existed still imports, with the default.
     const { numberFormat: _omit, ...old } = DEFAULT_SETTINGS;
     void _omit;
-    const o = parseBackup(JSON.stringify({ ...makeBackup({ tanks: [], checks: [], settings: null }), settings: old }));
+    const o = parseBackup(
+      JSON.stringify({ ...makeBackup({ tanks: [], checks: [], settings: null }), settings: old }),
+    );
     expect(o.ok && o.data.settings?.numberFormat).to.equal('auto');
   });
 
@@ -228,7 +238,9 @@ describe('CSV formula guard', () => {
       const row = csv.split('\r\n').slice(1).join('\r\n');
       // The tank name is the second cell; quoted when it holds a line break.
       const q = name.replace(/"/g, '""');
-      expect(row.includes(`,'${q}`) || row.includes(`,"'${q}`), JSON.stringify(name)).to.equal(true);
+      expect(row.includes(`,'${q}`) || row.includes(`,"'${q}`), JSON.stringify(name)).to.equal(
+        true,
+      );
     }
   });
 

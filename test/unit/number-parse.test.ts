@@ -94,7 +94,18 @@ describe('parseNumber, decimal point (en-US, en-IN)', () => {
   });
 
   it('wrong grouping, letters, exponents and mixed separators are refused', () => {
-    for (const t of ['1,00', '12,3456', 'abc', '1e5', '5 kg', '1,000 000', '.', '-', '1,,000', '0x10'])
+    for (const t of [
+      '1,00',
+      '12,3456',
+      'abc',
+      '1e5',
+      '5 kg',
+      '1,000 000',
+      '.',
+      '-',
+      '1,,000',
+      '0x10',
+    ])
       refused(t, EN_US);
   });
 
