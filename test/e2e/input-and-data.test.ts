@@ -77,6 +77,35 @@ describe('numbers', () => {
   });
 });
 
+describe('numbers in other formats', () => {
+  it('with a German browser "1,000" L is refused as ambiguous and "1.000" L is one thousand', async () => {
+    const { page } = await app.open('/', { locale: 'de-DE' });
+    await tankList(page);
+    await page.goto(new URL('#/settings', app.server.url).href);
+    await byTestId(page, 'unit-volume').selectOption('L');
+    await page.goto(new URL('#/tank/new', app.server.url).href);
+    const wc = byTestId(page, 'tank-water-capacity');
+    await typeInto(wc, '1,000');
+    await expect.poll(() => wc.getAttribute('aria-invalid')).toBe('true');
+    await page.getByText('is ambiguous').waitFor();
+    await typeInto(wc, '1.000');
+    await expect.poll(() => wc.getAttribute('aria-invalid')).toBe('false');
+    expect(await horizontalOverflow(page), 'sideways scroll on the form').toBe(0);
+  });
+
+  it('"1,000" °F on the check screen is not read as 1 °F', async () => {
+    const { page } = await app.open('/', { locale: 'en-US' });
+    await tankList(page);
+    await byTestId(page, 'tank-item').first().locator('button').first().click();
+    const t = byTestId(page, 'liquid-temperature');
+    await t.waitFor();
+    await typeInto(t, '1,000');
+    await expect.poll(() => t.getAttribute('aria-invalid')).toBe('true');
+    // 1000 °F is above the engine's 400 K (260 °F): refused with the range, never 1 °F.
+    await page.getByText(/Liquid temperature must be from/).waitFor();
+  });
+});
+
 describe('clearing', () => {
   it('clearing the demo asks once, can be undone, and keeps a demo tank the user edited', async () => {
     const { page, requests } = await app.open('/');
