@@ -4,6 +4,8 @@
 import { expect, fixture, html, oneEvent } from '@open-wc/testing';
 import '../../components/check-form.js';
 import '../../components/settings-form.js';
+import '../../components/backup-panel.js';
+import type { BackupPanel } from '../../components/backup-panel.js';
 import type { CheckForm, ReadingsChange } from '../../components/check-form.js';
 import type { SettingsChange, SettingsForm } from '../../components/settings-form.js';
 import type { NumberField } from '../../components/number-field.js';
@@ -94,5 +96,24 @@ describe('settings-form number format', () => {
       toSI('temperatureDifference', 1.8, 'F'),
       1e-12,
     );
+  });
+});
+
+describe('backup-panel delete all', () => {
+  it('keeps its confirmation and offers a last-chance backup while asking', async () => {
+    const el = await fixture<BackupPanel>(
+      html`<backup-panel tank-count="3" check-count="2"></backup-panel>`,
+    );
+    let cleared = false;
+    el.addEventListener('data-clear', () => (cleared = true));
+    byTestId(el, 'data-clear').click();
+    await el.updateComplete;
+    expect(cleared).to.equal(false);
+    const ev = oneEvent(el, 'backup-export');
+    byTestId(el, 'data-clear-backup').click();
+    await ev;
+    expect(cleared).to.equal(false);
+    byTestId(el, 'data-clear-confirm').click();
+    expect(cleared).to.equal(true);
   });
 });
