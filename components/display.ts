@@ -106,10 +106,11 @@ export class DisplayUnits {
 
   /**
    * Plain `1234.5` text in the user's number format: their decimal mark, and digit groups from
-   * 10 000 up (no format set: unchanged).
+   * 10 000 up (no format set: unchanged; `forInput`: the format numbers are typed in).
    */
-  localize(text: string): string {
-    return this.numberFormat ? formatDigits(text, this.numberFormat) : text;
+  localize(text: string, forInput = false): string {
+    const fmt = forInput ? this.inputFormat() : this.numberFormat;
+    return fmt ? formatDigits(text, fmt) : text;
   }
 
   /** The unit id shown for a quantity. */

@@ -139,6 +139,7 @@ export class NumberField extends LitElement {
         border-bottom-right-radius: 0;
       }
       .unit {
+        flex: none;
         display: flex;
         align-items: center;
         padding: 0 0.6rem;
@@ -248,9 +249,27 @@ export class NumberField extends LitElement {
     return unit ? `${text} ${unit}` : text;
   }
 
+  /**
+   * The plausible range in the user's unit to two significant figures, rounded inward, so any
+   * value asked about is outside the range the question names ("380 to 3,700,000 L").
+   */
+  private _usual(): string {
+    const q = this.quantity;
+    const shown = (si: number | undefined, dir: 'up' | 'down'): string | undefined => {
+      if (si === undefined) return undefined;
+      const x = q === null ? si : this.display.fromSI(q, si);
+      return this.display.localize(roundSignificant(x, 2, dir), true);
+    };
+    const lo = shown(this.plausibleMin, 'up');
+    const hi = shown(this.plausibleMax, 'down');
+    const unit = this._unit() ? ` ${this._unit()}` : '';
+    if (lo !== undefined && hi !== undefined) return `${lo} to ${hi}${unit}`;
+    return lo !== undefined ? `at least ${lo}${unit}` : `at most ${hi ?? ''}${unit}`;
+  }
+
   private _ask(v: number): string {
     const name = this.label || this.name;
-    const usual = this._range(this.plausibleMin, this.plausibleMax).replace(/^from /, '');
+    const usual = this._usual();
     const alt =
       this._alternative !== undefined && this.quantity !== null
         ? this.display.toSI(this.quantity, this._alternative)
@@ -396,6 +415,17 @@ export class NumberField extends LitElement {
       }
     `;
   }
+}
+
+/** `x` to `digits` significant figures, rounded up or down, as plain text ("3700000", "0.25"). */
+export function roundSignificant(x: number, digits: number, dir: 'up' | 'down'): string {
+  if (x === 0 || !Number.isFinite(x)) return '0';
+  const e = Math.floor(Math.log10(Math.abs(x))) - digits + 1;
+  const k = 10 ** e;
+  const scaled = x / k;
+  const eps = 1e-9 * Math.abs(scaled);
+  const r = dir === 'up' ? Math.ceil(scaled - eps) : Math.floor(scaled + eps);
+  return e >= 0 ? String(r * k) : (r * k).toFixed(-e);
 }
 
 function sameNumber(a: number | null, b: number | null): boolean {

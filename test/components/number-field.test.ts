@@ -3,6 +3,7 @@
 import { expect, fixture, html, oneEvent } from '@open-wc/testing';
 import '../../components/number-field.js';
 import type { NumberField, NumberFieldChange } from '../../components/number-field.js';
+import { roundSignificant } from '../../components/number-field.js';
 import { NUMBER_FORMATS } from '../../components/number-parse.js';
 import { DisplayUnits } from '../../components/display.js';
 import { toSI } from '../../thermo/units.js';
@@ -227,5 +228,16 @@ describe('number-field', () => {
       'Design pressure is needed',
     );
     expect(input(el).getAttribute('aria-invalid')).to.equal('true');
+  });
+
+  it('roundSignificant rounds the named range inward to two significant figures', () => {
+    // 100 US gal = 378.541 L; 1 000 000 US gal = 3 785 411.784 L (NIST SP 811 App. B, exact)
+    expect(roundSignificant(378.541, 2, 'up')).to.equal('380');
+    expect(roundSignificant(3_785_411.784, 2, 'down')).to.equal('3700000');
+    expect(roundSignificant(0.25, 2, 'up')).to.equal('0.25');
+    expect(roundSignificant(-58, 2, 'up')).to.equal('-58');
+    // 80 psig = 5.5158 bar; 600 psig = 41.369 bar (1 psi = 0.06894757 bar)
+    expect(roundSignificant(5.5158, 2, 'up')).to.equal('5.6');
+    expect(roundSignificant(41.369, 2, 'down')).to.equal('41');
   });
 });
