@@ -20,7 +20,7 @@ import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
 import { baseStyles } from './styles.js';
 import { DisplayUnits, trimZeros, type Quantity } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
-import { formatDigits, parseNumber } from './number-parse.js';
+import { formatDigits, parseNumber, resolveNumberFormat } from './number-parse.js';
 
 export interface NumberFieldChange {
   /** SI value, or null when the field is empty. Only meaningful when `valid`. */
@@ -415,6 +415,16 @@ export class NumberField extends LitElement {
       }
     `;
   }
+}
+
+/**
+ * Reads typed text in the browser locale's number format (kept for callers of the old helper;
+ * new code uses `parseNumber` with the user's format). Empty text is null; refused text is
+ * undefined.
+ */
+export function parseDecimal(text: string): number | null | undefined {
+  const r = parseNumber(text, resolveNumberFormat('auto'));
+  return r.ok ? r.value : undefined;
 }
 
 /** `x` to `digits` significant figures, rounded up or down, as plain text ("3700000", "0.25"). */
