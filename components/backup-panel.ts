@@ -1,6 +1,7 @@
 /**
  * Your data: export a JSON backup, import one back, export the checks as CSV, clear the demo
- * tanks, clear everything (two taps), and whether the browser keeps the data persistently.
+ * tanks (the shell asks once and offers undo), clear everything (two taps, with a last-chance
+ * backup offer), and whether the browser keeps the data persistently.
  * It only asks: the shell does the work and reports back through `message`.
  *
  * @fires backup-export - `CustomEvent<Record<string, never>>`
@@ -10,7 +11,8 @@
  * @fires data-clear - `CustomEvent<Record<string, never>>` after the second, confirming tap.
  *
  * data-testid: `backup-export`, `backup-import` (the file input), `csv-export`, `demo-clear`,
- * `data-clear`, `data-clear-confirm`, `data-message`, `storage-persisted`.
+ * `data-clear`, `data-clear-confirm`, `data-clear-backup` (a last-chance backup while asking),
+ * `data-clear-cancel`, `data-message`, `storage-persisted`.
  */
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles } from './styles.js';
@@ -165,6 +167,12 @@ export class BackupPanel extends LitElement {
                   }}
                 >
                   Yes, delete all tanks and checks
+                </button>
+                <button
+                  data-testid="data-clear-backup"
+                  @click=${() => this._fire('backup-export', {})}
+                >
+                  Export a backup first
                 </button>
                 <button data-testid="data-clear-cancel" @click=${() => (this._confirming = false)}>
                   Keep my data

@@ -16,6 +16,7 @@ import { DisplayUnits } from './display.js';
 import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
 import { T_RANGE_K } from './check-input.js';
+import { PLAUSIBLE_LIQUID_TEMPERATURE } from './plausible.js';
 import { DEFAULT_SETTINGS, emptyReadings, type ContentsMode, type Readings } from './types.js';
 
 export interface ReadingsChange {
@@ -186,6 +187,9 @@ export class CheckForm extends LitElement {
           .value=${r.liquidTemperature}
           .min=${this.minTemperature}
           .max=${T_RANGE_K.max}
+          .plausibleMin=${PLAUSIBLE_LIQUID_TEMPERATURE.min}
+          .plausibleMax=${PLAUSIBLE_LIQUID_TEMPERATURE.max}
+          plausible-what=${PLAUSIBLE_LIQUID_TEMPERATURE.what}
           @value-change=${this._field('liquidTemperature')}
         ></number-field>
         ${this._engineError('liquidTemperature')}

@@ -19,6 +19,7 @@ import {
   type UnitIds,
 } from '../thermo/units.js';
 import type { Settings, UnitPrefs } from './types.js';
+import { formatDigits, resolveNumberFormat, type NumberFormat } from './number-parse.js';
 
 export type { Quantity, Rounding };
 
@@ -58,19 +59,58 @@ function decimalsFor(q: Quantity, unit: string): number | undefined {
   }
 }
 
+/**
+ * Precision that fits the instrument: a mass or volume of a thousand units or more is shown
+ * whole (no 0.1 lb on a 100,000 lb tank: no scale or gauge on such a tank reads that finely,
+ * common practice), and one of a hundred or more to at most one decimal.
+ */
+export function fitPrecision(q: Quantity, x: number, decimals: number): number {
+  if (q !== 'mass' && q !== 'volume') return decimals;
+  const a = Math.abs(x);
+  if (a >= 1000) return 0;
+  if (a >= 100) return Math.min(decimals, 1);
+  return decimals;
+}
+
 export class DisplayUnits {
   /** Site barometric pressure used across gauge and absolute, Pa absolute. */
   readonly barometricPressure: number;
 
+  /**
+   * The user's number format (decimal mark, digit groups). Without one, `format` and `range`
+   * write plain `1234.5` and inputs read the browser locale's format.
+   */
+  readonly numberFormat: NumberFormat | undefined;
+
   constructor(
     readonly units: UnitPrefs,
     barometricPressure = 101_325,
+    numberFormat?: NumberFormat,
   ) {
     this.barometricPressure = barometricPressure;
+    this.numberFormat = numberFormat;
   }
 
   static fromSettings(settings: Settings): DisplayUnits {
-    return new DisplayUnits(settings.units, siteBarometricPressure(settings));
+    return new DisplayUnits(
+      settings.units,
+      siteBarometricPressure(settings),
+      resolveNumberFormat(settings.numberFormat),
+    );
+  }
+
+  /** The format numbers are typed in: the user's, else the browser locale's. */
+  inputFormat(): NumberFormat {
+    return this.numberFormat ?? resolveNumberFormat('auto');
+  }
+
+  /**
+   * Plain `1234.5` text in the user's number format: their decimal mark, and digit groups from
+   * 10 000 up (no format set: unchanged; `forInput`: the format numbers are typed in).
+   */
+  localize(text: string, forInput = false): string {
+    const fmt = forInput ? this.inputFormat() : this.numberFormat;
+    return fmt ? formatDigits(text, fmt) : text;
   }
 
   /** The unit id shown for a quantity. */
@@ -124,11 +164,24 @@ export class DisplayUnits {
     decimals?: number,
   ): string {
     const unit = this.unit(q);
-    return formatQuantity(q, valueSI, unit, {
+    const text = formatQuantity(q, valueSI, unit, {
       barometricPressure: this.barometricPressure,
       round,
-      decimals: decimals ?? decimalsFor(q, unit),
+      decimals: decimals ?? this._decimals(q, valueSI),
     });
+    if (!this.numberFormat) return text;
+    const m = /^(-?\d+(?:\.\d+)?)(.*)$/.exec(text);
+    return m ? this.localize(m[1]!) + m[2]! : text;
+  }
+
+  /** Shown digits: per quantity and unit, and no finer than the figure's size warrants. */
+  private _decimals(q: Quantity, valueSI: number | null | undefined): number | undefined {
+    const base = decimalsFor(q, this.unit(q));
+    if (valueSI === null || valueSI === undefined || !Number.isFinite(valueSI)) return base;
+    const x = this.fromSI(q, valueSI);
+    if (base !== undefined) return fitPrecision(q, x, base);
+    // Volumes otherwise take formatQuantity's size-based digits; from 100 up, ours.
+    return q === 'volume' && Math.abs(x) >= 100 ? fitPrecision(q, x, 1) : undefined;
   }
 
   /**
@@ -144,7 +197,7 @@ export class DisplayUnits {
     options: { minExclusive?: boolean; unitText?: string } = {},
   ): string {
     const f = (v: number, round: Rounding) =>
-      q === null ? String(v) : trimZeros(this.number(q, v, round));
+      this.localize(q === null ? String(v) : trimZeros(this.number(q, v, round)));
     const unit = q === null ? (options.unitText ?? '') : this.label(q);
     const u = unit ? ` ${unit}` : '';
     const low =
@@ -167,8 +220,7 @@ export class DisplayUnits {
   ): string {
     if (valueSI === null || valueSI === undefined || !Number.isFinite(valueSI)) return '';
     const x = this.fromSI(q, valueSI);
-    const unit = this.unit(q);
-    return formatNumber(x, decimals ?? decimalsFor(q, unit) ?? 3, round);
+    return formatNumber(x, decimals ?? this._decimals(q, valueSI) ?? 3, round);
   }
 }
 

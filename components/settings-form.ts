@@ -8,7 +8,7 @@
  * data-testid: `unit-pressure`, `unit-temperature`, `unit-volume`, `unit-mass`, `unit-length`,
  * `baro-mode-standard`, `baro-mode-pressure`, `baro-mode-elevation`, `baro-pressure`,
  * `elevation`, `gauge-accuracy`, `gauge-full-scale`, `thermometer-tolerance`,
- * `default-sun-allowance`, `theme-outdoor`.
+ * `default-sun-allowance`, `theme-outdoor`, `number-format`.
  */
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles } from './styles.js';
@@ -17,6 +17,12 @@ import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
 import { unitLabel } from '../thermo/units.js';
 import { DEFAULT_SETTINGS, type BarometerMode, type Settings, type UnitPrefs } from './types.js';
+import {
+  NUMBER_FORMAT_LABELS,
+  formatDigits,
+  resolveNumberFormat,
+  type NumberFormatId,
+} from './number-parse.js';
 
 export interface SettingsChange {
   settings: Settings;
@@ -166,6 +172,27 @@ export class SettingsForm extends LitElement {
                 </select>
               </div>`,
           )}
+        </div>
+        <div class="field">
+          <label for="u-number-format">Number format</label>
+          <select
+            id="u-number-format"
+            data-testid="number-format"
+            aria-describedby="number-format-note"
+            @change=${(e: Event) => this._emit({ ...s, numberFormat: (e.target as HTMLSelectElement).value as NumberFormatId })}
+          >
+            ${(Object.keys(NUMBER_FORMAT_LABELS) as NumberFormatId[]).map(
+              (id) =>
+                html`<option value=${id} ?selected=${(s.numberFormat ?? 'auto') === id}>
+                  ${NUMBER_FORMAT_LABELS[id]}
+                </option>`,
+            )}
+          </select>
+          <p class="note" id="number-format-note">
+            Type numbers as ${formatDigits('12345.6', resolveNumberFormat(s.numberFormat))}: the
+            decimal mark is never taken for a thousands separator, and an entry that could be read
+            both ways is refused.
+          </p>
         </div>
         <p class="note">
           Pressures are gauge (${d.label('gaugePressure')}: above the site’s barometric pressure)

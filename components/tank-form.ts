@@ -18,6 +18,9 @@ import type { NumberFieldChange } from './number-field.js';
 import { productChoices, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
 import { FILL_METHOD_WORDS } from './fill-words.js';
+import { TEXT_LIMITS } from './limits.js';
+import { PLAUSIBLE_DESIGN_PRESSURE, PLAUSIBLE_WATER_CAPACITY, plausibleFor } from './plausible.js';
+import type { NumberField } from './number-field.js';
 import type {
   ContainerClass,
   FillMethod,
@@ -52,6 +55,7 @@ export class TankForm extends LitElement {
     _draft: { state: true },
     _invalid: { state: true },
     _message: { state: true },
+    _nameMissing: { state: true },
   };
 
   /** The tank to edit (a new one has a fresh id and default nameplate). */
@@ -65,6 +69,7 @@ export class TankForm extends LitElement {
   declare _draft: TankRecord;
   declare _invalid: Set<string>;
   declare _message: string;
+  declare _nameMissing: boolean;
 
   constructor() {
     super();
@@ -75,6 +80,7 @@ export class TankForm extends LitElement {
     this._draft = this.tank;
     this._invalid = new Set();
     this._message = '';
+    this._nameMissing = false;
   }
 
   static override styles = [
@@ -194,16 +200,15 @@ export class TankForm extends LitElement {
     if (d.name.trim() === '') missing.push('Name');
     if (!Number.isFinite(d.nameplate.waterCapacity)) missing.push('Water capacity');
     if (!Number.isFinite(d.nameplate.designPressure)) missing.push('Design pressure (MAWP)');
-    if (this._invalid.size > 0 || missing.length > 0) {
+    // Every field shows its own message (and aria-invalid), not only the summary below.
+    const fields = [...this.renderRoot.querySelectorAll<NumberField>('number-field')];
+    const fieldsOk = fields.map((f) => f.reportValidity()).every(Boolean);
+    this._nameMissing = d.name.trim() === '';
+    if (this._invalid.size > 0 || missing.length > 0 || !fieldsOk) {
       this._message = missing.length
         ? `Needed before saving: ${missing.join(', ')}.`
         : 'Some figures are not valid: see the messages next to the fields.';
-      void this.updateComplete.then(() => {
-        const bad = this.renderRoot.querySelector<HTMLElement>(
-          '[aria-invalid="true"], number-field input[aria-invalid="true"]',
-        );
-        (bad ?? this.renderRoot.querySelector<HTMLElement>('#name'))?.focus();
-      });
+      void this._focusFirstInvalid();
       return;
     }
     this._message = '';
@@ -215,6 +220,21 @@ export class TankForm extends LitElement {
         composed: true,
       }),
     );
+  }
+
+  /** Focus goes to the first field in the form's order that has a message. */
+  private async _focusFirstInvalid(): Promise<void> {
+    await this.updateComplete;
+    const fields = [...this.renderRoot.querySelectorAll<NumberField>('number-field')];
+    await Promise.all(fields.map((f) => f.updateComplete));
+    const first = [
+      ...this.renderRoot.querySelectorAll<HTMLElement>('input[aria-invalid="true"], number-field'),
+    ].find(
+      (el) =>
+        el.tagName !== 'NUMBER-FIELD' ||
+        el.shadowRoot?.querySelector('input[aria-invalid="true"]') !== null,
+    );
+    first?.focus();
   }
 
   private _cancel(): void {
@@ -240,6 +260,8 @@ export class TankForm extends LitElement {
     const disp = this.display;
     const shape = np.shape;
     const kind = this._shapeKind();
+    const wc = plausibleFor(PLAUSIBLE_WATER_CAPACITY, np.containerClass);
+    const dp = plausibleFor(PLAUSIBLE_DESIGN_PRESSURE, np.containerClass);
     return html`
       <form @submit=${this._save} novalidate>
         <h2>${this.heading}</h2>
@@ -250,6 +272,7 @@ export class TankForm extends LitElement {
             data-testid="tank-site"
             list="sites"
             autocomplete="off"
+            maxlength=${TEXT_LIMITS.site}
             .value=${d.site}
             @input=${(e: Event) => (this._draft = { ...this._draft, site: (e.target as HTMLInputElement).value })}
           />
@@ -264,10 +287,13 @@ export class TankForm extends LitElement {
             data-testid="tank-name"
             required
             autocomplete="off"
+            maxlength=${TEXT_LIMITS.name}
             .value=${d.name}
-            aria-invalid=${this._message && d.name.trim() === '' ? 'true' : 'false'}
+            aria-invalid=${this._nameMissing && d.name.trim() === '' ? 'true' : 'false'}
+            aria-describedby=${this._nameMissing && d.name.trim() === '' ? 'name-err' : nothing}
             @input=${(e: Event) => (this._draft = { ...this._draft, name: (e.target as HTMLInputElement).value })}
           />
+          ${this._nameMissing && d.name.trim() === '' ? html`<p class="error" id="name-err">Name is needed: the name you know this tank by (at most ${TEXT_LIMITS.name} characters).</p>` : nothing}
         </div>
         <div class="field">
           <label for="product">Product</label>
@@ -293,6 +319,9 @@ export class TankForm extends LitElement {
             .value=${np.waterCapacity}
             .min=${TANK_RANGES.waterCapacity.min}
             .max=${TANK_RANGES.waterCapacity.max}
+            .plausibleMin=${wc.min}
+            .plausibleMax=${wc.max}
+            plausible-what=${wc.what}
             @value-change=${this._number('waterCapacity', (v) => this._setNameplate({ waterCapacity: v ?? Number.NaN }))}
           ></number-field>
           <number-field
@@ -305,6 +334,9 @@ export class TankForm extends LitElement {
             .value=${np.designPressure}
             .min=${TANK_RANGES.pressure.min}
             .max=${TANK_RANGES.pressure.max}
+            .plausibleMin=${dp.min}
+            .plausibleMax=${dp.max}
+            plausible-what=${dp.what}
             @value-change=${this._number('designPressure', (v) => this._setNameplate({ designPressure: v ?? Number.NaN }))}
           ></number-field>
           <number-field
@@ -317,6 +349,9 @@ export class TankForm extends LitElement {
             .value=${np.reliefSetPressure ?? null}
             .min=${TANK_RANGES.pressure.min}
             .max=${TANK_RANGES.pressure.max}
+            .plausibleMin=${dp.min}
+            .plausibleMax=${dp.max}
+            plausible-what=${dp.what}
             @value-change=${this._number('reliefSetPressure', (v) => this._setNameplate({ reliefSetPressure: v ?? undefined }))}
           ></number-field>
           <div class="field">
@@ -452,6 +487,7 @@ export class TankForm extends LitElement {
           <textarea
             id="notes"
             rows="2"
+            maxlength=${TEXT_LIMITS.notes}
             .value=${d.notes}
             @input=${(e: Event) => (this._draft = { ...this._draft, notes: (e.target as HTMLTextAreaElement).value })}
           ></textarea>

@@ -7,6 +7,7 @@
  * These types are shared by the components (which show them) and by pwa/storage.ts (which
  * keeps them), so they sit here, below the app shell in the import order pwa → components → thermo.
  */
+import type { NumberFormatId } from './number-parse.js';
 import type { CautionLevel, TankInput, TankPhase } from '../thermo/check/types.js';
 
 /** A tank in the register. */
@@ -23,7 +24,7 @@ export interface TankRecord {
   nameplate: TankInput;
   /** What the tank holds: a product choice of the app (see components/products.ts). */
   productId: string;
-  /** Part of the invented demo site (one tap clears every such record). */
+  /** Part of the invented demo site; false once the user edits it or saves a check on it. */
   demo: boolean;
   /** ISO 8601 timestamps. */
   createdAt: string;
@@ -145,6 +146,8 @@ export interface Settings {
   sunAllowance: number;
   /** `outdoor`: the high-contrast theme for sunlight. */
   theme: 'standard' | 'outdoor';
+  /** How numbers are typed and shown: decimal mark and digit groups (`auto`: the device's language). */
+  numberFormat: NumberFormatId;
 }
 
 export const DEFAULT_SETTINGS: Settings = {
@@ -155,6 +158,7 @@ export const DEFAULT_SETTINGS: Settings = {
   thermometerTolerance: 1,
   sunAllowance: 5,
   theme: 'outdoor',
+  numberFormat: 'auto',
 };
 
 /** Empty readings for a new check. */

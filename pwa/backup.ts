@@ -16,6 +16,8 @@ import {
   type Settings,
   type TankRecord,
 } from '../components/types.js';
+import { TEXT_LIMITS } from '../components/limits.js';
+import type { NumberFormatId } from '../components/number-parse.js';
 
 export const BACKUP_FORMAT = 'tankside-backup';
 export const BACKUP_VERSION = 1;
@@ -49,10 +51,18 @@ function fail(where: string, what: string): never {
   throw new Invalid(`${where}: ${what}`);
 }
 
-function str(o: Obj, key: string, where: string, nonEmpty = false): string {
-  const v = o[key];
+function str(
+  o: Obj,
+  key: string,
+  where: string,
+  nonEmpty = false,
+  maxLength: number = TEXT_LIMITS.message,
+): string {
+  const v = Object.hasOwn(o, key) ? o[key] : undefined;
   if (typeof v !== 'string') fail(where, `“${key}” must be text`);
   if (nonEmpty && v.trim() === '') fail(where, `“${key}” must not be empty`);
+  if (v.length > maxLength)
+    fail(where, `“${key}” is ${v.length} characters long; at most ${maxLength} are kept`);
   return v;
 }
 
@@ -98,12 +108,12 @@ function date(o: Obj, key: string, where: string): void {
 function validateTank(t: unknown, i: number): TankRecord {
   const where = `Tank ${i + 1}`;
   if (!isObj(t)) fail(where, 'is not an object');
-  const name = str(t, 'name', where, true);
+  const name = str(t, 'name', where, true, TEXT_LIMITS.name);
   const w = `${where} (“${name}”)`;
-  str(t, 'id', w, true);
-  str(t, 'site', w);
-  str(t, 'notes', w);
-  str(t, 'productId', w, true);
+  str(t, 'id', w, true, TEXT_LIMITS.id);
+  str(t, 'site', w, false, TEXT_LIMITS.site);
+  str(t, 'notes', w, false, TEXT_LIMITS.notes);
+  str(t, 'productId', w, true, TEXT_LIMITS.product);
   bool(t, 'demo', w);
   date(t, 'createdAt', w);
   date(t, 'updatedAt', w);
@@ -150,6 +160,14 @@ function validateReadings(r: unknown, where: string): Readings {
   return r as unknown as Readings;
 }
 
+const NUMBER_FORMAT_IDS: readonly NumberFormatId[] = [
+  'auto',
+  'point',
+  'point-space',
+  'comma',
+  'comma-space',
+];
+
 const LEVELS = ['danger', 'warning', 'caution', 'notice'] as const;
 
 function validateSummary(s: unknown, where: string): CheckSummary {
@@ -188,11 +206,11 @@ function validateSummary(s: unknown, where: string): CheckSummary {
 function validateCheck(c: unknown, i: number, tankIds: Set<string>): CheckRecord {
   const where = `Check ${i + 1}`;
   if (!isObj(c)) fail(where, 'is not an object');
-  str(c, 'id', where, true);
-  const tankId = str(c, 'tankId', where, true);
+  str(c, 'id', where, true, TEXT_LIMITS.id);
+  const tankId = str(c, 'tankId', where, true, TEXT_LIMITS.id);
   if (!tankIds.has(tankId)) fail(where, 'belongs to a tank that is not in the file');
   date(c, 'at', where);
-  str(c, 'productLabel', where);
+  str(c, 'productLabel', where, false, TEXT_LIMITS.product);
   bool(c, 'demo', where);
   validateReadings(c.readings, where);
   validateSummary(c.summary, where);
@@ -219,6 +237,7 @@ function validateSettings(s: unknown): Settings {
   num(s, 'thermometerTolerance', where, 0, 10);
   num(s, 'sunAllowance', where, 0, 40);
   oneOf(s, 'theme', where, ['standard', 'outdoor'] as const);
+  oneOf(s, 'numberFormat', where, NUMBER_FORMAT_IDS, true);
   return { ...DEFAULT_SETTINGS, ...(s as unknown as Settings) };
 }
 

@@ -2,13 +2,27 @@
  * Saved checks as CSV (RFC 4180: comma-separated, CRLF, quotes doubled), one row per check, in
  * the user's units with the unit in each column heading. Figures are the ones saved with the
  * check, rounded toward safety as on screen. Text cells that a spreadsheet would read as a
- * formula are prefixed with an apostrophe.
+ * formula (also behind leading spaces, line breaks or a full-width sign) are prefixed with an
+ * apostrophe.
  */
 import { DisplayUnits, formatPercent } from '../components/display.js';
 import type { CheckRecord, TankRecord } from '../components/types.js';
 
+/**
+ * A text cell a spreadsheet could run as a formula: one whose first visible character is = + - @
+ * (also their full-width forms ＝ ＋ － ＠ and the minus sign −, which some spreadsheets
+ * normalise), even after leading spaces, tabs or line breaks; or one that starts with a tab or a
+ * line break. (OWASP, "CSV Injection", names = + - @ tab and carriage return.)
+ */
+export function looksLikeFormula(v: string): boolean {
+  return (
+    /^[\s\u00a0\u2000-\u200b\u202f\u3000\ufeff]*[=+\-@\uff1d\uff0b\uff0d\uff20\u2212]/.test(v) ||
+    /^[\t\r\n]/.test(v)
+  );
+}
+
 function cell(v: string): string {
-  const safe = /^[=+\-@\t\r]/.test(v) ? `'${v}` : v;
+  const safe = looksLikeFormula(v) ? `'${v}` : v;
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 

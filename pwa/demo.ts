@@ -1,7 +1,8 @@
 /**
  * The demo site shown on first start: six plainly invented tanks at an invented site, each
  * with invented readings, so a new user sees real results at once. Every name says it is a
- * demo; every record is marked `demo: true` and one tap clears them all.
+ * demo; every record is marked `demo: true`. Clearing them asks once and can be undone; a demo tank
+ * the user edits or saves a check on becomes theirs and is never cleared (pwa/demo-own.ts).
  *
  * These figures are a scenario of our own. They are not taken from any real tank and are not
  * used as check values in any test.

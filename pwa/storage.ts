@@ -18,6 +18,7 @@ import {
   type StoreNames,
 } from 'idb';
 import type { CheckRecord, DraftRecord, Settings, TankRecord } from '../components/types.js';
+import { isClearableDemo } from './demo-own.js';
 
 export const DB_NAME = 'tankside';
 export const DB_VERSION = 1;
@@ -235,21 +236,47 @@ export class Store {
     await tx.done;
   }
 
-  /** Removes the demo tanks with their checks and drafts, and the demo checks of any tank. */
-  async clearDemo(): Promise<number> {
+  /**
+   * Removes the demo tanks the user has not made their own (see `isClearableDemo`) with their
+   * checks and drafts, in one transaction. Returns what was removed, for undo.
+   */
+  async clearDemo(): Promise<RemovedRecords> {
     const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
     const tanks = await tx.objectStore('tanks').getAll();
-    const demoIds = new Set(tanks.filter((t) => t.demo).map((t) => t.id));
-    for (const id of demoIds) {
-      await tx.objectStore('tanks').delete(id);
-      await tx.objectStore('drafts').delete(id);
-    }
     const checks = await tx.objectStore('checks').getAll();
-    for (const c of checks)
-      if (c.demo || demoIds.has(c.tankId)) await tx.objectStore('checks').delete(c.id);
+    const byTank = new Map<string, CheckRecord[]>();
+    for (const c of checks) byTank.set(c.tankId, [...(byTank.get(c.tankId) ?? []), c]);
+    const removed: RemovedRecords = { tanks: [], checks: [], drafts: [] };
+    for (const t of tanks) {
+      const own = byTank.get(t.id) ?? [];
+      if (!isClearableDemo(t, own)) continue;
+      const draft = await tx.objectStore('drafts').get(t.id);
+      if (draft) removed.drafts.push(draft);
+      removed.tanks.push(t);
+      removed.checks.push(...own);
+      await tx.objectStore('tanks').delete(t.id);
+      await tx.objectStore('drafts').delete(t.id);
+      for (const c of own) await tx.objectStore('checks').delete(c.id);
+    }
     await tx.done;
-    return demoIds.size;
+    return removed;
   }
+
+  /** Puts back what `clearDemo` removed (undo), in one transaction. */
+  async restoreRecords(removed: RemovedRecords): Promise<void> {
+    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+    for (const t of removed.tanks) await tx.objectStore('tanks').put(t);
+    for (const c of removed.checks) await tx.objectStore('checks').put(c);
+    for (const d of removed.drafts) await tx.objectStore('drafts').put(d);
+    await tx.done;
+  }
+}
+
+/** Records taken out together, kept so they can be put back. */
+export interface RemovedRecords {
+  tanks: TankRecord[];
+  checks: CheckRecord[];
+  drafts: DraftRecord[];
 }
 
 /**

@@ -38,6 +38,9 @@ import { parseRoute, href, type Route } from './router.js';
 import { buildDemo } from './demo.js';
 import { BACKUP_MAX_BYTES, makeBackup, parseBackup } from './backup.js';
 import { checksToCsv } from './csv.js';
+import { claimByCheck, savedByUser } from './demo-own.js';
+import { lastCheckByTank } from './lookups.js';
+import '../components/confirm-bar.js';
 
 /** How long an undo offer stays, ms. */
 const UNDO_MS = 12_000;
@@ -51,6 +54,13 @@ interface Undo {
   restore: () => Promise<void>;
 }
 
+/** A question asked before something is removed. */
+interface Confirm {
+  text: string;
+  yes: string;
+  run: () => Promise<void>;
+}
+
 export class TanksideApp extends LitElement {
   static override properties = {
     dbName: { type: String, attribute: 'db-name' },
@@ -62,6 +72,7 @@ export class TanksideApp extends LitElement {
     _checks: { state: true },
     _draft: { state: true },
     _undo: { state: true },
+    _confirm: { state: true },
     _update: { state: true },
     _offlineNote: { state: true },
     _info: { state: true },
@@ -82,6 +93,7 @@ export class TanksideApp extends LitElement {
   /** Readings to open the current check screen with (loaded per tank). */
   declare _draft: { tankId: string; readings: Readings } | null;
   declare _undo: Undo | null;
+  declare _confirm: Confirm | null;
   declare _update: (() => void) | null;
   declare _offlineNote: boolean;
   declare _info: string;
@@ -111,6 +123,7 @@ export class TanksideApp extends LitElement {
     this._checks = [];
     this._draft = null;
     this._undo = null;
+    this._confirm = null;
     this._update = null;
     this._offlineNote = false;
     this._info = '';
@@ -315,7 +328,7 @@ export class TanksideApp extends LitElement {
   private async _saveTank(e: CustomEvent<TankSaveDetail>): Promise<void> {
     if (!this._store) return;
     const now = new Date().toISOString();
-    const tank = { ...e.detail.tank, updatedAt: now };
+    const tank = savedByUser(e.detail.tank, now);
     await this._store.putTank(tank);
     await this._reload();
     this._navigate({ name: 'check', id: tank.id });
@@ -354,11 +367,33 @@ export class TanksideApp extends LitElement {
     if (this._route.name !== 'tanks') this._navigate({ name: 'tanks' });
   }
 
-  private async _clearDemo(): Promise<void> {
-    if (!this._store) return;
-    const n = await this._store.clearDemo();
-    await this._reload();
-    this._info = n > 0 ? `Removed the ${n} invented demo tanks.` : 'No demo tanks left.';
+  /** Asks once; then clears the demo tanks the user has not made their own, with an undo. */
+  private _clearDemo(): void {
+    const store = this._store;
+    if (!store) return;
+    this._confirm = {
+      text: 'Remove the invented demo tanks? Demo tanks you edited or saved a check on are yours and stay.',
+      yes: 'Remove the demo tanks',
+      run: async () => {
+        const removed = await store.clearDemo();
+        await this._reload();
+        const n = removed.tanks.length;
+        if (n === 0) {
+          this._info = 'No demo tanks to remove: the ones left are yours.';
+          return;
+        }
+        this._offerUndo(`Removed ${n} demo tank${n === 1 ? '' : 's'}.`, async () => {
+          await store.restoreRecords(removed);
+          await this._reload();
+        });
+      },
+    };
+  }
+
+  private async _confirmed(yes: boolean): Promise<void> {
+    const c = this._confirm;
+    this._confirm = null;
+    if (yes && c) await c.run();
   }
 
   // ── checks and drafts ──────────────────────────────────────────────────────────────────
@@ -383,7 +418,10 @@ export class TanksideApp extends LitElement {
 
   private async _saveCheck(e: CustomEvent<CheckSaveDetail>): Promise<void> {
     if (!this._store) return;
-    await this._store.putCheck(e.detail.check);
+    const now = new Date().toISOString();
+    const claim = claimByCheck(this._tank(e.detail.check.tankId), e.detail.check, now);
+    if (claim.tank) await this._store.putTank(claim.tank);
+    await this._store.putCheck(claim.check);
     this._flushDraft();
     await this._reload();
   }
@@ -521,8 +559,7 @@ export class TanksideApp extends LitElement {
     const sites = [...new Set(this._tanks.map((t) => t.site).filter(Boolean))].sort();
     switch (r.name) {
       case 'tanks': {
-        const last: Record<string, CheckRecord> = {};
-        for (const c of this._checks) if (!last[c.tankId]) last[c.tankId] = c; // checks come newest first
+        const last = lastCheckByTank(this._checks);
         return html`<tank-list
           .tanks=${this._tanks}
           .lastChecks=${last}
@@ -644,6 +681,17 @@ export class TanksideApp extends LitElement {
           @notice-action=${this._noticeAction}
           @notice-dismiss=${this._noticeDismiss}
         >
+          ${
+            this._confirm
+              ? html`<confirm-bar
+                  .text=${this._confirm.text}
+                  .yes=${this._confirm.yes}
+                  no="Keep them"
+                  @confirm-yes=${() => this._confirmed(true)}
+                  @confirm-no=${() => this._confirmed(false)}
+                ></confirm-bar>`
+              : nothing
+          }
           ${this._undo ? html`<app-notice kind="undo" .text=${this._undo.text} action="Undo"></app-notice>` : nothing}
           ${
             this._update

@@ -65,6 +65,10 @@ describe('tankside-app', () => {
     expect(items.every((i) => i.dataset.demo === 'true')).to.equal(true);
     // Clear the demo; a restart does not bring it back.
     byTestId(app, 'demo-clear').click();
+    // It asks once before removing anything.
+    const yes = (await waitFor(app, 'confirm-yes')) as HTMLButtonElement;
+    expect(deepAll(app, '[data-testid="tank-item"]')).to.have.length(6);
+    yes.click();
     await waitUntil(() => deepAll(app, '[data-testid="tank-item"]').length === 0, 'demo cleared');
     app.parentElement!.remove();
     const again = await start(db);

@@ -121,13 +121,14 @@ describe('check-screen engine errors in the user’s units', () => {
 
   it('check-screen words a nameplate figure the check refuses in psig', async () => {
     // 1 psig is below the check's 10 000 Pa (1.45 psig); its 10 000…100 000 000 Pa gauge range is
-    // 1.45…14 503.8 psig, shown in whole psig rounded inward: 2 and 14503.
+    // 1.45…14 503.8 psig, shown in whole psig rounded inward and grouped from 10 000 up in the
+    // default (en-US) number format: 2 and 14,503.
     const el = await screen(
       tank('propane', { designPressure: toSI('gaugePressure', 1, 'psig') }),
       readings(),
     );
     const text = byTestId(el, 'results-error').textContent ?? '';
-    expect(text).to.contain('Design pressure (MAWP) must be from 2 to 14503 psig');
+    expect(text).to.contain('Design pressure (MAWP) must be from 2 to 14,503 psig');
     expect(text).not.to.contain('Pa gauge');
   });
 

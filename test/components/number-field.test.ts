@@ -3,7 +3,8 @@
 import { expect, fixture, html, oneEvent } from '@open-wc/testing';
 import '../../components/number-field.js';
 import type { NumberField, NumberFieldChange } from '../../components/number-field.js';
-import { parseDecimal } from '../../components/number-field.js';
+import { roundSignificant } from '../../components/number-field.js';
+import { NUMBER_FORMATS } from '../../components/number-parse.js';
 import { DisplayUnits } from '../../components/display.js';
 import { toSI } from '../../thermo/units.js';
 
@@ -14,13 +15,12 @@ const fahrenheit = new DisplayUnits({
   mass: 'lb',
   length: 'in',
 });
-const celsius = new DisplayUnits({
-  pressure: 'barg',
-  temperature: 'C',
-  volume: 'L',
-  mass: 'kg',
-  length: 'cm',
-});
+const fahrenheitPoint = new DisplayUnits(fahrenheit.units, 101_325, NUMBER_FORMATS.point);
+const celsius = new DisplayUnits(
+  { pressure: 'barg', temperature: 'C', volume: 'L', mass: 'kg', length: 'cm' },
+  101_325,
+  NUMBER_FORMATS.comma,
+);
 
 function input(el: NumberField): HTMLInputElement {
   return el.shadowRoot!.querySelector('input')!;
@@ -97,7 +97,7 @@ describe('number-field', () => {
     const el = await fixture<NumberField>(
       html`<number-field label="Scale mass" quantity="mass" .display=${fahrenheit}></number-field>`,
     );
-    const d = await type(el, '12..3');
+    const d = await type(el, 'abc');
     expect(d.valid).to.equal(false);
     expect(el.shadowRoot!.querySelector('.error')!.textContent).to.contain('not a number');
   });
@@ -131,18 +131,113 @@ describe('number-field', () => {
     expect(input(el).value).to.equal('100');
     el.display = celsius;
     await el.updateComplete;
-    expect(input(el).value).to.equal('6.89');
+    expect(input(el).value).to.equal('6,89');
     expect(el.shadowRoot!.querySelector('.unit')!.textContent).to.equal('bar g');
   });
 
-  it('parseDecimal reads comma or point decimals and refuses the rest', () => {
-    expect(parseDecimal(' 1,5 ')).to.equal(1.5);
-    expect(parseDecimal('-3')).to.equal(-3);
-    expect(parseDecimal('−3')).to.equal(-3);
-    expect(parseDecimal('.5')).to.equal(0.5);
-    expect(parseDecimal('')).to.equal(null);
-    expect(parseDecimal('abc')).to.equal(undefined);
-    expect(parseDecimal('1.2.3')).to.equal(undefined);
-    expect(parseDecimal('Infinity')).to.equal(undefined);
+  it('number-field reads "1,000" US gal as one thousand with a decimal point (the 1 US gal misreading)', async () => {
+    const el = await fixture<NumberField>(
+      html`<number-field
+        label="Water capacity"
+        quantity="volume"
+        .display=${fahrenheitPoint}
+      ></number-field>`,
+    );
+    const d = await type(el, '1,000');
+    expect(d.valid).to.equal(true);
+    // 1000 US gal = 1000 · 231 in³ · (0.0254 m/in)³ = 3.785411784 m³ (NIST SP 811 App. B, exact)
+    expect(d.value).to.be.closeTo(3.785411784, 1e-9);
+  });
+
+  it('number-field refuses "1,000" °C with a decimal comma, names the field and says what to type', async () => {
+    const el = await fixture<NumberField>(
+      html`<number-field
+        label="Liquid temperature"
+        quantity="temperature"
+        .display=${celsius}
+        .value=${toSI('temperature', 20, 'C')}
+      ></number-field>`,
+    );
+    const d = await type(el, '1,000');
+    expect(d.valid).to.equal(false);
+    const err = el.shadowRoot!.querySelector('.error')!.textContent!;
+    expect(err).to.contain('Liquid temperature');
+    expect(err).to.contain('ambiguous');
+    expect(err).to.contain('Type 1000');
+    expect(el.value).to.be.closeTo(293.15, 1e-9); // the last valid value stays
+    expect(input(el).getAttribute('aria-invalid')).to.equal('true');
+  });
+
+  it('number-field asks about an implausible value, offers the other reading and takes it only when confirmed', async () => {
+    const el = await fixture<NumberField>(
+      html`<number-field
+        label="Water capacity"
+        quantity="volume"
+        testid="wc"
+        plausible-what="for a storage tank"
+        .display=${fahrenheitPoint}
+        .min=${1e-4}
+        .max=${1e5}
+        .plausibleMin=${toSI('volume', 100, 'usgal')}
+        .plausibleMax=${toSI('volume', 1_000_000, 'usgal')}
+      ></number-field>`,
+    );
+    const d = await type(el, '1.000');
+    expect(d.valid).to.equal(false);
+    expect(d.unconfirmed).to.equal(true);
+    const q = el.shadowRoot!.querySelector('.question')!.textContent!;
+    expect(q).to.contain('1 US gal is unusual for a storage tank');
+    expect(q).to.contain('Did you mean 1000 US gal?');
+    expect(el.value).to.equal(null);
+    const ev = oneEvent(el, 'value-change');
+    el.shadowRoot!.querySelector<HTMLButtonElement>('[data-testid="wc-confirm"]')!.click();
+    const c = ((await ev) as CustomEvent<NumberFieldChange>).detail;
+    expect(c.valid).to.equal(true);
+    expect(c.value).to.be.closeTo(toSI('volume', 1, 'usgal'), 1e-12);
+    await el.updateComplete;
+    expect(el.shadowRoot!.querySelector('.question')).to.equal(null);
+  });
+
+  it('number-field shows large figures with digit groups and reads them back', async () => {
+    const el = await fixture<NumberField>(
+      html`<number-field
+        label="Water capacity"
+        quantity="volume"
+        .display=${fahrenheitPoint}
+        .value=${toSI('volume', 30_000, 'usgal')}
+      ></number-field>`,
+    );
+    expect(input(el).value).to.equal('30,000');
+    const d = await type(el, input(el).value);
+    expect(d.valid).to.equal(true);
+    expect(d.value).to.be.closeTo(toSI('volume', 30_000, 'usgal'), 1e-9);
+  });
+
+  it('reportValidity marks an empty required field with its own message', async () => {
+    const el = await fixture<NumberField>(
+      html`<number-field
+        label="Design pressure"
+        required
+        quantity="gaugePressure"
+        .display=${fahrenheit}
+      ></number-field>`,
+    );
+    expect(el.reportValidity()).to.equal(false);
+    await el.updateComplete;
+    expect(el.shadowRoot!.querySelector('.error')!.textContent).to.contain(
+      'Design pressure is needed',
+    );
+    expect(input(el).getAttribute('aria-invalid')).to.equal('true');
+  });
+
+  it('roundSignificant rounds the named range inward to two significant figures', () => {
+    // 100 US gal = 378.541 L; 1 000 000 US gal = 3 785 411.784 L (NIST SP 811 App. B, exact)
+    expect(roundSignificant(378.541, 2, 'up')).to.equal('380');
+    expect(roundSignificant(3_785_411.784, 2, 'down')).to.equal('3700000');
+    expect(roundSignificant(0.25, 2, 'up')).to.equal('0.25');
+    expect(roundSignificant(-58, 2, 'up')).to.equal('-58');
+    // 80 psig = 5.5158 bar; 600 psig = 41.369 bar (1 psi = 0.06894757 bar)
+    expect(roundSignificant(5.5158, 2, 'up')).to.equal('5.6');
+    expect(roundSignificant(41.369, 2, 'down')).to.equal('41');
   });
 });

@@ -3,7 +3,9 @@
 // the browser with the other app tests). Kind: identity / behaviour; records are placeholders.
 import { expect } from '@open-wc/testing';
 import { BACKUP_FORMAT, makeBackup, parseBackup } from '../../pwa/backup.js';
-import { checksToCsv } from '../../pwa/csv.js';
+import { checksToCsv, looksLikeFormula } from '../../pwa/csv.js';
+import { lastCheckByTank } from '../../pwa/lookups.js';
+import { TEXT_LIMITS } from '../../components/limits.js';
 import { href, parseRoute } from '../../pwa/router.js';
 import { buildDemo, DEMO_SITE } from '../../pwa/demo.js';
 import { DisplayUnits } from '../../components/display.js';
@@ -67,6 +69,56 @@ describe('parseBackup', () => {
     const r = parseBackup(JSON.stringify(makeBackup(data)));
     expect(r.ok).to.equal(true);
     if (r.ok) expect(r.data).to.deep.equal(data);
+  });
+
+  it('parseBackup refuses a 200 000-character site name and says the limit', () => {
+    const t = { ...tank('a'), site: 'x'.repeat(200_000) };
+    const r = parseBackup(JSON.stringify(makeBackup({ tanks: [t], checks: [], settings: null })));
+    expect(r.ok).to.equal(false);
+    if (!r.ok) {
+      expect(r.reason).to.contain('“site” is 200000 characters long');
+      expect(r.reason).to.contain(`at most ${TEXT_LIMITS.site}`);
+      expect(r.reason).to.contain('Nothing was changed');
+    }
+    const long = { ...tank('b'), name: 'n'.repeat(TEXT_LIMITS.name + 1) };
+    expect(
+      parseBackup(JSON.stringify(makeBackup({ tanks: [long], checks: [], settings: null }))).ok,
+    ).to.equal(false);
+    const notes = { ...tank('c'), notes: 'n'.repeat(TEXT_LIMITS.notes) };
+    expect(
+      parseBackup(JSON.stringify(makeBackup({ tanks: [notes], checks: [], settings: null }))).ok,
+    ).to.equal(true);
+  });
+
+  it('parseBackup checks the number format setting', () => {
+    const ok = { ...DEFAULT_SETTINGS, numberFormat: 'comma' as const };
+    expect(
+      parseBackup(JSON.stringify(makeBackup({ tanks: [], checks: [], settings: ok }))).ok,
+    ).to.equal(true);
+    const bad = { ...DEFAULT_SETTINGS, numberFormat: 'roman' };
+    const r = parseBackup(
+      JSON.stringify({ ...makeBackup({ tanks: [], checks: [], settings: null }), settings: bad }),
+    );
+    expect(r.ok).to.equal(false);
+    // A backup from before the setting existed still imports, with the default.
+    const { numberFormat: _omit, ...old } = DEFAULT_SETTINGS;
+    void _omit;
+    const o = parseBackup(
+      JSON.stringify({ ...makeBackup({ tanks: [], checks: [], settings: null }), settings: old }),
+    );
+    expect(o.ok && o.data.settings?.numberFormat).to.equal('auto');
+  });
+
+  it('ids named like object built-ins are kept apart from them in look-ups', () => {
+    const ids = ['__proto__', 'constructor', 'toString', 'hasOwnProperty'];
+    const tanks = ids.map((id) => tank(id));
+    const checks = ids.map((id) => check(`c-${id}`, id));
+    const r = parseBackup(JSON.stringify(makeBackup({ tanks, checks, settings: null })));
+    expect(r.ok).to.equal(true);
+    const last = lastCheckByTank(checks);
+    for (const id of ids) expect(last[id]?.id, id).to.equal(`c-${id}`);
+    expect(last['valueOf']).to.equal(undefined);
+    expect(lastCheckByTank([])['constructor']).to.equal(undefined);
   });
 
   it('parseBackup refuses text that is not JSON', () => {
@@ -156,6 +208,45 @@ describe('checksToCsv', () => {
     expect(lines[1]).to.contain(',20.0,'); // 293.15 K = 20.0 °C
     expect(lines[1]).to.contain(',-20,'); // headroom to relief, kPa, rounded down
     expect(csv).not.to.contain('NaN');
+  });
+});
+
+describe('CSV formula guard', () => {
+  // Cells a spreadsheet would run: OWASP "CSV Injection" (= + - @, tab, carriage return), and the
+  // same behind leading spaces, a line break or in full width, which spreadsheets also accept.
+  const risky = [
+    '=cmd()',
+    '+1+1',
+    '-2+3',
+    '@SUM(A1)',
+    '   =HYPERLINK("x")',
+    '\n=1+1',
+    '\r\n@x',
+    '\t=1',
+    '\u3000=1',
+    '＝1+1',
+    '＋1',
+    '－1',
+    '＠x',
+    '\u00a0+1',
+  ];
+  it('every formula-like cell is made inert with a leading apostrophe', () => {
+    const d = new DisplayUnits(DEFAULT_SETTINGS.units);
+    for (const name of risky) {
+      expect(looksLikeFormula(name), JSON.stringify(name)).to.equal(true);
+      const csv = checksToCsv([tank('a', name)], [check('c', 'a')], d);
+      const row = csv.split('\r\n').slice(1).join('\r\n');
+      // The tank name is the second cell; quoted when it holds a line break.
+      const q = name.replace(/"/g, '""');
+      expect(row.includes(`,'${q}`) || row.includes(`,"'${q}`), JSON.stringify(name)).to.equal(
+        true,
+      );
+    }
+  });
+
+  it('plain text and names with signs inside are left alone', () => {
+    for (const name of ['Tank 1', 'North yard = east', 'A-1', 'x@y', '1000 gal'])
+      expect(looksLikeFormula(name), name).to.equal(false);
   });
 });
 

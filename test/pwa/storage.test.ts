@@ -5,7 +5,7 @@ import { expect } from '@open-wc/testing';
 import { deleteDB } from 'idb';
 import { DB_VERSION, Store, UPGRADES, openAtVersion } from '../../pwa/storage.js';
 import type { CheckRecord, TankRecord } from '../../components/types.js';
-import { DEFAULT_SETTINGS } from '../../components/types.js';
+import { DEFAULT_SETTINGS, emptyReadings } from '../../components/types.js';
 
 const names: string[] = [];
 function dbName(): string {
@@ -168,9 +168,39 @@ describe('storage', () => {
     await store.putTank(tank('mine'));
     await store.putCheck(check('c1', 'demo1', '2024-01-01T00:00:00.000Z', true));
     await store.putCheck(check('c2', 'mine', '2024-01-01T00:00:00.000Z'));
-    expect(await store.clearDemo()).to.equal(1);
+    const removed = await store.clearDemo();
+    expect(removed.tanks.map((t) => t.id)).to.deep.equal(['demo1']);
     expect((await store.listTanks()).map((t) => t.id)).to.deep.equal(['mine']);
     expect((await store.listChecks()).map((c) => c.id)).to.deep.equal(['c2']);
+    store.close();
+  });
+
+  it('Store.clearDemo keeps a demo tank the user edited or saved a check on, and undo restores the rest', async () => {
+    const store = await Store.open(dbName());
+    const edited = { ...tank('demo-edited', 'D', true), updatedAt: '2024-02-01T00:00:00.000Z' };
+    await store.putTank(tank('demo-plain', 'D', true));
+    await store.putTank(edited);
+    await store.putTank(tank('demo-checked', 'D', true));
+    await store.putCheck(check('mine', 'demo-checked', '2024-03-01T00:00:00.000Z', false));
+    await store.putDraft({
+      tankId: 'demo-plain',
+      readings: { ...emptyReadings(5), gaugePercent: 40 },
+      updatedAt: '2024-01-01T00:00:00.000Z',
+    });
+    const before = await store.exportAll();
+    const removed = await store.clearDemo();
+    expect(removed.tanks.map((t) => t.id)).to.deep.equal(['demo-plain']);
+    expect((await store.listTanks()).map((t) => t.id).sort()).to.deep.equal([
+      'demo-checked',
+      'demo-edited',
+    ]);
+    expect((await store.listChecks()).map((c) => c.id)).to.deep.equal(['mine']);
+    expect(await store.getDraft('demo-plain')).to.equal(undefined);
+    await store.restoreRecords(removed);
+    const after = await store.exportAll();
+    const byId = (a: { id: string }, b: { id: string }) => (a.id < b.id ? -1 : 1);
+    expect(after.tanks.sort(byId)).to.deep.equal(before.tanks.sort(byId));
+    expect((await store.getDraft('demo-plain'))?.readings.gaugePercent).to.equal(40);
     store.close();
   });
 
