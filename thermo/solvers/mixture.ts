@@ -1,6 +1,6 @@
 /**
  * Mixtures with the van der Waals one-fluid rule:
- *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij),  b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
+ *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij(T)),  k_ij(T) = k_ij + k'_ij·(T/T_REF − 1),  b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
  * Fugacity coefficients of the generic cubic:
  *   ln φ_i = (b_i/b)(Z − 1) − ln(Z − B) − (A/B)·(2·Σ_j x_j·a_ij/a − b_i/b)·L − c_i·p/(R·T),
  * with L = ln((Z + δ1·B)/(Z + δ2·B))/(δ1 − δ2). The translation term is the same in every
@@ -9,6 +9,7 @@
 import { R_J_molK } from '../constants.js';
 import { ConvergenceError } from '../errors.js';
 import { compressibilityRoots, dPdv, logTerm } from '../eos/cubic.js';
+import { T_REF_KIJ } from '../data/kij.js';
 import { correctedVolume, correctionAtT } from '../eos/volumeCorrection.js';
 import type { ResolvedProduct } from '../product.js';
 import type { RootChoice } from './pure.js';
@@ -47,9 +48,12 @@ export function mixtureAtT(product: ResolvedProduct, T: number): MixtureAtT {
     M[i] = m.molarMass;
   });
   const aij = new Float64Array(n * n);
+  const t = T / T_REF_KIJ - 1;
   for (let i = 0; i < n; i++)
-    for (let j = 0; j < n; j++)
-      aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - (product.kij[i]?.[j] ?? 0));
+    for (let j = 0; j < n; j++) {
+      const k = (product.kij[i]?.[j] ?? 0) + (product.kijSlope?.[i]?.[j] ?? 0) * t;
+      aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - k);
+    }
   return { T, n, aij, b, Tc, vcCub, M, product };
 }
 
