@@ -4,7 +4,12 @@
  */
 import { REFRIGERANT_BLENDS, refrigerantBlendById } from './data/blends.js';
 import { fluidById, FLUIDS } from './data/fluids.js';
-import { interactionParameter, interactionSlope } from './data/kij.js';
+import {
+  interactionCurve,
+  interactionParameter,
+  interactionSlope,
+  volumeExcess,
+} from './data/kij.js';
 import { componentModel, MODEL_IDS, type ComponentModel, type ModelId } from './eos/model.js';
 import { InputError } from './errors.js';
 
@@ -46,6 +51,16 @@ export interface ResolvedProduct {
    * (data/kij.ts). Absent means constant k_ij.
    */
   readonly kijSlope?: readonly (readonly number[])[];
+  /** Curvature of k_ij(T): adds kijCurve·(T/T_REF − 1)². Absent means none. */
+  readonly kijCurve?: readonly (readonly number[])[];
+  /**
+   * Binary volume-correction parameters (symmetric, zero diagonal; see mixtureModelVolume in
+   * solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. Absent means plain Kay's rule.
+   */
+  readonly volumeMixing?: {
+    readonly xi: readonly (readonly number[])[];
+    readonly vE: readonly (readonly number[])[];
+  };
   /** Highest temperature of a blend offered by id (its dew-curve end, less a margin), K. */
   readonly Tmax?: number;
   /** Lowest temperature accepted, K: the highest triple point of the components. */
@@ -220,6 +235,16 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
   const kijSlope = fluids.map((fi) =>
     fluids.map((fj) => (fi === fj ? 0 : interactionSlope(fi.id, fj.id, model))),
   );
+  const kijCurve = fluids.map((fi) =>
+    fluids.map((fj) => (fi === fj ? 0 : interactionCurve(fi.id, fj.id, model))),
+  );
+  const excess = fluids.map((fi) =>
+    fluids.map((fj) => (fi === fj ? { xi: 0, vE: 0 } : volumeExcess(fi.id, fj.id, model))),
+  );
+  const hasExcess = excess.some((row) => row.some((e) => e.xi !== 0 || e.vE !== 0));
+  const volumeMixing = hasExcess
+    ? { xi: excess.map((r) => r.map((e) => e.xi)), vE: excess.map((r) => r.map((e) => e.vE)) }
+    : undefined;
   return {
     label: kept
       .map((c, i) => `${fluids[i]!.name} ${(c.moleFraction * 100).toFixed(1)} %`)
@@ -228,6 +253,8 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
     z,
     kij,
     kijSlope,
+    kijCurve,
+    volumeMixing,
     Tmin: Math.max(...fluids.map((f) => f.Ttriple)),
     molarMass: fluids.reduce((s, f, i) => s + f.molarMass * z[i]!, 0),
     model: components.every((c) => c.model === 'tuned') ? 'tuned' : (components[0]?.model ?? model),

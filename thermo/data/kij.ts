@@ -1,7 +1,7 @@
 /**
  * Binary interaction parameters k_ij for the van der Waals one-fluid rule,
- * a_ij = √(a_i·a_j)·(1 − k_ij), with k_ij(T) = k_ij + k'_ij·(T/T_REF_KIJ − 1) where a slope
- * is fitted (the HFC/HFO pairs of the refrigerant blends, data/kij-fitted.ts, written by
+ * a_ij = √(a_i·a_j)·(1 − k_ij), with k_ij(T) = k_ij + k'_ij·t + k''_ij·t², t = T/T_REF_KIJ − 1,
+ * where a temperature dependence is fitted (the HFC/HFO pairs of the refrigerant blends, data/kij-fitted.ts, written by
  * scripts/fit-blends.ts). Pairs not listed use 0, which the cubic literature commonly
  * takes for chemically similar pairs (light alkanes, alkenes, HFC refrigerants of one family).
  *
@@ -25,6 +25,11 @@ interface PairEntry {
   readonly tuned: number;
   /** Temperature slope for the tuned model: k_ij(T) = tuned + tunedSlope·(T/T_REF_KIJ − 1). */
   readonly tunedSlope?: number;
+  /** Curvature for the tuned model: adds tunedCurve·(T/T_REF_KIJ − 1)². */
+  readonly tunedCurve?: number;
+  /** Volume-correction excesses for the tuned model (solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. */
+  readonly xi?: number;
+  readonly vE?: number;
   /** k_ij for textbook PR and SRK. */
   readonly textbook: number;
   readonly source: string;
@@ -44,6 +49,9 @@ export const PAIRS: readonly PairEntry[] = [
     b: p.b,
     tuned: p.k,
     tunedSlope: p.slope,
+    tunedCurve: p.curve,
+    xi: p.xi,
+    vE: p.vE,
     textbook: 0,
     source: p.source,
   })),
@@ -63,4 +71,16 @@ export function interactionParameter(a: string, b: string, model: string): numbe
 export function interactionSlope(a: string, b: string, model: string): number {
   const e = pair(a, b);
   return e && model === 'tuned' ? (e.tunedSlope ?? 0) : 0;
+}
+
+/** Curvature of k_ij(T) (0 where not fitted). */
+export function interactionCurve(a: string, b: string, model: string): number {
+  const e = pair(a, b);
+  return e && model === 'tuned' ? (e.tunedCurve ?? 0) : 0;
+}
+
+/** Volume-correction excesses ξ_ij (K) and v^E_ij (m³/mol) of a pair; zero where not fitted. */
+export function volumeExcess(a: string, b: string, model: string): { xi: number; vE: number } {
+  const e = pair(a, b);
+  return e && model === 'tuned' ? { xi: e.xi ?? 0, vE: e.vE ?? 0 } : { xi: 0, vE: 0 };
 }
