@@ -12,6 +12,7 @@ import { T_60F_K } from '../constants.js';
 import { MODEL_ALLOWANCE, peakPressureAllowance } from '../rules/allowance.js';
 import { fillingRule, isLpGas, referenceRules } from '../rules/gases.js';
 import { maxLiquidVolumePercent } from '../rules/lpgas.js';
+import { recoveryLimit } from '../rules/recovery.js';
 import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
 import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../tank/geometry.js';
 import { buildCautions } from './cautions.js';
@@ -169,6 +170,8 @@ function check(input: TankCheckInput): TankCheckResult {
       'physics of a closed tank (a liquid-full tank’s pressure climbs steeply with temperature); the same principle as 49 CFR 173.304(b) — common practice for storage',
     referenceTemperature: Math.max(c.Tpeak, c.T),
   });
+  const recovery = recoveryLimit(input.tank.recovery, c.T);
+  if (recovery) refs.push({ ...recovery, kind: 'rule' });
   const skippedRefs: number[] = [];
   for (const r of refs) {
     const s = model.sat(r.referenceTemperature);
@@ -176,7 +179,8 @@ function check(input: TankCheckInput): TankCheckResult {
       skippedRefs.push(r.referenceTemperature);
       continue;
     }
-    const mass = floorTo(c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
+    const share = r.id === 'recovery-cylinder' ? (recovery?.fraction ?? 1) : 1;
+    const mass = floorTo(share * c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
     limits.push({
       id: r.id,
       kind: r.kind,
