@@ -28,6 +28,18 @@ export interface Glide {
  * temperature the core refuses.
  */
 export function blendGlide(product: Product, T: number): Glide | null {
+  // The glide is worded to 0.1 K: one solution per product and 0.1 K step serves a live form.
+  const key = `${JSON.stringify(product)}|${T.toFixed(1)}`;
+  if (glideCache.has(key)) return glideCache.get(key)!;
+  const g = computeGlide(product, Math.round(T * 10) / 10);
+  if (glideCache.size >= 64) glideCache.delete(glideCache.keys().next().value!);
+  glideCache.set(key, g);
+  return g;
+}
+
+const glideCache = new Map<string, Glide | null>();
+
+function computeGlide(product: Product, T: number): Glide | null {
   const d = describeProduct(product);
   if (d.components.length < 2) return null;
   try {
