@@ -60,6 +60,8 @@ export interface ResolvedProduct {
   readonly volumeMixing?: {
     readonly xi: readonly (readonly number[])[];
     readonly vE: readonly (readonly number[])[];
+    /** Temperature slope of v^E_ij (per unit of T/T_REF − 1), m³/mol; absent means none. */
+    readonly vESlope?: readonly (readonly number[])[];
   };
   /** Highest temperature of a blend offered by id (its dew-curve end, less a margin), K. */
   readonly Tmax?: number;
@@ -239,11 +241,19 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
     fluids.map((fj) => (fi === fj ? 0 : interactionCurve(fi.id, fj.id, model))),
   );
   const excess = fluids.map((fi) =>
-    fluids.map((fj) => (fi === fj ? { xi: 0, vE: 0 } : volumeExcess(fi.id, fj.id, model))),
+    fluids.map((fj) =>
+      fi === fj ? { xi: 0, vE: 0, vESlope: 0 } : volumeExcess(fi.id, fj.id, model),
+    ),
   );
-  const hasExcess = excess.some((row) => row.some((e) => e.xi !== 0 || e.vE !== 0));
+  const hasExcess = excess.some((row) =>
+    row.some((e) => e.xi !== 0 || e.vE !== 0 || e.vESlope !== 0),
+  );
   const volumeMixing = hasExcess
-    ? { xi: excess.map((r) => r.map((e) => e.xi)), vE: excess.map((r) => r.map((e) => e.vE)) }
+    ? {
+        xi: excess.map((r) => r.map((e) => e.xi)),
+        vE: excess.map((r) => r.map((e) => e.vE)),
+        vESlope: excess.map((r) => r.map((e) => e.vESlope)),
+      }
     : undefined;
   return {
     label: kept

@@ -32,14 +32,14 @@ const KNOWN_MISS: Record<string, { what: string; rtol: number; why: string }[]> 
   r404a: [
     {
       what: 'bubble liquid density',
-      rtol: 0.0085,
+      rtol: 0.007,
       why: 'known miss (target 0.5 %) in the last rows, 323–333 K, within 12 K of the blend critical point',
     },
   ],
   r507a: [
     {
       what: 'bubble liquid density',
-      rtol: 0.009,
+      rtol: 0.0075,
       why: 'known miss (target 0.5 %) in the last rows, 323–333 K, within 11 K of the blend critical point',
     },
   ],

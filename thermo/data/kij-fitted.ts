@@ -16,6 +16,8 @@ export interface FittedPair {
   readonly xi: number;
   /** Excess volume of the translation, m³/mol (solvers/mixture.ts). */
   readonly vE: number;
+  /** Slope of the excess volume: v^E(T) = vE + vESlope·(T/T_REF − 1), m³/mol. */
+  readonly vESlope: number;
   readonly source: string;
 }
 
@@ -26,10 +28,11 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
     k: 0.00354059,
     slope: 0.0343087,
     curve: -0.0523646,
-    xi: -3.00756,
-    vE: 3.25942e-7,
+    xi: 3.82422,
+    vE: 3.79095e-7,
+    vESlope: 0.00000172121,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE to the densities of R-410A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-410A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r125',
@@ -37,10 +40,11 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
     k: -0.0103983,
     slope: 0.00122296,
     curve: -0.0685277,
-    xi: 21.1939,
-    vE: -9.07035e-7,
+    xi: 21.0736,
+    vE: -7.85935e-7,
+    vESlope: -0.00000454437,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE to the densities of R-507A, R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-507A, R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r125',
@@ -48,10 +52,11 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
     k: 0.0223107,
     slope: 0.00645712,
     curve: -0.188214,
-    xi: -4.98609,
-    vE: 1.91056e-7,
+    xi: -2.80815,
+    vE: 2.03077e-7,
+    vESlope: 5.74702e-7,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE to the densities of R-404A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-404A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r134a',
@@ -59,10 +64,11 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
     k: -0.0126464,
     slope: -0.00778934,
     curve: 0.0127257,
-    xi: 9.53054,
-    vE: -3.68284e-7,
+    xi: 3.42677,
+    vE: -3.35588e-7,
+    vESlope: -7.28993e-7,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE to the densities of R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r32',
@@ -70,10 +76,11 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
     k: -0.0078521,
     slope: 0.00159438,
     curve: 0.0271421,
-    xi: -22.5854,
-    vE: 8.33771e-7,
+    xi: -10.2673,
+    vE: 8.49526e-7,
+    vESlope: 0.00000213716,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE to the densities of R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r32',
@@ -81,9 +88,10 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
     k: 0.0384347,
     slope: 0.0146779,
     curve: -0.0665803,
-    xi: -51.6451,
-    vE: 0.00000225329,
+    xi: -39.8365,
+    vE: 0.00000262201,
+    vESlope: 0.00000628925,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE to the densities of R-454B (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-454B (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
 ];

@@ -30,6 +30,7 @@ interface PairEntry {
   /** Volume-correction excesses for the tuned model (solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. */
   readonly xi?: number;
   readonly vE?: number;
+  readonly vESlope?: number;
   /** k_ij for textbook PR and SRK. */
   readonly textbook: number;
   readonly source: string;
@@ -52,6 +53,7 @@ export const PAIRS: readonly PairEntry[] = [
     tunedCurve: p.curve,
     xi: p.xi,
     vE: p.vE,
+    vESlope: p.vESlope,
     textbook: 0,
     source: p.source,
   })),
@@ -80,7 +82,13 @@ export function interactionCurve(a: string, b: string, model: string): number {
 }
 
 /** Volume-correction excesses ξ_ij (K) and v^E_ij (m³/mol) of a pair; zero where not fitted. */
-export function volumeExcess(a: string, b: string, model: string): { xi: number; vE: number } {
+export function volumeExcess(
+  a: string,
+  b: string,
+  model: string,
+): { xi: number; vE: number; vESlope: number } {
   const e = pair(a, b);
-  return e && model === 'tuned' ? { xi: e.xi ?? 0, vE: e.vE ?? 0 } : { xi: 0, vE: 0 };
+  return e && model === 'tuned'
+    ? { xi: e.xi ?? 0, vE: e.vE ?? 0, vESlope: e.vESlope ?? 0 }
+    : { xi: 0, vE: 0, vESlope: 0 };
 }

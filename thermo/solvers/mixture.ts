@@ -153,7 +153,8 @@ export function phaseAt(
  * Where a product carries fitted binary volume parameters (the refrigerant blends,
  * data/kij-fitted.ts), the pseudo-critical temperature gets a quadratic excess,
  * Tpc = Σ x_i·Tc_i + Σ_i Σ_j x_i·x_j·ξ_ij (the form of the reducing temperature of the
- * multi-fluid mixture models), and the translation an excess volume Σ_i Σ_j x_i·x_j·v^E_ij;
+ * multi-fluid mixture models), and the translation an excess volume Σ_i Σ_j x_i·x_j·v^E_ij(T),
+ * v^E_ij(T) = v^E_ij + v^E′_ij·(T/T_REF − 1);
  * both act after equilibrium, like the rest of the correction.
  */
 export function mixtureModelVolume(
@@ -167,12 +168,13 @@ export function mixtureModelVolume(
   for (let i = 0; i < mx.n; i++) Tpc += x[i]! * mx.Tc[i]!;
   let c = 0;
   const vm = mx.product.volumeMixing;
+  const tRef = mx.T / T_REF_KIJ - 1;
   if (vm)
     for (let i = 0; i < mx.n; i++)
       for (let j = 0; j < mx.n; j++) {
         const xx = x[i]! * x[j]!;
         Tpc += xx * (vm.xi[i]?.[j] ?? 0);
-        c += xx * (vm.vE[i]?.[j] ?? 0);
+        c += xx * ((vm.vE[i]?.[j] ?? 0) + tRef * (vm.vESlope?.[i]?.[j] ?? 0));
       }
   let delta = 0;
   let eps = 0;
