@@ -55,7 +55,8 @@ export interface ResolvedProduct {
   readonly kijCurve?: readonly (readonly number[])[];
   /**
    * Binary volume-correction parameters (symmetric, zero diagonal; see mixtureModelVolume in
-   * solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. Absent means plain Kay's rule.
+   * solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. Absent means plain Kay's rule and no
+   * excess volume.
    */
   readonly volumeMixing?: {
     readonly xi: readonly (readonly number[])[];

@@ -1,7 +1,7 @@
 /**
  * Mixtures with the van der Waals one-fluid rule:
- *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij(T)),  k_ij(T) = k_ij + k'_ij·(T/T_REF − 1),
- *   b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
+ *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij(T)),  k_ij(T) = k_ij + k'_ij·t + k''_ij·t²,
+ *   t = T/T_REF − 1 (data/kij.ts),  b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
  * Fugacity coefficients of the generic cubic:
  *   ln φ_i = (b_i/b)(Z − 1) − ln(Z − B) − (A/B)·(2·Σ_j x_j·a_ij/a − b_i/b)·L − c_i·p/(R·T),
  * with L = ln((Z + δ1·B)/(Z + δ2·B))/(δ1 − δ2). The translation term is the same in every
