@@ -33,10 +33,7 @@ export class InputError extends Error {
   readonly limits?: InputLimits;
 
   constructor(field: string, validRange: string, got?: unknown, limits?: InputLimits) {
-    const shown =
-      got === undefined
-        ? ''
-        : ` (got ${typeof got === 'number' ? formatNumber(got) : JSON.stringify(got)})`;
+    const shown = got === undefined ? '' : ` (got ${describeValue(got)})`;
     super(`${field} must be ${validRange}${shown}`);
     this.name = 'InputError';
     this.field = field;
@@ -61,6 +58,18 @@ export class ConvergenceError extends Error {
     this.solver = solver;
     this.iterations = iterations;
     this.residual = residual;
+  }
+}
+
+/** A refused value in words; never throws (a BigInt, a cycle or a symbol is shown, not serialised). */
+function describeValue(x: unknown): string {
+  if (typeof x === 'number') return formatNumber(x);
+  if (typeof x === 'bigint') return `the integer ${x.toString()}n (not a number)`;
+  if (typeof x === 'symbol' || typeof x === 'function') return `a ${typeof x}`;
+  try {
+    return JSON.stringify(x) ?? String(x);
+  } catch {
+    return 'an object that cannot be shown';
   }
 }
 

@@ -9,7 +9,8 @@
  */
 import { ConvergenceError, InputError } from '../errors.js';
 import { T_60F_K } from '../constants.js';
-import { MODEL_ALLOWANCE, peakPressureAllowance } from '../rules/allowance.js';
+import { MODEL_ALLOWANCE } from '../rules/allowance.js';
+import { fullKind, pressureAllowance } from './full.js';
 import { fillingRule, isLpGas, referenceRules } from '../rules/gases.js';
 import { maxLiquidVolumePercent } from '../rules/lpgas.js';
 import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
@@ -171,12 +172,9 @@ function check(input: TankCheckInput): TankCheckResult {
   });
   const skippedRefs: number[] = [];
   for (const r of refs) {
-    const s = model.sat(r.referenceTemperature);
-    if (!s) {
-      skippedRefs.push(r.referenceTemperature);
-      continue;
-    }
-    const mass = floorTo(c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
+    if (!model.sat(r.referenceTemperature)) skippedRefs.push(r.referenceTemperature);
+    const rhoNotFull = notFullDensity(model, r.referenceTemperature);
+    const mass = floorTo(c.V * rhoNotFull * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
     limits.push({
       id: r.id,
       kind: r.kind,
@@ -215,7 +213,7 @@ function check(input: TankCheckInput): TankCheckResult {
       },
     );
   }
-  const peak = buildPeak(peakState, c);
+  const peak = buildPeak(peakState, c, rho, b.rhoc);
 
   // --- Liquid-full and relief temperatures. ---
   const hints = [c.T, c.Tpeak];
@@ -224,9 +222,8 @@ function check(input: TankCheckInput): TankCheckResult {
     model,
     rho,
     c.reliefSetPressure + c.baro,
-    1 + MODEL_ALLOWANCE.vapourPressure,
-    hints,
-    Tlo,
+    (s) => pressureAllowance(s, rho, b.rhoc),
+    c.T,
     liquidFullTemperature,
   );
 
@@ -247,6 +244,7 @@ function check(input: TankCheckInput): TankCheckResult {
 
   const result: TankCheckResult = {
     phase: now.phase,
+    full: fullKind(now, rho, b.rhoc),
     pressure: ceilTo(now.pAbs - c.baro, P_STEP),
     pressureAbsolute: now.pAbs,
     barometricPressure: c.baro,
@@ -277,8 +275,30 @@ function check(input: TankCheckInput): TankCheckResult {
     skippedRefs,
     shapeVolume,
     T60: T_60F_K,
+    peakAllowance: pressureAllowance(peakState, rho, b.rhoc),
+    peakRaised: peakState.pAbs * (1 + pressureAllowance(peakState, rho, b.rhoc)) - c.baro,
   });
   return result;
+}
+
+/**
+ * The highest overall density that is not full at T, kg/m³: the saturated liquid density on
+ * the saturation curve; above its end, the lower of the critical density (denser contents are
+ * full of dense fluid) and the liquid density where the curve ends, so the limit never rises
+ * as the reference temperature does (DECISIONS.md, "Full of dense fluid").
+ */
+function notFullDensity(model: ProductModel, T: number): number {
+  const s = model.sat(T);
+  if (s) return s.rhoL;
+  const b = model.basics;
+  const Ttop = model.satTop();
+  const top = model.sat(Ttop);
+  if (!top || top.rhoL <= b.rhoc) return top ? top.rhoL : b.rhoc;
+  // A pure fluid between the end of the curve (Tc − 0.5 K) and Tc: ρL − ρc ∝ (Tc − T)^(1/3)
+  // (the critical scaling search.ts also uses), from the last saturation state down to ρc.
+  if (b.pure && T < b.Tc)
+    return b.rhoc + (top.rhoL - b.rhoc) * ((b.Tc - T) / (b.Tc - Ttop)) ** (1 / 3);
+  return b.rhoc;
 }
 
 function netMassCap(model: ProductModel, c: CleanInput): number {
@@ -332,11 +352,12 @@ function buildFillLimit(
   };
 }
 
-function buildPeak(s: State, c: CleanInput): PeakResult {
-  const raised = s.pAbs * (1 + peakPressureAllowance(s.phase)) - c.baro;
+function buildPeak(s: State, c: CleanInput, rho: number, rhoc: number): PeakResult {
+  const raised = s.pAbs * (1 + pressureAllowance(s, rho, rhoc)) - c.baro;
   return {
     temperature: c.Tpeak,
     phase: s.phase,
+    full: fullKind(s, rho, rhoc),
     p: ceilTo(s.pAbs - c.baro, P_STEP),
     pAbsolute: s.pAbs,
     liquidFraction: s.lf,

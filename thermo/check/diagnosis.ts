@@ -14,6 +14,8 @@ import { MODEL_ALLOWANCE } from '../rules/allowance.js';
 import { ProductModel, type State } from './model.js';
 import { saturationTemperature } from './search.js';
 import type { DiagnosisResult } from './types.js';
+import { CAUSE_TEXT } from './caution-text.js';
+import type { CauseCode } from './codes.js';
 import type { CleanInput } from './validate.js';
 
 let propane: ProductModel | undefined;
@@ -47,41 +49,26 @@ export function diagnose(
   const verdict: DiagnosisResult['verdict'] =
     difference > tolerance ? 'high' : difference < -tolerance ? 'low' : 'fits';
   const readingAbs = reading + c.baro;
-  const causes: string[] = [];
+  const causeCodes: CauseCode[] = [];
   if (verdict === 'high') {
-    if (now.phase === 'liquid-full')
-      causes.push(
-        'The tank is liquid-full: with no vapour space the pressure climbs steeply with temperature.',
-      );
-    causes.push(
-      'Air or another non-condensable gas in the vapour space (for example a new or opened tank that was not purged).',
+    if (now.phase === 'liquid-full') causeCodes.push('liquid-full-high');
+    causeCodes.push(
+      'non-condensable',
+      'lighter-components',
+      'different-product',
+      'liquid-warmer',
+      'gauge-error-high',
     );
-    causes.push(
-      'Lighter components than the product entered (for example ethane or propane in butane).',
-    );
-    causes.push('A different product from the one entered.');
-    causes.push(
-      'The liquid is warmer than the thermometer shows (sun on the shell, or a thermometer reading the air).',
-    );
-    causes.push('Gauge error: a zero offset, a damaged gauge or one of the wrong range.');
   } else if (verdict === 'low') {
-    if (now.phase === 'liquid-full')
-      causes.push(
-        'The tank is liquid-full: its pressure then depends steeply on the exact fill and temperature, so the expected figure is uncertain.',
-      );
-    if (now.phase === 'vapour-only' || now.lf < 0.02)
-      causes.push(
-        'There may be no liquid left: a tank holding vapour only shows less than the vapour pressure.',
-      );
-    causes.push(
-      'The liquid is colder than the thermometer shows (a recent withdrawal or venting chills the liquid).',
+    if (now.phase === 'liquid-full') causeCodes.push('liquid-full-uncertain');
+    if (now.phase === 'vapour-only' || now.lf < 0.02) causeCodes.push('no-liquid-left');
+    causeCodes.push(
+      'liquid-colder',
+      'heavier-components',
+      'different-product',
+      'vapour-draw',
+      'gauge-error-low',
     );
-    causes.push('Heavier components than the product entered (for example butane in propane).');
-    causes.push('A different product from the one entered.');
-    causes.push(
-      'Vapour being drawn off faster than the liquid boils, pulling the pressure down for a while.',
-    );
-    causes.push('Gauge error: a zero offset, a blocked or damaged gauge.');
   }
   const temperatureForReading =
     readingAbs > 0 ? saturationTemperature(model, readingAbs, [c.T, c.Tpeak], Tlo) : null;
@@ -91,7 +78,8 @@ export function diagnose(
     difference,
     tolerance,
     verdict,
-    causes,
+    causes: causeCodes.map((code) => CAUSE_TEXT[code]),
+    causeCodes,
     propaneFraction: lpGas && readingAbs > 0 ? propaneSplit(c.T, readingAbs) : null,
     temperatureForReading,
   };
