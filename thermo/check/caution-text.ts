@@ -67,6 +67,8 @@ const TEXT: Record<CautionCode, (f: Fmt, p: MessageParams) => string> = {
     `At the forecast peak ${f('peak')}, above the critical temperature ${f('criticalTemperature')}, the tank would be full of dense fluid${p['from'] ? ` (no vapour space from about ${f('from')})` : ''}: the contents are denser than the critical density, so the pressure climbs as steeply as in a liquid-full tank and would be limited only by the relief valve.`,
   'liquid-full-near-peak': (f) =>
     `The tank would become liquid-full at ${f('full')}, less than ${f('margin')} above the forecast peak ${f('peak')}.`,
+  'liquid-full-beyond-model': (f) =>
+    `No liquid-full temperature is given: for this blend it lies above ${f('top')}, beyond the range the check searches.`,
   'design-at-peak': (f) =>
     `At the forecast peak ${f('peak')} the expected pressure ${f('pressure')} (with the model allowance of ${f('allowance')}) is above the design pressure ${f('design')} by ${f('over')}.`,
   'relief-at-peak': (f, p) =>

@@ -170,6 +170,8 @@ function peakCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       peak: peakT,
       margin: num(5, 'temperatureDifference'),
     });
+  if (Tf === null && !k.model.basics.pure && r.contents.overallDensity > k.model.basics.rhoc)
+    add('notice', 'liquid-full-beyond-model', { top: T(k.model.satTop(), 'down') });
   if (p.headroomToDesign < 0)
     add('danger', 'design-at-peak', {
       peak: peakT,

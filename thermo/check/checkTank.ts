@@ -41,10 +41,24 @@ const ceilTo = (x: number, step: number) =>
 const P_STEP = 100;
 
 /** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
+/** The fields of `TankCheckInput` an `InputError` may name (dotted, as in the input). */
+const INPUT_FIELD =
+  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature)$/;
+
 export function checkTank(input: TankCheckInput): TankCheckResult {
   try {
     return check(input);
   } catch (e) {
+    // A core refusal about an internal argument (a density, a temperature of a search) is a
+    // flaw of the check, but the caller can only change the input: name the product and
+    // readings together rather than a field the input does not have.
+    if (e instanceof InputError && !INPUT_FIELD.test(e.field)) {
+      throw new InputError(
+        'product',
+        `a product and readings the model can solve together (${e.message})`,
+        undefined,
+      );
+    }
     // The core never hides a failed solve. Where it cannot solve this product at these
     // temperatures, say so about the input rather than crash with another error type.
     if (e instanceof ConvergenceError) {
@@ -102,11 +116,16 @@ function check(input: TankCheckInput): TankCheckResult {
     rho = Math.max(contents.netMass / c.V, 1e-6);
   } else {
     if (!satNow) {
-      const field = 'gaugePercent' in contents ? 'contents.gaugePercent' : 'contents.levelHeight';
+      // The level reading is fine; the liquid temperature is past where a liquid surface
+      // exists (the end of the saturation curve), so the temperature is the field refused.
+      const top = model.satTop();
+      const note =
+        'for a level or float-gauge reading (above it there is no liquid surface: weigh the tank instead)';
       throw new InputError(
-        field,
-        `not usable above the critical temperature (${b.Tc.toFixed(1)} K): there is no liquid level; give contents.netMass`,
+        'liquidTemperature',
+        `from ${Tlo.toFixed(2)} to ${top.toFixed(2)} K ${note}`,
         c.T,
+        { min: Tlo, max: top, quantity: 'temperature', note },
       );
     }
     let f: number;

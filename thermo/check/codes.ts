@@ -21,6 +21,7 @@ export const CAUTION_CODES = [
   'liquid-full-at-peak',
   'dense-fluid-at-peak',
   'liquid-full-near-peak',
+  'liquid-full-beyond-model',
   'design-at-peak',
   'relief-at-peak',
   'relief-near-at-peak',

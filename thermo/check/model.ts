@@ -95,6 +95,9 @@ export function productBasics(product: Product): ProductBasics {
 /** Top of each product's saturation curve, K (memoised by the product's JSON). */
 const topCache = new Map<string, number>();
 
+/** Highest temperature the check looks at, K (as search.ts T_SEARCH_MAX). */
+const T_TOP_K = 400;
+
 export class ProductModel {
   readonly basics: ProductBasics;
   private readonly sats = new Map<number, Sat | null>();
@@ -238,17 +241,19 @@ export class ProductModel {
    * Blend: the last temperature below T at which the bubble-point approximation held for this
    * overall density, with its bubble pressure; null when it never held below T. The
    * approximation holds on one interval of temperature (ρV rises and ρL falls with T), which
-   * starts at the lowest temperature the check takes if anywhere: bisection to 0.01 K.
+   * starts at the lowest temperature the check takes if anywhere: bisection to 0.001 K.
    */
   private twoPhaseEnd(rho: number, T: number): { T: number; p: number } | null {
     if (this.ends.has(rho)) {
       const hit = this.ends.get(rho)!;
       return hit && hit.T <= T ? hit : null;
     }
+    // Bisection over the whole range searched (not up to T), so every call for this density
+    // finds the same end and the floor cannot wobble with T.
     let lo = Math.max(this.basics.Tmin + 0.01, 150);
-    let hi = T;
-    if (lo >= hi || !this.twoPhaseAt(lo, rho)) return null;
-    while (hi - lo > 0.01) {
+    let hi = T_TOP_K;
+    if (lo >= T || !this.twoPhaseAt(lo, rho) || this.twoPhaseAt(hi, rho)) return null;
+    while (hi - lo > 0.001) {
       const mid = 0.5 * (lo + hi);
       if (this.twoPhaseAt(mid, rho)) lo = mid;
       else hi = mid;

@@ -134,17 +134,19 @@ export function liquidFullTemperature(
   // Denser than the critical density but still short of liquid-full where the curve ends: it
   // is full of dense fluid by the critical point; say so from the end of the curve (earlier,
   // the cautious side).
-  if (yTop < 0) return Thi;
+  // (A curve that runs on past the highest temperature searched has not ended: not full there.)
+  const ended = Thi < T_SEARCH_MAX;
+  if (yTop < 0) return ended ? Thi : null;
   const hints: [number, number][] = [[Thi, yTop]];
   for (const T of hintsT) if (T >= Tlo && T < Thi) hints.push([T, y(T)]);
   // Already denser than the liquid at the lowest temperature searched: full from there on.
   if (y(Tlo) >= 0) return Tlo;
   const T = solveIncreasing(y, hints, Tlo, Thi, 0.002);
-  if (T === null) return Thi;
+  if (T === null) return ended ? Thi : null;
   const s = model.sat(T);
   // A crossing on the saturation curve is a liquid-full state; otherwise the contents (denser
   // than critical) are full of dense fluid from the end of the curve.
-  return s && Math.abs(s.rhoL - rho) <= 0.01 * rho ? T : Thi;
+  return s && Math.abs(s.rhoL - rho) <= 0.01 * rho ? T : ended ? Thi : null;
 }
 
 /**
@@ -173,8 +175,10 @@ export function reliefTemperature(
   const Ts = saturationTemperature(model, pSat, [Tnow], Tnow);
   // Reached while still two-phase: the saturation answer stands.
   if (Ts !== null && Ts > Tnow && (Tfull === null || Ts <= Tfull)) {
+    // Only where the tank's pressure there is that saturation pressure (not a blend's flash
+    // held at a floor below it, nor vapour only).
     const st = model.stateOrNull(Ts, rho);
-    if (st && st.phase === 'two-phase') return Ts;
+    if (st && st.phase === 'two-phase' && Math.abs(st.pAbs / pSat - 1) < 1e-4) return Ts;
   }
   const hints: [number, number][] = [[Tnow, h0]];
   for (const T of [Tfull, Ts]) {
