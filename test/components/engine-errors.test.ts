@@ -131,10 +131,16 @@ describe('check-screen engine errors in the user’s units', () => {
     expect(text).not.to.contain('Pa gauge');
   });
 
-  it('errorText keeps the engine’s own words when the refusal has no numeric range', () => {
+  it('errorText never passes on the engine’s field names or SI words without a range', () => {
     const d = DisplayUnits.fromSettings(settings);
     const e = new InputError('contents', 'exactly one of { gaugePercent }, { netMass }', 2);
-    expect(errorText({ field: e.field, message: e.message }, d)).to.equal(e.message);
+    const text = errorText({ field: e.field, message: e.message }, d);
+    expect(text).not.to.contain('gaugePercent');
+    expect(text).not.to.contain('{');
+    const p = new InputError('product', 'a product the model can solve (density must be 5 K)');
+    const pt = errorText({ field: p.field, message: p.message }, d);
+    expect(pt).to.contain('product');
+    expect(pt).not.to.match(/\d\s*K\b/);
     // A known field with limits in a plain unit (percent, no quantity).
     expect(
       errorText({ field: 'contents.gaugePercent', message: '', limits: { min: 0, max: 100 } }, d),
