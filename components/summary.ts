@@ -4,7 +4,7 @@
  * the standing caution; never worded as permission.
  */
 import { DisplayUnits, formatPercent } from './display.js';
-import { PHASE_WORDS, STANDING_FALLBACK, phaseWords } from './check-results.js';
+import { STANDING_FALLBACK, phaseWords } from './check-results.js';
 import { cautionText } from './messages.js';
 import { productLabel } from './products.js';
 import type { CheckRecord, Readings, TankRecord } from './types.js';
