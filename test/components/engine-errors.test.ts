@@ -119,6 +119,25 @@ describe('check-screen engine errors in the user’s units', () => {
     expect(text).not.to.match(KELVIN);
   });
 
+  it('check-screen puts a float gauge above the critical temperature on the liquid temperature', async () => {
+    // Propane at 250 °F is past the end of its saturation curve (Tc 206.0 °F, Lemmon et al.
+    // 2009, test/reference/fluids.csv): a float gauge has no liquid surface to read. The refusal
+    // names the liquid temperature, in °F, with no engine field name.
+    const t = tank('propane');
+    const r = readings({ liquidTemperature: F(250), gaugePercent: 50 });
+    const el = await screen(t, r);
+    const text = byTestId(el, 'engine-error-liquidTemperature').textContent ?? '';
+    const limits = engineLimits(t, r, 'liquidTemperature');
+    const d = DisplayUnits.fromSettings(settings);
+    expect(text).to.contain(`to ${d.number('temperature', limits.max!, 'down')} °F`);
+    expect(Number(d.number('temperature', limits.max!, 'down'))).to.be.lessThan(206.1);
+    expect(text).not.to.match(KELVIN);
+    expect(text).not.to.contain('contents.');
+    expect(el.shadowRoot!.querySelector('[data-testid="engine-error-gaugePercent"]')).to.equal(
+      null,
+    );
+  });
+
   it('check-screen words a nameplate figure the check refuses in psig', async () => {
     // 1 psig is below the check's 10 000 Pa (1.45 psig); its 10 000…100 000 000 Pa gauge range is
     // 1.45…14 503.8 psig, shown in whole psig rounded inward: 2 and 14503.

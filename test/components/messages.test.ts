@@ -3,7 +3,9 @@
 // the engine can emit has an entry, and a sweep of made-up tanks that raises most cautions is
 // written with no foreign unit — metric settings show no psig, °F, US gal or lb; US settings
 // show no kelvin — and no engine field name. The tanks are invented fixtures, not check values.
-import { expect } from '@open-wc/testing';
+import { expect, fixture, html } from '@open-wc/testing';
+import '../../components/check-results.js';
+import type { CheckResults } from '../../components/check-results.js';
 import { CAUSE_WORDS, CAUTION_WORDS, causeText, cautionText } from '../../components/messages.js';
 import { DisplayUnits } from '../../components/display.js';
 import {
@@ -158,4 +160,25 @@ describe('messages catalogue', () => {
     expect(high.causeCodes.length).to.be.greaterThan(0);
     for (const code of high.causeCodes) expect(causeText(code)).to.not.match(ENGINE_NAMES);
   });
+});
+
+describe('check-results writes cautions and the diagnosis in the user’s units', () => {
+  for (const [name, d, foreign] of [
+    ['metric', metric, US_UNITS],
+    ['US', us, KELVIN],
+  ] as const) {
+    it(`shows no foreign unit in cautions or the diagnosis (${name})`, async () => {
+      for (const r of [results[0]!, results[2]!, results[5]!, results[6]!]) {
+        const el = await fixture<CheckResults>(
+          html`<check-results .result=${r} .display=${d} .missing=${[]}></check-results>`,
+        );
+        await el.updateComplete;
+        const nodes = [
+          ...el.shadowRoot!.querySelectorAll('[data-testid="caution"], [data-testid="diagnosis"]'),
+        ];
+        expect(nodes.length).to.be.greaterThan(0);
+        for (const n of nodes) expect(n.textContent ?? '').to.not.match(foreign);
+      }
+    });
+  }
 });
