@@ -119,7 +119,8 @@ const cautions = results.flatMap((r) => r.cautions);
 describe('messages catalogue', () => {
   it('has an entry for every caution and cause code the engine can emit', () => {
     for (const code of CAUTION_CODES) expect(CAUTION_WORDS, code).to.have.property(code);
-    for (const code of CAUSE_CODES) expect(CAUSE_WORDS[code], code).to.be.a('string').and.not.empty;
+    for (const code of CAUSE_CODES)
+      expect(CAUSE_WORDS[code]?.length ?? 0, code).to.be.greaterThan(10);
     // The sweep reaches most codes, and every code it meets is a listed one.
     const seen = new Set(cautions.map((c) => c.code));
     for (const code of seen) expect(CAUTION_CODES as readonly string[]).to.include(code);
