@@ -244,6 +244,7 @@ function check(input: TankCheckInput): TankCheckResult {
     (s) => pressureAllowance(s, rho, b.rhoc),
     c.T,
     liquidFullTemperature,
+    hints,
   );
 
   // --- Diagnosis. ---

@@ -163,6 +163,7 @@ export function reliefTemperature(
   allowance: (s: State) => number,
   Tnow: number,
   Tfull: number | null,
+  hintsT: readonly number[] = [Tnow],
 ): number | null {
   // ln of raised pressure over relief; where the model cannot hold the fill: "above".
   const h = (T: number) => {
@@ -172,7 +173,7 @@ export function reliefTemperature(
   const h0 = h(Tnow);
   if (h0 === null || h0 >= 0) return Tnow;
   const pSat = pReliefAbs / (1 + MODEL_ALLOWANCE.vapourPressure);
-  const Ts = saturationTemperature(model, pSat, [Tnow], Tnow);
+  const Ts = saturationTemperature(model, pSat, hintsT, Tnow);
   // Reached while still two-phase: the saturation answer stands.
   if (Ts !== null && Ts > Tnow && (Tfull === null || Ts <= Tfull)) {
     // Only where the tank's pressure there is that saturation pressure (not a blend's flash
