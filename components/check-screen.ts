@@ -400,7 +400,7 @@ export class CheckScreen extends LitElement {
                       .curve=${this._curve}
                       .display=${d}
                       .designPressure=${np.designPressure}
-                      .reliefPressure=${np.reliefSetPressure ?? Number.NaN}
+                      .reliefPressure=${relief}
                       .nowTemperature=${o?.input?.liquidTemperature ?? Number.NaN}
                       .peakTemperature=${result.peak.temperature}
                     ></check-chart>`
