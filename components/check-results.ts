@@ -431,7 +431,20 @@ export class CheckResults extends LitElement {
           <dd>${d.format('pressure', p.pAbsolute, 'up')}</dd>
           <dt>Relief setting${assumed ? ' (assumed)' : ''} reached at</dt>
           <dd>
-            ${this._tempWithTolerance('relief-temperature', r.reliefTemperature, `Not below ${d.format('temperature', RELIEF_SEARCH_MAX_K)}`)}
+            ${
+              r.cautions.some((c) => c.code === 'relief-now')
+                ? html`<span
+                    data-testid="relief-temperature"
+                    data-si=${String(r.reliefTemperature ?? '')}
+                    class="over"
+                    >Now: the pressure is already at or near the setting</span
+                  >`
+                : this._tempWithTolerance(
+                    'relief-temperature',
+                    r.reliefTemperature,
+                    `Not below ${d.format('temperature', RELIEF_SEARCH_MAX_K)}`,
+                  )
+            }
           </dd>
         </dl>
       </section>

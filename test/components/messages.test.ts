@@ -183,3 +183,23 @@ describe('check-results writes cautions and the diagnosis in the user’s units'
     });
   }
 });
+
+describe('check-results says the relief setting is reached now', () => {
+  it('shows "Now" rather than a temperature when the pressure is already at the setting', async () => {
+    // Propane at 300 K has a vapour pressure near 1 MPa absolute (about 145 psia, from memory);
+    // a relief setting of 0.5 MPa gauge is below it, so it is reached now.
+    const r = checkTank(
+      propane({
+        tank: { waterCapacity: 1.9, designPressure: 1.72e6, reliefSetPressure: 5e5 },
+        liquidTemperature: 300,
+      }),
+    );
+    const el = await fixture<CheckResults>(
+      html`<check-results .result=${r} .display=${metric} .missing=${[]}></check-results>`,
+    );
+    await el.updateComplete;
+    const t = el.shadowRoot!.querySelector('[data-testid="relief-temperature"]')!;
+    expect(t.textContent).to.contain('Now');
+    expect(r.cautions.map((c) => c.code)).to.include('relief-now');
+  });
+});
