@@ -3,7 +3,7 @@
  * `TankCheckInput`, or a list of what is still missing. No arithmetic on units here: the only
  * sum is peak liquid temperature = peak air temperature + sun allowance, both already in K.
  */
-import { checkTank, InputError, type InputLimits } from '../thermo/index.js';
+import { checkTank, InputError, type InputErrorCode, type InputLimits } from '../thermo/index.js';
 import { cautionText, refusalWords } from './messages.js';
 import type { TankCheckInput, TankCheckResult } from '../thermo/check/types.js';
 import type { DisplayUnits } from './display.js';
@@ -84,6 +84,8 @@ export interface CheckError {
   field: string;
   message: string;
   limits?: InputLimits;
+  /** The engine's kind of refusal (`InputError.code`), when it was one. */
+  code?: InputErrorCode;
 }
 
 export interface CheckOutcome {
@@ -127,6 +129,7 @@ const PLAIN_UNITS: Record<string, string> = { 'contents.gaugePercent': '%' };
 export function errorText(error: CheckError, display: DisplayUnits): string {
   const l = error.limits;
   const name = FIELD_LABELS[error.field];
+  if (error.code === 'not-a-number' && name) return `${name} must be a number`;
   if (!l || !name || (l.min === undefined && l.max === undefined))
     return refusalWords(error.field, name);
   try {
@@ -149,7 +152,7 @@ export function runCheck(tank: TankRecord, readings: Readings, settings: Setting
     return { ...built, result: checkTank(built.input), error: null };
   } catch (e) {
     if (e instanceof InputError) {
-      const error: CheckError = { field: e.field, message: e.message };
+      const error: CheckError = { field: e.field, message: e.message, code: e.code };
       if (e.limits) error.limits = e.limits;
       return { ...built, result: null, error };
     }

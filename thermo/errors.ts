@@ -19,6 +19,8 @@ export interface InputLimits {
   readonly note?: string;
 }
 
+export type InputErrorCode = 'not-a-number' | 'out-of-range' | 'invalid';
+
 /**
  * The one error type the public API throws for bad input. The message always names the
  * argument (field) and its valid range in SI, so a script can read it as is; `limits`, where
@@ -31,6 +33,12 @@ export class InputError extends Error {
   readonly validRange: string;
   /** The range of `validRange` as numbers, when the field is a number with a numeric range. */
   readonly limits?: InputLimits;
+  /**
+   * What kind of refusal, for an app to word it: `not-a-number` (a number was expected: a
+   * string, a BigInt, NaN, an object…), `out-of-range` (a number outside `limits`), `invalid`
+   * (anything else: a choice, a shape, a product).
+   */
+  readonly code: InputErrorCode;
 
   constructor(field: string, validRange: string, got?: unknown, limits?: InputLimits) {
     const shown = got === undefined ? '' : ` (got ${describeValue(got)})`;
@@ -39,6 +47,14 @@ export class InputError extends Error {
     this.field = field;
     this.validRange = validRange;
     if (limits !== undefined) this.limits = limits;
+    this.code =
+      limits === undefined && typeof got === 'number' && Number.isFinite(got)
+        ? 'invalid'
+        : typeof got === 'number' && Number.isFinite(got)
+          ? 'out-of-range'
+          : limits !== undefined
+            ? 'not-a-number'
+            : 'invalid';
   }
 }
 
