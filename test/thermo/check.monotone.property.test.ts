@@ -91,6 +91,27 @@ function tryCheck(i: TankCheckInput): TankCheckResult | null {
   }
 }
 
+/** The invariants between a check at one peak (r1) and at a hotter one (r2), same tank and contents. */
+function neverMilder(r1: TankCheckResult, r2: TankCheckResult, what: string): void {
+  expect(r2.fillLimit.maxMass, `limit: ${what}`).toBeLessThanOrEqual(r1.fillLimit.maxMass);
+  // Pressures are rounded up to 100 Pa: equal states may differ by one step.
+  expect(r2.peak.p, `peak pressure: ${what}`).toBeGreaterThanOrEqual(r1.peak.p - 100);
+  expect(r2.peak.headroomToRelief, `headroom: ${what}`).toBeLessThanOrEqual(
+    r1.peak.headroomToRelief + 100,
+  );
+  expect(worst(r2), `worst caution: ${what}`).toBeLessThanOrEqual(worst(r1));
+  for (const r of [r1, r2]) {
+    const Tf = r.liquidFullTemperature;
+    if (Tf !== null && Tf <= r.peak.temperature)
+      expect(
+        r.cautions.some((c) => c.level === 'danger'),
+        `full at ${Tf} ≤ peak ${r.peak.temperature}: ${what}`,
+      ).toBe(true);
+    if (r.peak.full !== null)
+      expect(r.cautions[0]!.level, `full at the peak: ${what}`).toBe('danger');
+  }
+}
+
 const tally = { pairs: 0, crossing: 0, dense: 0 };
 
 describe('checkTank is never milder when hotter (fast-check, peaks across Tc)', () => {
@@ -104,23 +125,7 @@ describe('checkTank is never milder when hotter (fast-check, peaks across Tc)', 
         if (p1 < Tc && p2 > Tc) tally.crossing++;
         if (r2.peak.full === 'dense-fluid') tally.dense++;
         const what = JSON.stringify(input(p2).product) + ` T ${T} peaks ${p1} → ${p2}`;
-        expect(r2.fillLimit.maxMass, `limit: ${what}`).toBeLessThanOrEqual(r1.fillLimit.maxMass);
-        // Pressures are rounded up to 100 Pa: equal states may differ by one step.
-        expect(r2.peak.p, `peak pressure: ${what}`).toBeGreaterThanOrEqual(r1.peak.p - 100);
-        expect(r2.peak.headroomToRelief, `headroom: ${what}`).toBeLessThanOrEqual(
-          r1.peak.headroomToRelief + 100,
-        );
-        expect(worst(r2), `worst caution: ${what}`).toBeLessThanOrEqual(worst(r1));
-        for (const r of [r1, r2]) {
-          const Tf = r.liquidFullTemperature;
-          if (Tf !== null && Tf <= r.peak.temperature)
-            expect(
-              r.cautions.some((c) => c.level === 'danger'),
-              `full at ${Tf} ≤ peak ${r.peak.temperature}: ${what}`,
-            ).toBe(true);
-          if (r.peak.full !== null)
-            expect(r.cautions[0]!.level, `full at the peak: ${what}`).toBe('danger');
-        }
+        neverMilder(r1, r2, what);
       }),
       { numRuns: 160, seed: 20261202 },
     );
@@ -128,6 +133,41 @@ describe('checkTank is never milder when hotter (fast-check, peaks across Tc)', 
     expect(tally.pairs, JSON.stringify(tally)).toBeGreaterThan(100);
     expect(tally.crossing, JSON.stringify(tally)).toBeGreaterThan(20);
     expect(tally.dense, JSON.stringify(tally)).toBeGreaterThan(5);
+  });
+
+  it('every fluid and preset, peaks stepped across Tc, at fills either side of ρc', () => {
+    let steps = 0;
+    for (const product of [...fluids, ...presets]) {
+      const Tc = criticalTemperature(product);
+      const rhoc = describeProduct(product).rhoc;
+      const T = Math.max(200, Math.min(Tc - 10, 330));
+      const peaks = [-4, -1, -0.3, 0.3, 1, 4]
+        .map((d) => Math.min(400, Math.max(T, Tc + d)))
+        .filter((p, i, a) => a.indexOf(p) === i);
+      for (const fill of [0.7, 1.15, 1.6]) {
+        const input = (peak: number): TankCheckInput => ({
+          tank: { waterCapacity: 1, designPressure: 1e7 },
+          product,
+          liquidTemperature: T,
+          contents: { netMass: fill * rhoc },
+          peakTemperature: peak,
+        });
+        let last: TankCheckResult | null = null;
+        for (const peak of peaks) {
+          const r = tryCheck(input(peak));
+          if (!r) break; // past what the model can hold: the path ends
+          if (last)
+            neverMilder(
+              last,
+              r,
+              `${JSON.stringify(product)} fill ${fill}ρc, ${last.peak.temperature} → ${peak}`,
+            );
+          last = r;
+          steps++;
+        }
+      }
+    }
+    expect(steps).toBeGreaterThan(200);
   });
 
   it('the relief temperature agrees with the headroom to relief', () => {

@@ -198,7 +198,14 @@ function peakCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       peak: peakT,
       criticalTemperature: T(r.product.criticalTemperature),
     });
-  if (p.phase === 'two-phase' && p.liquidFraction > 0.95)
+  // Contents thinner than the critical density cannot nearly fill the tank with liquid (the
+  // liquid's share stays below about half up to the critical point, by the rule of rectilinear
+  // diameters); a flash that says so near a blend's critical region is not a real state.
+  if (
+    p.phase === 'two-phase' &&
+    p.liquidFraction > 0.95 &&
+    r.contents.overallDensity > k.model.basics.rhoc
+  )
     add('caution', 'small-vapour-space-at-peak', {
       liquidFraction: num(p.liquidFraction, 'fraction', 'up'),
     });
