@@ -44,4 +44,37 @@ describe('a hotter forecast never reads safer', () => {
     expect(text).toContain('88.5 °F');
     expect(text).not.toMatch(/\d\s*K\b/);
   });
+
+  it('with metric settings no caution shows psig, °F, US gal or lb, and none shows kelvin', async () => {
+    const { page } = await app.open('/');
+    await byTestId(page, 'tank-item').first().waitFor();
+    await byTestId(page, 'nav-settings').click();
+    for (const [key, unit] of [
+      ['pressure', 'kPag'],
+      ['temperature', 'C'],
+      ['volume', 'L'],
+      ['mass', 'kg'],
+      ['length', 'cm'],
+    ] as const) {
+      await byTestId(page, `unit-${key}`).selectOption(unit);
+      await expect.poll(() => byTestId(page, `unit-${key}`).inputValue()).toBe(unit);
+    }
+    await byTestId(page, 'nav-tanks').click();
+    await page.getByRole('button', { name: /^Check Demo: CO2 cylinder/ }).click();
+    await byTestId(page, 'contents-mode-gaugePercent').click();
+    await typeInto(byTestId(page, 'liquid-temperature'), '10');
+    await typeInto(byTestId(page, 'gauge-percent'), '85');
+    await typeInto(byTestId(page, 'sun-allowance'), '0');
+    await typeInto(byTestId(page, 'peak-air-temperature'), '31.5');
+    // 31.5 °C is past CO2's critical temperature of 30.98 °C (Span & Wagner 1996).
+    const first = page.locator('[data-testid="caution"]').first();
+    await expect.poll(() => first.getAttribute('data-code')).toBe('dense-fluid-at-peak');
+    const texts = await page.locator('[data-testid="caution"]').allTextContents();
+    expect(texts.length).toBeGreaterThan(1);
+    for (const t of texts) {
+      expect(t).not.toMatch(/psi|°F|US gal|\blb\b/);
+      expect(t).not.toMatch(/\d\s*K\b/);
+    }
+    expect(texts[0]).toContain('31.5 °C');
+  });
 });
