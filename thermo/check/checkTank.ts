@@ -189,7 +189,7 @@ function check(input: TankCheckInput): TankCheckResult {
     });
   }
   limits.sort((p, q) => p.maxMass - q.maxMass);
-  const fillLimit = buildFillLimit(
+  const fillLimitAt60F = buildFillLimit(
     limits,
     totalMass,
     waterWeight,
@@ -199,6 +199,10 @@ function check(input: TankCheckInput): TankCheckResult {
     rule?.fillingDensity ?? null,
     sg,
   );
+  const fillLimit: FillLimitResult = {
+    ...fillLimitAt60F,
+    roomLeftVolumeAt15C: floorTo(fillLimitAt60F.roomLeftMass / b.rho15, 1e-6),
+  };
 
   // --- Peak. ---
   const peakState = c.Tpeak === c.T ? now : model.stateOrNull(c.Tpeak, rho);
@@ -298,7 +302,7 @@ function buildFillLimit(
   rho60: number,
   ruleFd: number | null,
   sg: number,
-): FillLimitResult {
+): Omit<FillLimitResult, 'roomLeftVolumeAt15C'> {
   const binding = limits[0];
   // With no limit at all (no rule, no liquid at any reference temperature) the check claims no room.
   const maxMass = binding ? binding.maxMass : floorTo(totalMass, 0.01);

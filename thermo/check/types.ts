@@ -208,6 +208,11 @@ export interface FillLimitResult {
   roomLeftVolume: number;
   /** Room left as liquid volume at 60 °F, m³ (rounded down; negative when over). */
   roomLeftVolumeAt60F: number;
+  /**
+   * Room left as liquid volume at 15 °C, the metric base temperature, m³ (rounded down; negative
+   * when over): room left mass ÷ the model's saturated liquid density at 288.15 K.
+   */
+  roomLeftVolumeAt15C: number;
   /** Float-gauge percent at which the tank holds `maxMass` at the current liquid temperature, percent (rounded down to 0.1; 100 when even a liquid-full tank would hold less). */
   stopAtGaugePercent: number;
   /**
