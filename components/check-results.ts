@@ -24,6 +24,7 @@ import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './dis
 import { DEFAULT_SETTINGS } from './types.js';
 import type { Caution, TankCheckResult, TankPhase } from '../thermo/check/types.js';
 import { T_60F_K } from '../thermo/constants.js';
+import { baseLabel, keyFigures } from './key-figures.js';
 
 /** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
 export const STANDING_FALLBACK =
@@ -111,11 +112,15 @@ export class CheckResults extends LitElement {
       dl {
         margin: 0;
         display: grid;
-        grid-template-columns: minmax(0, 1fr) auto;
+        /* A long figure ("exceeded by 1234 psi", a blend's composition) wraps inside its own
+           column instead of running over the label. */
+        grid-template-columns: minmax(0, 1fr) fit-content(55%);
         gap: 0.25rem 0.75rem;
       }
-      dt {
+      dt,
+      dd {
         min-width: 0;
+        overflow-wrap: anywhere;
       }
       dd {
         margin: 0;
@@ -123,13 +128,32 @@ export class CheckResults extends LitElement {
         text-align: right;
         font-variant-numeric: tabular-nums;
       }
+      .act {
+        font-size: 0.92em;
+        font-weight: 400;
+        text-align: left;
+        grid-column: 1 / -1;
+        margin: 0 0 0.25rem;
+      }
       .standing {
         border: var(--border-width) solid var(--ink);
         border-left-width: 0.6rem;
         border-radius: 0.4rem;
-        padding: 0.6rem 0.75rem;
+        padding: 0.4rem 0.75rem;
         margin: 0 0 1rem;
         background: var(--paper-2);
+      }
+      .standing summary {
+        cursor: pointer;
+        min-height: 48px;
+        padding: 0.25rem 0;
+      }
+      .standing summary .more {
+        text-decoration: underline;
+        white-space: nowrap;
+      }
+      .standing p {
+        margin: 0.25rem 0 0.25rem;
       }
       .cautions {
         list-style: none;
@@ -224,11 +248,22 @@ export class CheckResults extends LitElement {
     }`;
   }
 
+  /** The standing caution in short, with the whole text one tap away. */
   private _standing(): TemplateResult {
     const text = this.result?.standingCaution ?? STANDING_FALLBACK;
-    return html`<p class="standing" data-testid="standing-caution" role="note">
-      <strong>Always:</strong> ${text}
-    </p>`;
+    return html`<details class="standing" data-testid="standing-caution" role="note">
+      <summary>
+        <strong>Always:</strong> model figures only; site procedures, the code and licensed practice
+        come first. <span class="more">Read the whole caution</span>
+      </summary>
+      <p>${text}</p>
+    </details>`;
+  }
+
+  /** Brings the cautions into view (the key bar's level badge). */
+  showCautions(): void {
+    const el = this.renderRoot.querySelector<HTMLElement>('#h-cautions');
+    el?.scrollIntoView({ block: 'start' });
   }
 
   private _cautions(list: Caution[]): TemplateResult {
@@ -257,39 +292,42 @@ export class CheckResults extends LitElement {
     >`;
   }
 
+  /** Room left as liquid at the base temperature and as mass, or how far over the limit. */
+  private _roomLeft(r: TankCheckResult): TemplateResult {
+    const d = this.display;
+    const k = keyFigures(r, d);
+    if (k.over)
+      return html`<strong class="over"
+        >Over the limit by ${d.format('volume', -k.roomLeftVolume, 'up')} as liquid at
+        ${baseLabel(d)} (<span data-testid="room-left" data-si=${String(k.roomLeftMass)}
+          >${d.format('mass', -k.roomLeftMass, 'up')}</span
+        >)</strong
+      >`;
+    return html`Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at
+    ${baseLabel(d)} (${this._fig('room-left', 'mass', k.roomLeftMass, 'down')})`;
+  }
+
   private _body(r: TankCheckResult): TemplateResult {
     const d = this.display;
     const f = r.fillLimit;
     const c = r.contents;
     const p = r.peak;
     const binding = f.limits.find((l) => l.id === f.binding);
-    const over = f.roomLeftMass < 0;
     return html`
       <div class="key">
         <div class="card">
           <h3>Fill limit</h3>
           <div class="big">${this._fig('fill-limit', 'mass', f.maxMass, 'down')}</div>
           <p>
-            Stop at
+            Stop at or below
             <strong
               ><span data-testid="fill-stop-percent" data-si=${String(f.stopAtGaugePercent)}
                 >${formatPercent(f.stopAtGaugePercent, 'down')}</span
               ></strong
             >
-            on the float gauge at today’s liquid temperature.
+            on the float gauge at today’s liquid temperature: the figure to act on.
           </p>
-          <p>
-            ${
-              over
-                ? html`<strong class="over"
-                    >Over the limit by
-                    <span data-testid="room-left" data-si=${String(f.roomLeftMass)}
-                      >${d.format('mass', -f.roomLeftMass, 'up')}</span
-                    ></strong
-                  >`
-                : html`Room left ${this._fig('room-left', 'mass', f.roomLeftMass, 'down')}`
-            }
-          </p>
+          <p>${this._roomLeft(r)}</p>
         </div>
         <div class="card">
           <h3>Peak day${this.peakEstimated ? ' (no forecast entered)' : ''}</h3>
@@ -321,7 +359,7 @@ export class CheckResults extends LitElement {
         </div>
       </div>
 
-      <section aria-labelledby="h-cautions">
+      <section aria-labelledby="h-cautions" id="cautions">
         <h3 id="h-cautions">Cautions</h3>
         ${this._cautions(r.cautions)}
       </section>
@@ -371,15 +409,27 @@ export class CheckResults extends LitElement {
         <h3 id="h-limit">Fill limit in detail</h3>
         <dl>
           <dt>Maximum filling density</dt>
-          <dd>${d.format('fraction', f.maxFillingDensity, 'down')}</dd>
+          <dd>${this._maxFd(r)}</dd>
           <dt>Room left as liquid now</dt>
           <dd>${this._fig('room-left-volume', 'volume', f.roomLeftVolume, 'down')}</dd>
           <dt>Room left as liquid at ${base60(d)}</dt>
           <dd>${this._fig('room-left-volume-60f', 'volume', f.roomLeftVolumeAt60F, 'down')}</dd>
           ${
+            d.unit('temperature') === 'C'
+              ? html`<dt>Room left as liquid at 15 °C</dt>
+                  <dd>
+                    ${this._fig('room-left-volume-15c', 'volume', f.roomLeftVolumeAt15C, 'down')}
+                  </dd>`
+              : nothing
+          }
+          ${
             f.volumetricMaxPercent !== null
               ? html`<dt>Rule’s volumetric maximum now</dt>
-                  <dd>${formatPercent(f.volumetricMaxPercent, 'down')}</dd>`
+                  <dd>${formatPercent(f.volumetricMaxPercent, 'down')}</dd>
+                  <dd class="act muted" data-testid="volumetric-note">
+                    The rule’s table figure leaves out the vapour’s mass; act on the stop-at figure,
+                    ${formatPercent(f.stopAtGaugePercent, 'down')}.
+                  </dd>`
               : nothing
           }
         </dl>
@@ -419,6 +469,22 @@ export class CheckResults extends LitElement {
 
       ${r.diagnosis ? this._diagnosis(r) : nothing}
     `;
+  }
+
+  /**
+   * The maximum filling density: a table rule's own figure (42 % stays 42 %, never shown as
+   * 41.9 % from the mass rounded down), else the figure of the mass limit rounded down.
+   */
+  private _maxFd(r: TankCheckResult): TemplateResult {
+    const f = r.fillLimit;
+    const binding = f.limits.find((l) => l.id === f.binding);
+    const rule = binding?.kind === 'rule' && binding.modelAllowance === 0;
+    const text = rule
+      ? this.display.format('fraction', binding.fillingDensity, 'nearest')
+      : this.display.format('fraction', f.maxFillingDensity, 'down');
+    return html`<span data-testid="max-filling-density" data-si=${String(f.maxFillingDensity)}
+        >${text}</span
+      >${rule ? html`<span class="muted note"> (the rule’s table figure)</span>` : nothing}`;
   }
 
   private _diagnosis(r: TankCheckResult): TemplateResult {

@@ -9,6 +9,12 @@
  * @fires readings-change - bubbles up from <check-form> (the shell keeps it as a draft).
  * @fires check-delete - bubbles up from <check-history>.
  *
+ * The answer comes first: <key-bar> (stop-at percent, room left, peak headroom) sticks to the
+ * top of the screen above the readings, so it stays in view while they are typed with the
+ * on-screen keyboard up. Readings carry the time they were taken (`Readings.takenAt`, stamped
+ * when a measured reading changes); old readings are marked with their age in the bar, and a
+ * reopened tank with blank readings offers its last check (<last-check>) for one-tap reuse.
+ *
  * The host carries `data-check-input`: the JSON of the `checkTank` input behind the figures
  * shown (absent while a reading is missing or invalid).
  *
@@ -16,11 +22,13 @@
  * `check-status`, `tank-heading`, plus those of <check-form>, <check-results>, <check-chart>
  * and <check-history>.
  */
-import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
-import { baseStyles } from './styles.js';
-import { DisplayUnits, formatPercent } from './display.js';
+import { LitElement, html, css, nothing, type PropertyValues, type TemplateResult } from 'lit';
 import type { TankCheckResult } from '../thermo/check/types.js';
+import { baseStyles } from './styles.js';
+import { DisplayUnits } from './display.js';
 import './check-form.js';
+import './key-bar.js';
+import './last-check.js';
 import './check-results.js';
 import './check-chart.js';
 import './check-history.js';
@@ -45,6 +53,15 @@ import {
   type TankRecord,
 } from './types.js';
 import { blankTank } from './tank-form.js';
+import {
+  ageText,
+  hasMeasured,
+  isOld,
+  lastReadings,
+  measuredChanged,
+  whenText,
+  type LastReadings,
+} from './reopen.js';
 
 export interface CheckSaveDetail {
   check: CheckRecord;
@@ -69,6 +86,7 @@ export class CheckScreen extends LitElement {
     settings: { attribute: false },
     readings: { attribute: false },
     checks: { attribute: false },
+    last: { attribute: false },
     _readings: { state: true },
     _valid: { state: true },
     _outcome: { state: true },
@@ -85,6 +103,8 @@ export class CheckScreen extends LitElement {
   declare readings: Readings;
   /** Saved checks of this tank. */
   declare checks: CheckRecord[];
+  /** Old readings of this tank kept as a draft (offered for reuse with the saved checks), or null. */
+  declare last: LastReadings | null;
   declare _readings: Readings;
   declare _valid: boolean;
   declare _outcome: CheckOutcome | null;
@@ -101,6 +121,7 @@ export class CheckScreen extends LitElement {
     this.settings = DEFAULT_SETTINGS;
     this.readings = emptyReadings(DEFAULT_SETTINGS.sunAllowance);
     this.checks = [];
+    this.last = null;
     this._readings = this.readings;
     this._valid = true;
     this._outcome = null;
@@ -113,13 +134,23 @@ export class CheckScreen extends LitElement {
     baseStyles,
     css`
       .head {
-        margin-bottom: 0.75rem;
+        display: flex;
+        flex-wrap: wrap;
+        align-items: center;
+        gap: 0 0.5rem;
+        margin-bottom: 0.5rem;
       }
       .head h2 {
+        flex: 1 1 12rem;
+        font-size: 1.15rem;
+        margin: 0;
         overflow-wrap: anywhere;
       }
       .plate {
+        flex: 1 1 100%;
         color: var(--muted);
+        font-size: 0.85em;
+        margin: 0.2rem 0 0;
         overflow-wrap: anywhere;
       }
       .layout {
@@ -150,15 +181,24 @@ export class CheckScreen extends LitElement {
       }
       .keybar {
         position: sticky;
-        bottom: 0;
+        top: 0;
         z-index: 5;
-        margin: 0.75rem -0.75rem 0;
-        padding: 0.4rem 0.75rem;
+        margin: 0 -0.75rem 0.75rem;
+      }
+      .keybar .small {
         background: var(--ink);
         color: var(--paper);
+        font-size: 0.75em;
+        padding: 0 0.75rem 0.3rem;
+        margin: 0;
+      }
+      .stale {
+        border: var(--border-width) dashed var(--ink);
+        border-radius: 0.5rem;
+        padding: 0.5rem 0.75rem;
+        margin: 0 0 0.75rem;
         font-weight: 700;
-        font-size: 0.9em;
-        line-height: 1.3;
+        background: var(--paper-2);
       }
       .print-only {
         display: none;
@@ -167,10 +207,6 @@ export class CheckScreen extends LitElement {
         .print-only {
           display: block;
         }
-      }
-      .keybar .small {
-        font-weight: 400;
-        font-size: 0.85em;
       }
       @media print {
         .layout {
@@ -230,7 +266,10 @@ export class CheckScreen extends LitElement {
   }
 
   private _onReadings(e: CustomEvent<ReadingsChange>): void {
-    // The event goes on bubbling to the shell, which keeps the draft.
+    // The event goes on bubbling to the shell, which keeps the draft. A changed measured
+    // reading is stamped with the time it was typed (the readings of the draft carry it).
+    if (measuredChanged(this._readings, e.detail.readings))
+      e.detail.readings = { ...e.detail.readings, takenAt: new Date().toISOString() };
     this._readings = e.detail.readings;
     this._valid = e.detail.valid;
     this._status = '';
@@ -289,10 +328,26 @@ export class CheckScreen extends LitElement {
   }
 
   private _clearReadings(): void {
-    const cleared = emptyReadings(this.settings.sunAllowance);
+    this._replaceReadings(emptyReadings(this.settings.sunAllowance));
+    this._status = 'Readings cleared.';
+  }
+
+  /** One tap on <last-check>: its readings come back with their own (old) time. */
+  private _reuse(e: CustomEvent<{ readings: Readings }>): void {
+    e.stopPropagation();
+    this._replaceReadings(e.detail.readings);
+    this._status = '';
+  }
+
+  /** Scrolls the cautions into view (from the level badge of the key bar). */
+  private _showCautions(): void {
+    this.renderRoot.querySelector('check-results')?.showCautions();
+  }
+
+  private _replaceReadings(next: Readings): void {
+    const cleared = next;
     this._readings = cleared;
     this.readings = cleared;
-    this._status = 'Readings cleared.';
     this.dispatchEvent(
       new CustomEvent<ReadingsChange>('readings-change', {
         detail: { readings: cleared, valid: true },
@@ -308,19 +363,17 @@ export class CheckScreen extends LitElement {
     );
   }
 
-  override render() {
-    const t = this.tank;
-    const d = this._display;
-    const np = t.nameplate;
+  /** Engine refusals as per-field messages and one line for the results. */
+  private _errors(): { fieldErrors: FieldErrors; error: string } {
     const o = this._outcome;
-    const fieldErrors: Partial<Record<keyof Readings | 'peakTemperature', string>> = {};
+    const fieldErrors: FieldErrors = {};
     let error = '';
     if (!this._valid)
       error = 'A reading above is not valid: fix the marked field to see the figures.';
     else if (o?.error) {
       const key = FIELD_OF[o.error.field];
       // In the user's units when the engine gave the range as numbers.
-      const message = errorText(o.error, d);
+      const message = errorText(o.error, this._display);
       if (key) fieldErrors[key] = `The check cannot use this value: ${message}.`;
       error = o.error.field.startsWith('tank')
         ? `The tank’s nameplate has a figure the check cannot use (${message}). Edit the tank to fix it.`
@@ -328,21 +381,74 @@ export class CheckScreen extends LitElement {
           ? 'The check cannot use a reading: see the message next to the field.'
           : message;
     }
+    return { fieldErrors, error };
+  }
+
+  /** "2 Dec 2026, 14:05, 4 days old" when the readings in use are old, else empty. */
+  private _staleText(): string {
+    const at = this._readings.takenAt;
+    if (at === undefined || !hasMeasured(this._readings) || !isOld(at, new Date())) return '';
+    return `${whenText(at)}, ${ageText(at)} old`;
+  }
+
+  private _head(): TemplateResult {
+    const t = this.tank;
+    const d = this._display;
+    const np = t.nameplate;
+    return html`<div class="head">
+      <h2 data-testid="tank-heading">${t.name}${t.demo ? ' (demo, invented)' : ''}</h2>
+      <button class="quiet no-print" @click=${this._editTank}>Edit tank</button>
+      <p class="plate">
+        ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
+        ${d.format('volume', np.waterCapacity)} · MAWP
+        ${d.format('gaugePressure', np.designPressure)} · relief
+        ${d.format('gaugePressure', np.reliefSetPressure ?? np.designPressure)}
+      </p>
+      <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
+    </div>`;
+  }
+
+  /** The key bar: figures, or what is missing or wrong, and the standing caution in short. */
+  private _bar(result: TankCheckResult | null, error: string, stale: string): TemplateResult {
+    const o = this._outcome;
+    const message = error
+      ? 'No figures: fix the reading marked below.'
+      : o?.missing.length
+        ? `Enter ${o.missing.join(' and ')}: the stop-at percent and the room left show here.`
+        : 'No figures yet.';
+    return html`<div class="keybar">
+      <key-bar
+        .result=${result}
+        .display=${this._display}
+        .message=${message}
+        .stale=${stale}
+        @show-cautions=${this._showCautions}
+      ></key-bar>
+      <p class="small">Model figures: site procedures and the code come first.</p>
+    </div>`;
+  }
+
+  override render() {
+    const t = this.tank;
+    const d = this._display;
+    const np = t.nameplate;
+    const o = this._outcome;
+    const { fieldErrors, error } = this._errors();
     const result = this._valid && !o?.error ? (o?.result ?? null) : null;
-    const relief = np.reliefSetPressure ?? np.designPressure;
+    const stale = this._staleText();
+    const last = hasMeasured(this._readings) ? null : lastReadings(this.last, this.checks);
     return html`
       <div data-testid="check-screen">
-        <div class="head">
-          <h2 data-testid="tank-heading">${t.name}${t.demo ? ' (demo, invented)' : ''}</h2>
-          <p class="plate">
-            ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
-            ${d.format('volume', np.waterCapacity)} · MAWP
-            ${d.format('gaugePressure', np.designPressure)} · relief
-            ${d.format('gaugePressure', relief)}
-          </p>
-          <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
-          <button class="quiet no-print" @click=${this._editTank}>Edit tank</button>
-        </div>
+        ${this._head()} ${this._bar(result, error, stale)}
+        <last-check .last=${last} .display=${d} @readings-reuse=${this._reuse}></last-check>
+        ${
+          stale
+            ? html`<p class="stale" data-testid="readings-age" role="note">
+                These readings were taken ${stale}. The figures are for then, not now: type today’s
+                readings.
+              </p>`
+            : nothing
+        }
         <div class="layout">
           <check-form
             .readings=${this.readings}
@@ -361,69 +467,53 @@ export class CheckScreen extends LitElement {
               .thermometerTolerance=${this.settings.thermometerTolerance}
               ?peak-estimated=${o?.peakEstimated ?? false}
             ></check-results>
-            <div class="actions">
-              <button
-                class="primary"
-                data-testid="check-save"
-                ?disabled=${!result}
-                @click=${this._save}
-              >
-                Save check
-              </button>
-              <button data-testid="check-share" ?disabled=${!result} @click=${this._share}>
-                Share summary
-              </button>
-              <button data-testid="check-print" ?disabled=${!result} @click=${this._print}>
-                Print
-              </button>
-              <button class="quiet" data-testid="readings-clear" @click=${this._clearReadings}>
-                Clear readings
-              </button>
-            </div>
-            <p class="status" role="status" data-testid="check-status">${this._status}</p>
-            ${
-              this._shareText
-                ? html`<label for="share-text">Summary</label
-                    ><textarea id="share-text" readonly .value=${this._shareText}></textarea>`
-                : nothing
-            }
-            ${
-              result && this._curve
-                ? html`<h3>Heating</h3>
-                    <check-chart
-                      .curve=${this._curve}
-                      .display=${d}
-                      .designPressure=${np.designPressure}
-                      .reliefPressure=${relief}
-                      .nowTemperature=${o?.input?.liquidTemperature ?? Number.NaN}
-                      .peakTemperature=${result.peak.temperature}
-                    ></check-chart>`
-                : nothing
-            }
+            ${this._actions(result)} ${this._chart(result)}
             <h3>History</h3>
             <check-history .checks=${this.checks} .display=${d}></check-history>
           </div>
         </div>
-        <div class="keybar" data-testid="key-bar" aria-hidden="true">
-          ${
-            result
-              ? html`Stop at ${formatPercent(result.fillLimit.stopAtGaugePercent, 'down')} · limit
-                ${d.format('mass', result.fillLimit.maxMass, 'down')} · peak
-                ${d.format('gaugePressure', result.peak.p, 'up')}
-                ${topLevel(result) ? html` · ${topLevel(result)!.toUpperCase()}` : nothing}`
-              : html`No figures yet`
-          }
-          <div class="small">Model figures: site procedures and the code come first.</div>
-        </div>
       </div>
     `;
   }
+
+  private _actions(result: TankCheckResult | null): TemplateResult {
+    return html`<div class="actions">
+        <button class="primary" data-testid="check-save" ?disabled=${!result} @click=${this._save}>
+          Save check
+        </button>
+        <button data-testid="check-share" ?disabled=${!result} @click=${this._share}>
+          Share summary
+        </button>
+        <button data-testid="check-print" ?disabled=${!result} @click=${this._print}>Print</button>
+        <button class="quiet" data-testid="readings-clear" @click=${this._clearReadings}>
+          Clear readings
+        </button>
+      </div>
+      <p class="status" role="status" data-testid="check-status">${this._status}</p>
+      ${
+        this._shareText
+          ? html`<label for="share-text">Summary</label
+              ><textarea id="share-text" readonly .value=${this._shareText}></textarea>`
+          : nothing
+      }`;
+  }
+
+  private _chart(result: TankCheckResult | null): TemplateResult | typeof nothing {
+    const np = this.tank.nameplate;
+    if (!result || !this._curve) return nothing;
+    return html`<h3>Heating</h3>
+      <check-chart
+        .curve=${this._curve}
+        .display=${this._display}
+        .designPressure=${np.designPressure}
+        .reliefPressure=${np.reliefSetPressure ?? np.designPressure}
+        .nowTemperature=${this._outcome?.input?.liquidTemperature ?? Number.NaN}
+        .peakTemperature=${result.peak.temperature}
+      ></check-chart>`;
+  }
 }
 
-/** The most severe caution level other than the standing caution, if any. */
-function topLevel(r: TankCheckResult): string | null {
-  return r.cautions.find((c) => c.code !== 'standing')?.level ?? null;
-}
+type FieldErrors = Partial<Record<keyof Readings | 'peakTemperature', string>>;
 
 customElements.define('check-screen', CheckScreen);
 

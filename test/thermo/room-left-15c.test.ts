@@ -17,12 +17,13 @@ const T_60F = ((60 - 32) * 5) / 9 + 273.15;
 
 /** Reference saturated-liquid density at T, kg/m³: quadratic through the three nearest rows (5 K apart). */
 function refRhoL(id: string, T: number): number {
-  const rows = readTable(`sat/${id}.csv`).map((r) => [Number(r.T_K), Number(r.rhoL_kg_m3)]);
-  const i = rows.findIndex(([t]) => Math.abs(t! - T_15C) < 1e-9);
-  const [[x0, y0], [x1, y1], [x2, y2]] = [rows[i - 1]!, rows[i]!, rows[i + 1]!] as [
-    number,
-    number,
-  ][];
+  const rows = readTable(`sat/${id}.csv`).map(
+    (r) => [Number(r.T_K), Number(r.rhoL_kg_m3)] as [number, number],
+  );
+  const i = rows.findIndex(([t]) => Math.abs(t - T_15C) < 1e-9);
+  const [x0, y0] = rows[i - 1]!;
+  const [x1, y1] = rows[i]!;
+  const [x2, y2] = rows[i + 1]!;
   const l0 = ((T - x1) * (T - x2)) / ((x0 - x1) * (x0 - x2));
   const l1 = ((T - x0) * (T - x2)) / ((x1 - x0) * (x1 - x2));
   const l2 = ((T - x0) * (T - x1)) / ((x2 - x0) * (x2 - x1));
