@@ -292,6 +292,15 @@ export class CheckResults extends LitElement {
     >`;
   }
 
+  /** A room-left volume row; over the limit it reads "over the limit by", never a negative room. */
+  private _roomRow(testid: string, when: string, m3: number): TemplateResult {
+    const over = m3 < 0;
+    return html`<dt>${over ? 'Over the limit by, as liquid' : 'Room left as liquid'} ${when}</dt>
+      <dd class=${over ? 'over' : ''} data-testid=${testid} data-si=${String(m3)}>
+        ${this.display.format('volume', Math.abs(m3), over ? 'up' : 'down')}
+      </dd>`;
+  }
+
   /** Room left as liquid at the base temperature and as mass, or how far over the limit. */
   private _roomLeft(r: TankCheckResult): TemplateResult {
     const d = this.display;
@@ -410,16 +419,11 @@ export class CheckResults extends LitElement {
         <dl>
           <dt>Maximum filling density</dt>
           <dd>${this._maxFd(r)}</dd>
-          <dt>Room left as liquid now</dt>
-          <dd>${this._fig('room-left-volume', 'volume', f.roomLeftVolume, 'down')}</dd>
-          <dt>Room left as liquid at ${base60(d)}</dt>
-          <dd>${this._fig('room-left-volume-60f', 'volume', f.roomLeftVolumeAt60F, 'down')}</dd>
+          ${this._roomRow('room-left-volume', 'now', f.roomLeftVolume)}
+          ${this._roomRow('room-left-volume-60f', `at ${base60(d)}`, f.roomLeftVolumeAt60F)}
           ${
             d.unit('temperature') === 'C'
-              ? html`<dt>Room left as liquid at 15 °C</dt>
-                  <dd>
-                    ${this._fig('room-left-volume-15c', 'volume', f.roomLeftVolumeAt15C, 'down')}
-                  </dd>`
+              ? this._roomRow('room-left-volume-15c', 'at 15 °C', f.roomLeftVolumeAt15C)
               : nothing
           }
           ${
