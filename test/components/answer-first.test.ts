@@ -1,0 +1,179 @@
+/// <reference types="mocha" />
+// <check-screen>: the answer first (the key bar above the readings with the engine's stop-at
+// percent and room left at 60 °F / 15 °C), "over the limit by" for an over-full tank, and
+// readings with a time (a reopened tank's last check offered for reuse, old readings marked).
+// The figures are compared with `checkTank` for the same input (kind: identity — the screen adds
+// only formatting). The tank and the times are made-up fixtures, not demo data.
+import { expect, fixture, html, oneEvent } from '@open-wc/testing';
+import '../../components/check-screen.js';
+import type { CheckScreen } from '../../components/check-screen.js';
+import type { ReadingsChange } from '../../components/check-form.js';
+import {
+  DEFAULT_SETTINGS,
+  emptyReadings,
+  type Readings,
+  type Settings,
+  type TankRecord,
+} from '../../components/types.js';
+import { DisplayUnits } from '../../components/display.js';
+import { buildCheckInput } from '../../components/check-input.js';
+import type { LastReadings } from '../../components/reopen.js';
+import { checkTank } from '../../thermo/index.js';
+import { toSI } from '../../thermo/units.js';
+import { byTestId, deep, settleAll } from './dom.js';
+
+const METRIC: Settings = {
+  ...DEFAULT_SETTINGS,
+  units: { pressure: 'kPag', temperature: 'C', volume: 'L', mass: 'kg', length: 'cm' },
+};
+
+const tank: TankRecord = {
+  id: 'fixture',
+  site: 'Test bench',
+  name: 'Fixture tank',
+  notes: '',
+  nameplate: {
+    waterCapacity: toSI('volume', 500, 'usgal'),
+    designPressure: toSI('gaugePressure', 250, 'psig'),
+    placement: 'aboveground',
+    containerClass: 'storage',
+  },
+  productId: 'propane',
+  demo: false,
+  createdAt: '2024-01-01T00:00:00.000Z',
+  updatedAt: '2024-01-01T00:00:00.000Z',
+};
+
+function readings(patch: Partial<Readings> = {}): Readings {
+  return {
+    ...emptyReadings(5),
+    liquidTemperature: toSI('temperature', 18, 'C'),
+    gaugePercent: 50,
+    ...patch,
+  };
+}
+
+async function screen(
+  r: Readings,
+  settings: Settings,
+  last: LastReadings | null = null,
+): Promise<CheckScreen> {
+  const el = await fixture<CheckScreen>(
+    html`<check-screen
+      .tank=${tank}
+      .settings=${settings}
+      .readings=${r}
+      .last=${last}
+    ></check-screen>`,
+  );
+  await settleAll(el);
+  return el;
+}
+
+const si = (el: CheckScreen, id: string) => Number(byTestId(el, id).dataset.si);
+
+describe('check-screen: the answer first', () => {
+  for (const [name, settings] of [
+    ['US units', DEFAULT_SETTINGS],
+    ['metric units', METRIC],
+  ] as const) {
+    it(`the key bar shows checkTank’s stop-at percent and room left (${name})`, async () => {
+      const r = readings();
+      const el = await screen(r, settings);
+      const expected = checkTank(buildCheckInput(tank, r, settings).input!);
+      const metric = settings.units.temperature === 'C';
+      const room = metric
+        ? expected.fillLimit.roomLeftVolumeAt15C
+        : expected.fillLimit.roomLeftVolumeAt60F;
+      expect(si(el, 'key-stop-percent')).to.equal(expected.fillLimit.stopAtGaugePercent);
+      expect(si(el, 'key-room-left-volume')).to.equal(room);
+      const d = DisplayUnits.fromSettings(settings);
+      expect(byTestId(el, 'key-room-left-volume').textContent).to.equal(
+        d.format('volume', room, 'down'),
+      );
+      expect(byTestId(el, 'key-bar').textContent).to.contain(metric ? '15 °C' : '60 °F');
+    });
+  }
+
+  it('the key bar comes before the readings and sticks to the top of the screen', async () => {
+    const el = await screen(readings(), DEFAULT_SETTINGS);
+    const bar = el.shadowRoot!.querySelector('.keybar')!;
+    const form = el.shadowRoot!.querySelector('check-form')!;
+    expect(bar.compareDocumentPosition(form) & Node.DOCUMENT_POSITION_FOLLOWING).to.not.equal(0);
+    const style = getComputedStyle(bar);
+    expect(style.position).to.equal('sticky');
+    expect(style.top).to.equal('0px');
+  });
+
+  it('an over-full tank reads “over the limit by”, never a negative room left', async () => {
+    const r = readings({ gaugePercent: 96 });
+    const el = await screen(r, DEFAULT_SETTINGS);
+    const expected = checkTank(buildCheckInput(tank, r, DEFAULT_SETTINGS).input!);
+    expect(expected.fillLimit.roomLeftMass).to.be.lessThan(0);
+    expect(si(el, 'key-room-left-volume')).to.equal(expected.fillLimit.roomLeftVolumeAt60F);
+    expect(byTestId(el, 'key-bar').textContent).to.contain('Over the limit by');
+    for (const id of ['key-room-left-volume', 'room-left-volume', 'room-left-volume-60f'])
+      expect(byTestId(el, id).textContent, id).not.to.match(/[-−]\s*\d/);
+    const all = deep(el, '[data-testid="results"]')!.textContent!.replace(/\s+/g, ' ');
+    expect(all).not.to.match(/room left[^.]*[-−]\d/i);
+    expect(all).to.contain('Over the limit by, as liquid now');
+    expect(all).not.to.contain('Room left as liquid');
+  });
+
+  it('the two figures that could be confused say which one to act on', async () => {
+    const el = await screen(readings(), DEFAULT_SETTINGS);
+    expect(byTestId(el, 'volumetric-note').textContent).to.contain('act on the stop-at figure');
+    // The rule's 42 % is shown as 42 %, not as the mass limit's 41.9 %.
+    expect(byTestId(el, 'max-filling-density').textContent).to.equal('42.0 %');
+  });
+
+  it('the standing caution is short on screen with the whole text one tap away', async () => {
+    const r = readings();
+    const el = await screen(r, DEFAULT_SETTINGS);
+    const expected = checkTank(buildCheckInput(tank, r, DEFAULT_SETTINGS).input!);
+    const box = byTestId(el, 'standing-caution') as HTMLDetailsElement;
+    expect(box.tagName).to.equal('DETAILS');
+    expect(box.querySelector('summary')!.textContent).to.contain('site procedures');
+    expect(box.textContent).to.contain(expected.standingCaution);
+  });
+});
+
+describe('check-screen: readings have a time', () => {
+  it('typing a measured reading stamps the readings with the time', async () => {
+    const el = await screen(emptyReadings(5), DEFAULT_SETTINGS);
+    const input = byTestId(el, 'liquid-temperature') as HTMLInputElement;
+    const before = Date.now();
+    const ev = oneEvent(el, 'readings-change') as Promise<CustomEvent<ReadingsChange>>;
+    input.value = '60';
+    input.dispatchEvent(new Event('input', { bubbles: true, composed: true }));
+    const { detail } = await ev;
+    const at = Date.parse(detail.readings.takenAt!);
+    expect(at).to.be.within(before, Date.now());
+  });
+
+  it('blank readings show the last check, dated; one tap reuses it and marks its age', async () => {
+    const at = new Date(Date.now() - 3 * 86_400_000).toISOString();
+    const old = readings({ takenAt: at });
+    const last: LastReadings = { readings: old, at, source: 'draft', summary: null };
+    const el = await screen(emptyReadings(5), DEFAULT_SETTINGS, last);
+    const card = byTestId(el, 'last-check');
+    expect(card.dataset.at).to.equal(at);
+    expect(card.textContent).to.contain('Last check,');
+    expect(card.textContent).to.contain('3 days ago');
+    expect(deep(el, '[data-testid="key-stop-percent"]')).to.equal(null);
+    byTestId(el, 'last-check-reuse').click();
+    await settleAll(el);
+    const expected = checkTank(buildCheckInput(tank, old, DEFAULT_SETTINGS).input!);
+    expect(si(el, 'key-stop-percent')).to.equal(expected.fillLimit.stopAtGaugePercent);
+    expect(byTestId(el, 'key-stale').textContent).to.contain('3 days old');
+    expect(byTestId(el, 'readings-age').textContent).to.contain('not now');
+    expect(deep(el, '[data-testid="last-check"]')).to.equal(null);
+  });
+
+  it('readings typed during this visit are not marked old', async () => {
+    const r = readings({ takenAt: new Date(Date.now() - 60_000).toISOString() });
+    const el = await screen(r, DEFAULT_SETTINGS);
+    expect(deep(el, '[data-testid="key-stale"]')).to.equal(null);
+    expect(deep(el, '[data-testid="readings-age"]')).to.equal(null);
+  });
+});
