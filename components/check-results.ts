@@ -260,12 +260,6 @@ export class CheckResults extends LitElement {
     </details>`;
   }
 
-  /** Brings the cautions into view (the key bar's level badge). */
-  showCautions(): void {
-    const el = this.renderRoot.querySelector<HTMLElement>('#h-cautions');
-    el?.scrollIntoView({ block: 'start' });
-  }
-
   private _cautions(list: Caution[]): TemplateResult {
     const ranked = list.filter((c) => c.code !== 'standing');
     if (ranked.length === 0)

@@ -185,13 +185,6 @@ export class CheckScreen extends LitElement {
         z-index: 5;
         margin: 0 -0.75rem 0.75rem;
       }
-      .keybar .small {
-        background: var(--ink);
-        color: var(--paper);
-        font-size: 0.75em;
-        padding: 0 0.75rem 0.3rem;
-        margin: 0;
-      }
       .stale {
         border: var(--border-width) dashed var(--ink);
         border-radius: 0.5rem;
@@ -339,11 +332,6 @@ export class CheckScreen extends LitElement {
     this._status = '';
   }
 
-  /** Scrolls the cautions into view (from the level badge of the key bar). */
-  private _showCautions(): void {
-    this.renderRoot.querySelector('check-results')?.showCautions();
-  }
-
   private _replaceReadings(next: Readings): void {
     const cleared = next;
     this._readings = cleared;
@@ -422,9 +410,7 @@ export class CheckScreen extends LitElement {
         .display=${this._display}
         .message=${message}
         .stale=${stale}
-        @show-cautions=${this._showCautions}
       ></key-bar>
-      <p class="small">Model figures: site procedures and the code come first.</p>
     </div>`;
   }
 

@@ -82,6 +82,10 @@ export class KeyBar extends LitElement {
         margin-top: 0.15rem;
         overflow-wrap: anywhere;
       }
+      .standing {
+        font-size: 0.75em;
+        margin-top: 0.15rem;
+      }
       .stale-note {
         font-weight: 800;
         margin: 0 0 0.2rem;
@@ -134,13 +138,8 @@ export class KeyBar extends LitElement {
         Peak day ${d.format('gaugePressure', k.peakPressure, 'up')} · ${relief}
         ${
           top
-            ? html`<a
-                class="level ${top.level}"
-                data-testid="key-level"
-                href="#cautions"
-                @click=${this._toCautions}
-                >${top.level}</a
-              >`
+            ? html`<span class="level ${top.level}" data-testid="key-level">${top.level}</span
+                ><span class="visually-hidden">: see the cautions below the readings</span>`
             : nothing
         }
       </p>
@@ -148,16 +147,12 @@ export class KeyBar extends LitElement {
     `;
   }
 
-  private _toCautions(e: Event): void {
-    e.preventDefault();
-    this.dispatchEvent(new CustomEvent('show-cautions', { bubbles: true, composed: true }));
-  }
-
   override render() {
     const r = this.result;
     return html`<div class="bar ${this.stale ? 'stale' : ''}" data-testid="key-bar">
       ${this.stale ? html`<p class="stale-note" data-testid="key-stale">Old readings (${this.stale}): figures for then, not now.</p>` : nothing}
       ${r ? this._figures(r) : html`<p data-testid="key-empty">${this.message || 'No figures yet.'}</p>`}
+      <p class="standing">Model figures: site procedures and the code come first.</p>
     </div>`;
   }
 }
