@@ -57,7 +57,7 @@ export class KeyBar extends LitElement {
       }
       .figs {
         display: grid;
-        grid-template-columns: auto minmax(0, 1fr);
+        grid-template-columns: minmax(0, 1fr) minmax(0, 1.5fr);
         gap: 0 1rem;
         margin: 0;
       }
@@ -67,7 +67,7 @@ export class KeyBar extends LitElement {
       }
       .big {
         display: block;
-        font-size: 1.3em;
+        font-size: 1.25em;
         font-weight: 800;
         line-height: 1.15;
         font-variant-numeric: tabular-nums;

@@ -15,7 +15,7 @@ import { baseStyles } from './styles.js';
 import { DisplayUnits } from './display.js';
 import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
-import { productChoices, type ProductGroup } from './products.js';
+import { productChoices, productLabel, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
 import type {
   ContainerClass,
@@ -276,6 +276,14 @@ export class TankForm extends LitElement {
           >
             ${this._productOptions()}
           </select>
+          ${
+            // A closed select cuts a long name off on a narrow phone: the whole name, below it.
+            productLabel(d.productId).length > 20
+              ? html`<p class="hint" data-testid="tank-product-name">
+                  ${productLabel(d.productId)}
+                </p>`
+              : nothing
+          }
         </div>
 
         <fieldset>
@@ -319,8 +327,10 @@ export class TankForm extends LitElement {
           ></number-field>
           <div class="field">
             <label for="placement">Placement</label>
+            <p class="hint" id="placement-hint">A partly buried tank counts as aboveground.</p>
             <select
               id="placement"
+              aria-describedby="placement-hint"
               data-testid="tank-placement"
               @change=${(e: Event) => this._setNameplate({ placement: (e.target as HTMLSelectElement).value as Placement })}
             >
@@ -328,7 +338,7 @@ export class TankForm extends LitElement {
                 value="aboveground"
                 ?selected=${(np.placement ?? 'aboveground') === 'aboveground'}
               >
-                Aboveground (also partly buried)
+                Aboveground
               </option>
               <option value="underground" ?selected=${np.placement === 'underground'}>
                 Underground
@@ -337,8 +347,10 @@ export class TankForm extends LitElement {
           </div>
           <div class="field">
             <label for="class">Container class (picks the filling rule)</label>
+            <p class="hint" id="class-hint">Storage: a stationary ASME container.</p>
             <select
               id="class"
+              aria-describedby="class-hint"
               data-testid="tank-class"
               @change=${(e: Event) => this._setNameplate({ containerClass: (e.target as HTMLSelectElement).value as ContainerClass })}
             >
@@ -463,7 +475,7 @@ export class TankForm extends LitElement {
 }
 
 const CLASSES: [ContainerClass, string][] = [
-  ['storage', 'Storage container (stationary, ASME)'],
+  ['storage', 'Storage (ASME)'],
   ['cylinder', 'DOT cylinder'],
   ['cargo', 'Cargo tank'],
   ['portable', 'Portable tank'],
