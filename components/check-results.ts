@@ -18,13 +18,14 @@
  * `caution` (with `data-level` and `data-code`), `results-missing`, `results-error`,
  * `results-announcer`. Each figure carries its raw SI value in `data-si`.
  */
-import { LitElement, html, css, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { LitElement, html, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { checkResultsStyles } from './check-results-styles.js';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
 import type { Caution, TankCheckResult, TankPhase } from '../thermo/check/types.js';
-import { T_60F_K } from '../thermo/constants.js';
 import { baseLabel, keyFigures } from './key-figures.js';
+import { base60, fillLimitDetail } from './results-limit.js';
 
 /** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
 export const STANDING_FALLBACK =
@@ -82,118 +83,7 @@ export class CheckResults extends LitElement {
     this._announce = '';
   }
 
-  static override styles = [
-    baseStyles,
-    levelStyles,
-    css`
-      .key {
-        display: grid;
-        grid-template-columns: repeat(auto-fit, minmax(14rem, 1fr));
-        gap: 0.75rem;
-        margin-bottom: 1rem;
-      }
-      .card {
-        border: var(--border-width) solid var(--ink);
-        border-radius: 0.6rem;
-        padding: 0.75rem;
-        background: var(--paper);
-        min-width: 0;
-      }
-      .card h3 {
-        font-size: 1rem;
-        margin: 0 0 0.25rem;
-      }
-      .big {
-        font-size: 1.6em;
-        font-weight: 800;
-        line-height: 1.2;
-        overflow-wrap: anywhere;
-      }
-      dl {
-        margin: 0;
-        display: grid;
-        /* A long figure ("exceeded by 1234 psi", a blend's composition) wraps inside its own
-           column instead of running over the label. */
-        grid-template-columns: minmax(0, 1fr) fit-content(55%);
-        gap: 0.25rem 0.75rem;
-      }
-      dt,
-      dd {
-        min-width: 0;
-        overflow-wrap: anywhere;
-      }
-      dd {
-        margin: 0;
-        font-weight: 700;
-        text-align: right;
-        font-variant-numeric: tabular-nums;
-      }
-      .act {
-        font-size: 0.92em;
-        font-weight: 400;
-        text-align: left;
-        grid-column: 1 / -1;
-        margin: 0 0 0.25rem;
-      }
-      .standing {
-        border: var(--border-width) solid var(--ink);
-        border-left-width: 0.6rem;
-        border-radius: 0.4rem;
-        padding: 0.4rem 0.75rem;
-        margin: 0 0 1rem;
-        background: var(--paper-2);
-      }
-      .standing summary {
-        cursor: pointer;
-        min-height: 48px;
-        padding: 0.25rem 0;
-      }
-      .standing summary .more {
-        text-decoration: underline;
-        white-space: nowrap;
-      }
-      .standing p {
-        margin: 0.25rem 0 0.25rem;
-      }
-      .cautions {
-        list-style: none;
-        padding: 0;
-        margin: 0 0 1rem;
-      }
-      .cautions li {
-        border: var(--border-width) solid var(--line);
-        border-radius: 0.4rem;
-        padding: 0.5rem 0.6rem;
-        margin-bottom: 0.5rem;
-        background: var(--paper);
-      }
-      .cautions li .level {
-        margin-right: 0.4rem;
-      }
-      .over {
-        color: var(--danger);
-      }
-      .note {
-        font-size: 0.92em;
-      }
-      section {
-        margin-bottom: 1rem;
-      }
-      .missing {
-        border: var(--border-width) dashed var(--ink);
-        border-radius: 0.5rem;
-        padding: 0.75rem;
-        margin-bottom: 1rem;
-      }
-      @media print {
-        .card,
-        .cautions li,
-        .standing {
-          break-inside: avoid;
-        }
-      }
-    `,
-  ];
+  static override styles = [baseStyles, levelStyles, checkResultsStyles];
 
   protected override updated(changed: PropertyValues<this>): void {
     if (changed.has('result') || changed.has('missing') || changed.has('error')) {
@@ -286,15 +176,6 @@ export class CheckResults extends LitElement {
     >`;
   }
 
-  /** A room-left volume row; over the limit it reads "over the limit by", never a negative room. */
-  private _roomRow(testid: string, when: string, m3: number): TemplateResult {
-    const over = m3 < 0;
-    return html`<dt>${over ? 'Over the limit by, as liquid' : 'Room left as liquid'} ${when}</dt>
-      <dd class=${over ? 'over' : ''} data-testid=${testid} data-si=${String(m3)}>
-        ${this.display.format('volume', Math.abs(m3), over ? 'up' : 'down')}
-      </dd>`;
-  }
-
   /** Room left as liquid at the base temperature and as mass, or how far over the limit. */
   private _roomLeft(r: TankCheckResult): TemplateResult {
     const d = this.display;
@@ -315,7 +196,6 @@ export class CheckResults extends LitElement {
     const f = r.fillLimit;
     const c = r.contents;
     const p = r.peak;
-    const binding = f.limits.find((l) => l.id === f.binding);
     return html`
       <div class="key">
         <div class="card">
@@ -408,48 +288,7 @@ export class CheckResults extends LitElement {
         </dl>
       </section>
 
-      <section aria-labelledby="h-limit">
-        <h3 id="h-limit">Fill limit in detail</h3>
-        <dl>
-          <dt>Maximum filling density</dt>
-          <dd>${this._maxFd(r)}</dd>
-          ${this._roomRow('room-left-volume', 'now', f.roomLeftVolume)}
-          ${this._roomRow('room-left-volume-60f', `at ${base60(d)}`, f.roomLeftVolumeAt60F)}
-          ${
-            d.unit('temperature') === 'C'
-              ? this._roomRow('room-left-volume-15c', 'at 15 °C', f.roomLeftVolumeAt15C)
-              : nothing
-          }
-          ${
-            f.volumetricMaxPercent !== null
-              ? html`<dt>Rule’s volumetric maximum now</dt>
-                  <dd>${formatPercent(f.volumetricMaxPercent, 'down')}</dd>
-                  <dd class="act muted" data-testid="volumetric-note">
-                    The rule’s table figure leaves out the vapour’s mass; act on the stop-at figure,
-                    ${formatPercent(f.stopAtGaugePercent, 'down')}.
-                  </dd>`
-              : nothing
-          }
-        </dl>
-        <p class="note" data-testid="fill-binding" data-si=${f.binding}>
-          The limit that binds:
-          ${binding ? html`${binding.description} <span class="muted">(${binding.citation})</span>` : f.binding}
-        </p>
-        ${
-          f.limits.length > 1
-            ? html`<p class="note">
-                Also considered:
-                ${f.limits
-                  .filter((l) => l.id !== f.binding)
-                  .map(
-                    (l) =>
-                      html`<br />${l.description}: ${d.format('mass', l.maxMass, 'down')}
-                        <span class="muted">(${l.citation})</span>`,
-                  )}
-              </p>`
-            : nothing
-        }
-      </section>
+      ${fillLimitDetail(r, d)}
 
       <section aria-labelledby="h-heat">
         <h3 id="h-heat">Heating</h3>
@@ -467,22 +306,6 @@ export class CheckResults extends LitElement {
 
       ${r.diagnosis ? this._diagnosis(r) : nothing}
     `;
-  }
-
-  /**
-   * The maximum filling density: a table rule's own figure (42 % stays 42 %, never shown as
-   * 41.9 % from the mass rounded down), else the figure of the mass limit rounded down.
-   */
-  private _maxFd(r: TankCheckResult): TemplateResult {
-    const f = r.fillLimit;
-    const binding = f.limits.find((l) => l.id === f.binding);
-    const rule = binding?.kind === 'rule' && binding.modelAllowance === 0;
-    const text = rule
-      ? this.display.format('fraction', binding.fillingDensity, 'nearest')
-      : this.display.format('fraction', f.maxFillingDensity, 'down');
-    return html`<span data-testid="max-filling-density" data-si=${String(f.maxFillingDensity)}
-        >${text}</span
-      >${rule ? html`<span class="muted note"> (the rule’s table figure)</span>` : nothing}`;
   }
 
   private _diagnosis(r: TankCheckResult): TemplateResult {
@@ -547,11 +370,6 @@ export class CheckResults extends LitElement {
       </p>
     `;
   }
-}
-
-/** The trade's base temperature, 60 °F, in the user's unit ("60 °F" or "15.6 °C"). */
-function base60(d: DisplayUnits): string {
-  return d.format('temperature', T_60F_K).replace(/\.0 /, ' ');
 }
 
 function capital(s: string): string {

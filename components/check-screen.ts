@@ -22,8 +22,9 @@
  * `check-status`, `tank-heading`, plus those of <check-form>, <check-results>, <check-chart>
  * and <check-history>.
  */
-import { LitElement, html, css, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { LitElement, html, nothing, type PropertyValues, type TemplateResult } from 'lit';
 import type { TankCheckResult } from '../thermo/check/types.js';
+import { checkScreenStyles } from './check-screen-styles.js';
 import { baseStyles } from './styles.js';
 import { DisplayUnits } from './display.js';
 import './check-form.js';
@@ -33,16 +34,12 @@ import './check-results.js';
 import './check-chart.js';
 import './check-history.js';
 import type { ReadingsChange } from './check-form.js';
-import {
-  errorText,
-  minTemperatureFor,
-  runCheck,
-  summarize,
-  type CheckOutcome,
-} from './check-input.js';
+import { screenErrors, type ScreenErrors } from './check-errors.js';
+import { minTemperatureFor, runCheck, summarize, type CheckOutcome } from './check-input.js';
 import { heatingCurve, type HeatingCurve } from './chart-data.js';
 import { productFor, productLabel } from './products.js';
 import { summaryText } from './summary.js';
+import { shareText } from './share.js';
 import {
   DEFAULT_SETTINGS,
   emptyReadings,
@@ -69,16 +66,6 @@ export interface CheckSaveDetail {
 
 /** Wait after the last edit before the chart is redrawn, ms. */
 const CHART_DELAY_MS = 150;
-
-/** Engine field → reading name used by <check-form>. */
-const FIELD_OF: Record<string, keyof Readings | 'peakTemperature'> = {
-  liquidTemperature: 'liquidTemperature',
-  'contents.gaugePercent': 'gaugePercent',
-  'contents.netMass': 'netMass',
-  'contents.levelHeight': 'levelHeight',
-  gaugePressure: 'gaugePressure',
-  peakTemperature: 'peakTemperature',
-};
 
 export class CheckScreen extends LitElement {
   static override properties = {
@@ -130,90 +117,7 @@ export class CheckScreen extends LitElement {
     this._shareText = '';
   }
 
-  static override styles = [
-    baseStyles,
-    css`
-      .head {
-        display: flex;
-        flex-wrap: wrap;
-        align-items: center;
-        gap: 0 0.5rem;
-        margin-bottom: 0.5rem;
-      }
-      .head h2 {
-        flex: 1 1 12rem;
-        font-size: 1.15rem;
-        margin: 0;
-        overflow-wrap: anywhere;
-      }
-      .plate {
-        flex: 1 1 100%;
-        color: var(--muted);
-        font-size: 0.85em;
-        margin: 0.2rem 0 0;
-        overflow-wrap: anywhere;
-      }
-      .layout {
-        display: grid;
-        gap: 1rem;
-      }
-      @media (min-width: 60rem) {
-        .layout {
-          grid-template-columns: minmax(18rem, 26rem) minmax(0, 1fr);
-          align-items: start;
-        }
-      }
-      .actions {
-        display: flex;
-        flex-wrap: wrap;
-        gap: 0.5rem;
-        margin: 0.5rem 0 1rem;
-      }
-      .actions button {
-        flex: 1 1 8rem;
-      }
-      .status {
-        min-height: 1.5em;
-        font-weight: 700;
-      }
-      textarea {
-        min-height: 10rem;
-      }
-      .keybar {
-        position: sticky;
-        top: 0;
-        z-index: 5;
-        margin: 0 -0.75rem 0.75rem;
-      }
-      .stale {
-        border: var(--border-width) dashed var(--ink);
-        border-radius: 0.5rem;
-        padding: 0.5rem 0.75rem;
-        margin: 0 0 0.75rem;
-        font-weight: 700;
-        background: var(--paper-2);
-      }
-      .print-only {
-        display: none;
-      }
-      @media print {
-        .print-only {
-          display: block;
-        }
-      }
-      @media print {
-        .layout {
-          display: block;
-        }
-        check-form,
-        check-history,
-        .actions,
-        .keybar {
-          display: none;
-        }
-      }
-    `,
-  ];
+  static override styles = [baseStyles, checkScreenStyles];
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('settings')) this._display = DisplayUnits.fromSettings(this.settings);
@@ -295,25 +199,11 @@ export class CheckScreen extends LitElement {
     const o = this._outcome;
     if (!o?.result) return;
     const text = summaryText(this.tank, this._readings, o.result, this._display);
-    const title = `Tank check — ${this.tank.name}`;
     this._shareText = '';
-    try {
-      if (typeof navigator.share === 'function') {
-        await navigator.share({ title, text });
-        this._status = 'Summary shared.';
-        return;
-      }
-    } catch (e) {
-      if (e instanceof DOMException && e.name === 'AbortError') return; // the user closed the share sheet
-    }
-    try {
-      await navigator.clipboard.writeText(text);
-      this._status = 'Summary copied. Paste it into a message or a report.';
-    } catch {
-      // No share sheet and no clipboard: show the text to copy by hand.
-      this._shareText = text;
-      this._status = 'Copy the summary below.';
-    }
+    const done = await shareText(`Tank check — ${this.tank.name}`, text);
+    if (done === null) return; // the user closed the share sheet
+    this._status = done.status;
+    this._shareText = done.byHand ? text : '';
   }
 
   private _print(): void {
@@ -352,24 +242,8 @@ export class CheckScreen extends LitElement {
   }
 
   /** Engine refusals as per-field messages and one line for the results. */
-  private _errors(): { fieldErrors: FieldErrors; error: string } {
-    const o = this._outcome;
-    const fieldErrors: FieldErrors = {};
-    let error = '';
-    if (!this._valid)
-      error = 'A reading above is not valid: fix the marked field to see the figures.';
-    else if (o?.error) {
-      const key = FIELD_OF[o.error.field];
-      // In the user's units when the engine gave the range as numbers.
-      const message = errorText(o.error, this._display);
-      if (key) fieldErrors[key] = `The check cannot use this value: ${message}.`;
-      error = o.error.field.startsWith('tank')
-        ? `The tank’s nameplate has a figure the check cannot use (${message}). Edit the tank to fix it.`
-        : key
-          ? 'The check cannot use a reading: see the message next to the field.'
-          : message;
-    }
-    return { fieldErrors, error };
+  private _errors(): ScreenErrors {
+    return screenErrors(this._outcome, this._valid, this._display);
   }
 
   /** "2 Dec 2026, 14:05, 4 days old" when the readings in use are old, else empty. */
@@ -498,8 +372,6 @@ export class CheckScreen extends LitElement {
       ></check-chart>`;
   }
 }
-
-type FieldErrors = Partial<Record<keyof Readings | 'peakTemperature', string>>;
 
 customElements.define('check-screen', CheckScreen);
 
