@@ -177,3 +177,37 @@ describe('check-screen: readings have a time', () => {
     expect(deep(el, '[data-testid="readings-age"]')).to.equal(null);
   });
 });
+
+describe('check-screen at 320 px', () => {
+  it('a long figure (“exceeded by … psi”, a blend’s name) wraps beside its label, never over it', async () => {
+    // A made-up tank whose relief setting is far below the peak pressure, holding a blend.
+    const low: TankRecord = {
+      ...tank,
+      productId: 'preset:hd5-limit',
+      nameplate: { ...tank.nameplate, designPressure: toSI('gaugePressure', 60, 'psig') },
+    };
+    const r = readings({ liquidTemperature: toSI('temperature', 35, 'C') });
+    const wrap = await fixture<HTMLDivElement>(
+      html`<div style="width: 240px">
+        <check-screen .tank=${low} .settings=${DEFAULT_SETTINGS} .readings=${r}></check-screen>
+      </div>`,
+    );
+    const el = wrap.querySelector('check-screen')!;
+    await settleAll(el);
+    expect(byTestId(el, 'peak-headroom-relief').textContent).to.contain('exceeded by');
+    const results = el.shadowRoot!.querySelector('check-results')!.shadowRoot!;
+    const pairs = [...results.querySelectorAll('dt')].map((dt) => [dt, dt.nextElementSibling!]);
+    expect(pairs.length).to.be.greaterThan(5);
+    for (const [dt, dd] of pairs) {
+      const a = dt!.getBoundingClientRect();
+      const b = dd.getBoundingClientRect();
+      const apart = a.right <= b.left + 0.5 || a.bottom <= b.top + 0.5 || b.bottom <= a.top + 0.5;
+      expect(apart, `${dt!.textContent} | ${dd.textContent}`).to.equal(true);
+      // Text running out of its own box would lie over the other one.
+      for (const cell of [dt!, dd as HTMLElement])
+        expect(cell.scrollWidth, `${cell.textContent} runs out of its box`).to.be.at.most(
+          cell.clientWidth + 1,
+        );
+    }
+  });
+});

@@ -26,6 +26,10 @@ function overlappingPairs(page: Page): Promise<string[]> {
           a.bottom <= b.top + 0.5 ||
           b.bottom <= a.top + 0.5;
         if (!apart) out.push(`${dt.textContent?.trim()} | ${dd.textContent?.trim()}`);
+        // Text running out of its own box lies over the other one.
+        for (const cell of [dt, dd])
+          if (cell.scrollWidth > cell.clientWidth + 1)
+            out.push(`${cell.textContent?.trim()} runs out`);
       }
       for (const el of root.querySelectorAll('*')) if (el.shadowRoot) visit(el.shadowRoot);
     };
