@@ -196,15 +196,17 @@ describe('check-screen at 320 px', () => {
     await settleAll(el);
     expect(byTestId(el, 'peak-headroom-relief').textContent).to.contain('exceeded by');
     const results = el.shadowRoot!.querySelector('check-results')!.shadowRoot!;
-    const pairs = [...results.querySelectorAll('dt')].map((dt) => [dt, dt.nextElementSibling!]);
+    const pairs = [...results.querySelectorAll('dt')].map(
+      (dt) => [dt, dt.nextElementSibling as HTMLElement] as const,
+    );
     expect(pairs.length).to.be.greaterThan(5);
     for (const [dt, dd] of pairs) {
-      const a = dt!.getBoundingClientRect();
+      const a = dt.getBoundingClientRect();
       const b = dd.getBoundingClientRect();
       const apart = a.right <= b.left + 0.5 || a.bottom <= b.top + 0.5 || b.bottom <= a.top + 0.5;
-      expect(apart, `${dt!.textContent} | ${dd.textContent}`).to.equal(true);
+      expect(apart, `${dt.textContent} | ${dd.textContent}`).to.equal(true);
       // Text running out of its own box would lie over the other one.
-      for (const cell of [dt!, dd as HTMLElement])
+      for (const cell of [dt, dd])
         expect(cell.scrollWidth, `${cell.textContent} runs out of its box`).to.be.at.most(
           cell.clientWidth + 1,
         );
