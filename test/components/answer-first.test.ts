@@ -18,6 +18,7 @@ import {
 import { DisplayUnits } from '../../components/display.js';
 import { buildCheckInput } from '../../components/check-input.js';
 import type { LastReadings } from '../../components/reopen.js';
+import { summaryText } from '../../components/summary.js';
 import { checkTank } from '../../thermo/index.js';
 import { toSI } from '../../thermo/units.js';
 import { byTestId, deep, settleAll } from './dom.js';
@@ -179,7 +180,9 @@ describe('check-screen: readings have a time', () => {
 });
 
 describe('check-screen at 320 px', () => {
-  it('a long figure (“exceeded by … psi”, a blend’s name) wraps beside its label, never over it', async () => {
+  it('a long figure (“exceeded by … psi”, a blend’s name) wraps beside its label, never over it', async function () {
+    // A blend's check and heating curve take a few seconds on a loaded machine.
+    this.timeout(60_000);
     // A made-up tank whose relief setting is far below the peak pressure, holding a blend.
     const low: TankRecord = {
       ...tank,
@@ -211,5 +214,22 @@ describe('check-screen at 320 px', () => {
           cell.clientWidth + 1,
         );
     }
+  });
+});
+
+describe('the shared summary', () => {
+  it('leads with the same stop-at percent and room left as the bar, in the user’s units', async () => {
+    const r = readings({ takenAt: '2026-03-10T08:30:00.000Z' });
+    const el = await screen(r, METRIC);
+    const result = checkTank(buildCheckInput(tank, r, METRIC).input!);
+    const d = DisplayUnits.fromSettings(METRIC);
+    const text = summaryText(tank, r, result, d);
+    const room = byTestId(el, 'key-room-left-volume').textContent!.trim();
+    const stop = byTestId(el, 'key-stop-percent').textContent!.trim();
+    expect(text).to.contain(`Stop at or below ${stop} on the float gauge`);
+    expect(text).to.contain(`Room left ${room} as liquid at 15 °C`);
+    expect(room).to.equal(d.format('volume', result.fillLimit.roomLeftVolumeAt15C, 'down'));
+    expect(text).to.contain('readings taken');
+    expect(text).not.to.match(/you may|safe to fill/i);
   });
 });
