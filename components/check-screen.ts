@@ -137,10 +137,33 @@ export class CheckScreen extends LitElement {
     else delete this.dataset.checkInput;
   }
 
+  override connectedCallback(): void {
+    super.connectedCallback();
+    const bar = this.renderRoot?.querySelector('.keybar');
+    if (bar) this._barObserver.observe(bar);
+  }
+
+  protected override firstUpdated(): void {
+    const bar = this.renderRoot.querySelector('.keybar');
+    if (bar) this._barObserver.observe(bar);
+  }
+
   override disconnectedCallback(): void {
     super.disconnectedCallback();
     clearTimeout(this._chartTimer);
+    this._barObserver.disconnect();
+    document.documentElement.style.removeProperty('scroll-padding-top');
   }
+
+  /**
+   * The page scrolls a focused field (and anything else brought into view) below the sticky key
+   * bar, not under it: the bar's height becomes the page's scroll padding at the top.
+   */
+  private readonly _barObserver = new ResizeObserver(() => {
+    const bar = this.renderRoot.querySelector<HTMLElement>('.keybar');
+    if (bar)
+      document.documentElement.style.setProperty('scroll-padding-top', `${bar.offsetHeight + 8}px`);
+  });
 
   /** The current result (for tests and the shell). */
   get outcome(): CheckOutcome | null {

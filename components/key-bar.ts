@@ -57,12 +57,12 @@ export class KeyBar extends LitElement {
       }
       .figs {
         display: grid;
-        grid-template-columns: minmax(0, 1fr) minmax(0, 1.5fr);
+        grid-template-columns: auto minmax(0, 1fr);
         gap: 0 1rem;
         margin: 0;
       }
       .label {
-        font-size: 0.8em;
+        font-size: 0.75em;
         font-weight: 600;
       }
       .big {
@@ -74,7 +74,13 @@ export class KeyBar extends LitElement {
         overflow-wrap: anywhere;
       }
       .sub {
-        font-size: 0.8em;
+        font-size: 0.75em;
+      }
+      @media (max-width: 22.5rem) {
+        /* Keeps "1234.5 US gal" on one line on a 320 px phone. */
+        .big {
+          font-size: 1.1em;
+        }
       }
       .peak {
         font-size: 0.8em;
@@ -107,9 +113,10 @@ export class KeyBar extends LitElement {
     const top = r.cautions.find((c) => c.code !== 'standing');
     const relief =
       k.headroomToRelief < 0
-        ? html`relief setting exceeded by
-          ${d.format('pressureDifference', -k.headroomToRelief, 'up')}`
-        : html`headroom to relief ${d.format('pressureDifference', k.headroomToRelief, 'down')}`;
+        ? html`<strong
+            >${d.format('pressureDifference', -k.headroomToRelief, 'up')} over relief</strong
+          >`
+        : html`${d.format('pressureDifference', k.headroomToRelief, 'down')} to relief`;
     const round = k.over ? 'up' : 'down';
     return html`
       <div class="figs" role="group" aria-label="Key figures">
@@ -118,16 +125,15 @@ export class KeyBar extends LitElement {
           <span class="big" data-testid="key-stop-percent" data-si=${String(k.stopAtPercent)}
             >${formatPercent(k.stopAtPercent, 'down')}</span
           >
-          <div class="sub">on the float gauge</div>
+          <div class="sub">float gauge</div>
         </div>
         <div>
-          <div class="label">
-            ${k.over ? 'Over the limit by' : 'Room left'} · liquid at ${baseLabel(d)}
-          </div>
+          <div class="label">${k.over ? 'Over the limit by' : 'Room left'}</div>
           <span class="big" data-testid="key-room-left-volume" data-si=${String(k.roomLeftVolume)}
             >${d.format('volume', Math.abs(k.roomLeftVolume), round)}</span
           >
           <div class="sub">
+            liquid at ${baseLabel(d)} ·
             <span data-testid="key-room-left-mass" data-si=${String(k.roomLeftMass)}
               >${d.format('mass', Math.abs(k.roomLeftMass), round)}</span
             >
@@ -135,7 +141,7 @@ export class KeyBar extends LitElement {
         </div>
       </div>
       <p class="peak" data-testid="key-peak" data-si=${String(k.headroomToRelief)}>
-        Peak day ${d.format('gaugePressure', k.peakPressure, 'up')} · ${relief}
+        Peak ${d.format('gaugePressure', k.peakPressure, 'up')} · ${relief}
         ${
           top
             ? html`<span class="level ${top.level}" data-testid="key-level">${top.level}</span
