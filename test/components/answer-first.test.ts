@@ -186,16 +186,20 @@ describe('check-screen at 320 px', () => {
     // A made-up tank whose relief setting is far below the peak pressure, holding a blend.
     const low: TankRecord = {
       ...tank,
-      productId: 'preset:hd5-limit',
+      productId: 'preset:pb-50-50',
       nameplate: { ...tank.nameplate, designPressure: toSI('gaugePressure', 60, 'psig') },
     };
     const r = readings({ liquidTemperature: toSI('temperature', 35, 'C') });
-    const wrap = await fixture<HTMLDivElement>(
-      html`<div style="width: 240px">
-        <check-screen .tank=${low} .settings=${DEFAULT_SETTINGS} .readings=${r}></check-screen>
-      </div>`,
+    // The element itself is the fixture (a plain wrapper would wait for an animation frame,
+    // which a background tab never gives).
+    const el = await fixture<CheckScreen>(
+      html`<check-screen
+        style="width: 240px"
+        .tank=${low}
+        .settings=${DEFAULT_SETTINGS}
+        .readings=${r}
+      ></check-screen>`,
     );
-    const el = wrap.querySelector('check-screen')!;
     await settleAll(el);
     expect(byTestId(el, 'peak-headroom-relief').textContent).to.contain('exceeded by');
     const results = el.shadowRoot!.querySelector('check-results')!.shadowRoot!;
