@@ -24,7 +24,8 @@
  * every ln φ_i equally in all phases and so leaves equilibrium unchanged; the other two terms
  * are volume corrections applied after equilibrium (a "density correction": volumes are not
  * derivable from the same Helmholtz energy as the fugacities). The model's p–v isotherms
- * stay monotone on each branch (checked in test/thermo/volume-correction.test.ts).
+ * stay monotone on each branch (checked in test/thermo/identities.test.ts, "pressure rises
+ * with density along an isotherm").
  */
 
 export const SHIFT_EXPONENTS: readonly number[] = [0.35, 0.5, 0.75, 1, 2];
