@@ -4,11 +4,10 @@
  * the standing caution; never worded as permission.
  */
 import { DisplayUnits, formatPercent } from './display.js';
-import { STANDING_FALLBACK, phaseWords } from './check-results.js';
+import { phaseWords } from './check-results.js';
 import { stopPlace } from './fill-words.js';
 import { cautionText } from './messages.js';
-import { productLabel } from './products.js';
-import type { CheckRecord, Readings, TankRecord } from './types.js';
+import type { Readings, TankRecord } from './types.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
 import { keyFigures, keyWords } from './key-figures.js';
 import { whenText } from './reopen.js';
@@ -74,28 +73,4 @@ function headroom(pa: number, d: DisplayUnits): string {
   return pa < 0
     ? `exceeded by ${d.format('pressureDifference', -pa, 'up')}`
     : d.format('pressureDifference', pa, 'down');
-}
-
-/** A summary of a saved check (from its stored key figures). */
-export function savedSummaryText(
-  tank: TankRecord | undefined,
-  c: CheckRecord,
-  d: DisplayUnits,
-): string {
-  const s = c.summary;
-  const standing = s.cautions.find((x) => x.code === 'standing')?.message ?? STANDING_FALLBACK;
-  return [
-    `Tank check — ${tank?.name ?? 'deleted tank'} · ${new Date(c.at).toLocaleString()}`,
-    `Product: ${c.productLabel || (tank ? productLabel(tank.productId) : '')}`,
-    ...readingsLines(c.readings, d),
-    `Fill limit: ${d.format('mass', s.maxMass, 'down')}; stop at or below ${formatPercent(s.stopAtGaugePercent, 'down')} on the float gauge (at the liquid temperature of then)`,
-    s.roomLeftMass < 0
-      ? `Over the limit by ${d.format('mass', -s.roomLeftMass, 'up')}`
-      : `Room left: ${d.format('mass', s.roomLeftMass, 'down')}`,
-    `Peak day: ${d.format('gaugePressure', s.peakPressure, 'up')}`,
-    ...s.cautions
-      .filter((x) => x.code !== 'standing')
-      .map((x) => `- ${x.level.toUpperCase()}: ${x.message}`),
-    standing,
-  ].join('\n');
 }

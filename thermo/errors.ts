@@ -96,8 +96,3 @@ function formatNumber(x: number): string {
     ? String(Number(x.toPrecision(6)))
     : x.toExponential(4);
 }
-
-/** Throws unless `x` is a finite number. */
-export function requireFinite(field: string, x: unknown, range: string): asserts x is number {
-  if (typeof x !== 'number' || !Number.isFinite(x)) throw new InputError(field, range, x);
-}

@@ -196,4 +196,18 @@ describe('check-screen', () => {
     for (const banned of ['safe to fill', 'ok to fill', 'okay to fill', 'go ahead', 'you may fill'])
       expect(text).not.to.contain(banned);
   });
+
+  it('check-screen takes the peak at the forecast air temperature plus the sun allowance', async () => {
+    // Worked by hand: 30 °C forecast air + 5 K sun allowance = 273.15 + 35 = 308.15 K.
+    const el = await fixture<CheckScreen>(
+      html`<check-screen
+        .tank=${tank}
+        .settings=${settings}
+        .readings=${readings()}
+      ></check-screen>`,
+    );
+    await settle(el);
+    const used = JSON.parse(el.dataset.checkInput!) as { peakTemperature: number };
+    expect(Math.abs(used.peakTemperature - 308.15)).to.be.below(1e-9);
+  });
 });

@@ -4,7 +4,12 @@
  */
 import { expect } from 'vitest';
 
-export type CheckKind = 'published' | 'identity' | 'regression';
+/**
+ * published: a figure from outside the project the code was not fitted to; fitted: a reference
+ * point the model's parameters were fitted to (shows the fit, not a prediction; held-out points
+ * are `published`); identity: a relation the results must satisfy; regression: a pinned value.
+ */
+export type CheckKind = 'published' | 'fitted' | 'identity' | 'regression';
 
 export interface Check {
   what: string;

@@ -5,15 +5,22 @@
  */
 import { describe, expect, it } from 'vitest';
 import { checkTank, type TankCheckInput } from '../../thermo/index.js';
-import { MODEL_ALLOWANCE } from '../../thermo/rules/allowance.js';
+import { PSI_PA as PSI, STANDARD_ATMOSPHERE_PA, toSI } from '../../thermo/units.js';
 
-const GAL = 0.003785411784;
-const PSI = 6894.757;
-const F = (f: number) => ((f - 32) * 5) / 9 + 273.15;
+const F = (f: number) => toSI('temperature', f, 'F');
+// The allowances as the README states them (accuracy targets: p_sat 0.5 %; limits of validity: a
+// liquid-full peak pressure raised by 10 %), written here rather than read from
+// thermo/rules/allowance.ts, so that a changed or dropped allowance fails this test.
+const VAPOUR_PRESSURE_ALLOWANCE = 0.005;
+const LIQUID_FULL_ALLOWANCE = 0.1;
 
 function input(gaugePercent: number, peakF: number): TankCheckInput {
   return {
-    tank: { waterCapacity: 500 * GAL, designPressure: 250 * PSI, reliefSetPressure: 250 * PSI },
+    tank: {
+      waterCapacity: toSI('volume', 500, 'usgal'),
+      designPressure: 250 * PSI,
+      reliefSetPressure: 250 * PSI,
+    },
     product: 'propane',
     liquidTemperature: F(60),
     contents: { gaugePercent },
@@ -25,7 +32,7 @@ describe('checkTank peak headroom', () => {
   it('takes the headroom from the peak pressure raised by 0.5 % while two-phase', () => {
     const r = checkTank(input(60, 100));
     expect(r.peak.phase).toBe('two-phase');
-    const raised = r.peak.pAbsolute * (1 + MODEL_ALLOWANCE.vapourPressure) - 101_325;
+    const raised = r.peak.pAbsolute * (1 + VAPOUR_PRESSURE_ALLOWANCE) - STANDARD_ATMOSPHERE_PA;
     // floored to the engine's pressure step (at most 100 Pa here): identity within that step.
     expect(Math.abs(250 * PSI - raised - r.peak.headroomToDesign)).toBeLessThan(100);
     expect(r.peak.headroomToDesign).toBeLessThanOrEqual(250 * PSI - raised);
@@ -34,7 +41,7 @@ describe('checkTank peak headroom', () => {
   it('raises a liquid-full peak pressure by 10 %, the model’s accuracy past liquid-full', () => {
     const r = checkTank(input(95, 110));
     expect(r.peak.phase).toBe('liquid-full');
-    const raised = r.peak.pAbsolute * (1 + MODEL_ALLOWANCE.liquidFullPressure) - 101_325;
+    const raised = r.peak.pAbsolute * (1 + LIQUID_FULL_ALLOWANCE) - STANDARD_ATMOSPHERE_PA;
     expect(r.peak.headroomToDesign).toBeLessThanOrEqual(250 * PSI - raised);
     expect(r.peak.headroomToDesign).toBeLessThan(0);
     const caution = r.cautions.find((c) => c.code === 'design-at-peak');

@@ -8,8 +8,9 @@ import { describe, it } from 'vitest';
 import { saturation } from '../../thermo/index.js';
 import { readTable } from '../reference/measure.js';
 import { checkClose } from '../helpers/check.js';
+import { toSI } from '../../thermo/units.js';
 
-const F = (f: number) => ((f - 32) * 5) / 9 + 273.15;
+const F = (f: number) => toSI('temperature', f, 'F');
 
 describe('saturation(chlorine)', () => {
   it('matches the NIST SRD 134 vapour-pressure table within 1.5 % from 240 to 370 K', () => {

@@ -1,12 +1,22 @@
-/** Thermodynamic consistency of the solvers (identity checks: no external data). */
+/**
+ * Thermodynamic consistency of the solvers (identity checks: no external data). Each check
+ * compares a solver's output with a quantity computed another way (the fugacity function, the
+ * liquid or vapour root at the same state), never with the solver's output rebuilt.
+ */
 import { describe, expect, it } from 'vitest';
-import { closedTank, listFluids, maxDensity, saturation } from '../../thermo/index.js';
+import {
+  closedTank,
+  liquidDensity,
+  listFluids,
+  maxDensity,
+  saturation,
+} from '../../thermo/index.js';
 import { fluidById } from '../../thermo/data/fluids.js';
 import { componentModel } from '../../thermo/eos/model.js';
-import { lnPhiPure } from '../../thermo/eos/cubic.js';
-import { pureSaturation, pureCoefficients } from '../../thermo/solvers/pure.js';
+import { compressibilityRoots, lnPhiPure } from '../../thermo/eos/cubic.js';
+import { pureCoefficients, pureSaturation, pureVolume } from '../../thermo/solvers/pure.js';
 import { resolveProduct } from '../../thermo/product.js';
-import { flashPT, mixtureAtT, saturationPressure } from '../../thermo/solvers/mixture.js';
+import { flashPT, mixtureAtT, phaseAt, saturationPressure } from '../../thermo/solvers/mixture.js';
 import { checkClose } from '../helpers/check.js';
 import { R_J_molK as R } from '../../thermo/constants.js';
 
@@ -73,26 +83,62 @@ describe('pureSaturation', () => {
 });
 
 describe('closedTank', () => {
-  it.each(FLUID_IDS)('%s: two-phase mass balance φ·ρ_L + (1 − φ)·ρ_V = ρ', (id) => {
-    const f = fluidById(id)!;
-    const T = Math.min(0.85 * f.Tc, 320);
-    const s = saturation(id, T);
-    for (const w of [0.1, 0.5, 0.9]) {
-      const rho = s.rhoV + w * (s.rhoL - s.rhoV);
-      const c = closedTank(id, T, rho);
-      expect(c.phase).toBe('two-phase');
-      const back = c.liquidFraction * c.rhoL! + (1 - c.liquidFraction) * c.rhoV!;
-      checkClose({
-        what: 'closed-tank mass balance',
-        input: { id, T, rho },
-        actual: back,
-        expected: rho,
-        rtol: 1e-12,
-        kind: 'identity',
-        source: 'mass balance',
-      });
-    }
-  });
+  it.each(FLUID_IDS)(
+    '%s: two-phase densities equal the liquid and vapour roots at the tank pressure, and balance the mass',
+    (id) => {
+      const f = fluidById(id)!;
+      const m = componentModel(f, 'tuned');
+      const T = Math.min(0.85 * f.Tc, 320);
+      const s = saturation(id, T);
+      for (const w of [0.1, 0.5, 0.9]) {
+        const rho = s.rhoV + w * (s.rhoL - s.rhoV);
+        const c = closedTank(id, T, rho);
+        expect(c.phase).toBe('two-phase');
+        // Independent of the tank solver: the liquid density at (T, p) from `liquidDensity`
+        // and the vapour root of the model at the same (T, p).
+        const rhoL = liquidDensity(id, T, c.p);
+        const rhoV = f.molarMass / pureVolume(m, T, c.p, 'vapour');
+        const input = { id, T, rho };
+        const why = 'p converged to |Δ ln φ| < 1e-10; the roots move little with p';
+        checkClose({
+          what: 'tank ρ_L',
+          input,
+          actual: c.rhoL!,
+          expected: rhoL,
+          rtol: 1e-7,
+          kind: 'identity',
+          source: 'liquidDensity(T, p) at the tank pressure',
+          why,
+        });
+        checkClose({
+          what: 'tank ρ_V',
+          input,
+          actual: c.rhoV!,
+          expected: rhoV,
+          rtol: 1e-6,
+          kind: 'identity',
+          source: 'vapour root of the model at (T, p)',
+          why,
+        });
+        checkClose({
+          what: 'closed-tank mass balance',
+          input,
+          actual: c.liquidFraction * rhoL + (1 - c.liquidFraction) * rhoV,
+          expected: rho,
+          rtol: 1e-6,
+          kind: 'identity',
+          source: 'mass balance with the independent densities',
+        });
+        // The pressure is the vapour pressure: liquid and vapour fugacities equal there.
+        const k = pureCoefficients(m, T);
+        const A = (k.a * c.p) / (R * R * T * T);
+        const B = (k.b * c.p) / (R * T);
+        const roots = compressibilityRoots(m.family, A, B);
+        const d = lnPhiPure(m.family, roots[0]!, A, B) - lnPhiPure(m.family, roots.at(-1)!, A, B);
+        expect(Math.abs(d), `${id} Δ ln φ at the tank pressure`).toBeLessThan(1e-8);
+      }
+    },
+  );
 
   it.each(FLUID_IDS)(
     '%s: pressure rises with density along an isotherm, on both sides of the dome and above Tc',
@@ -148,6 +194,16 @@ describe('flashPT', () => {
     const f = flashPT(mx, r.z, p);
     expect(f.beta).toBeGreaterThan(0);
     expect(f.beta).toBeLessThan(1);
+    // Equal fugacities, from the mixture fugacity function at the flash's phase compositions
+    // (not from the flash's own K): ln(x_i·φ_i^L) = ln(y_i·φ_i^V).
+    const L = phaseAt(mx, p, f.x, 'liquid');
+    const V = phaseAt(mx, p, f.y, 'vapour');
+    expect(V.Z - L.Z, 'distinct liquid and vapour roots').toBeGreaterThan(0.1);
+    r.z.forEach((_, i) => {
+      const lnfL = Math.log(f.x[i]!) + L.lnPhi[i]!;
+      const lnfV = Math.log(f.y[i]!) + V.lnPhi[i]!;
+      expect(Math.abs(lnfL - lnfV), `Δ ln f of component ${i}`).toBeLessThan(1e-8);
+    });
     r.z.forEach((zi, i) => {
       checkClose({
         what: 'flash mass balance',

@@ -4,9 +4,10 @@ import { listFluids, saturation } from '../../thermo/index.js';
 import { fluidById } from '../../thermo/data/fluids.js';
 import { readTable } from '../reference/measure.js';
 import { checkClose } from '../helpers/check.js';
+import { PSI_PA, toSI } from '../../thermo/units.js';
 
-const F = (f: number) => ((f - 32) * 5) / 9 + 273.15;
-const PSI = 6894.757;
+const F = (f: number) => toSI('temperature', f, 'F');
+const PSI = PSI_PA;
 const ATM_PSIA = 14.696;
 
 describe('saturation (default model)', () => {

@@ -11,14 +11,15 @@ import { blendGlide } from '../../thermo/check/blendShift.js';
 import { InputError } from '../../thermo/errors.js';
 import { readTable } from '../reference/measure.js';
 import { checkClose } from '../helpers/check.js';
+import { PSI_PA, STANDARD_ATMOSPHERE_PA, US_GAL_M3, toSI } from '../../thermo/units.js';
 
 const SRC = 'Lemmon & Jacobsen 2004 mixture model, test/reference/blends/';
 const row = (id: string, T: number) => readTable(`blends/${id}.csv`).find((r) => +r.T_K! === T)!;
-const F = (f: number) => ((f - 32) * 5) / 9 + 273.15;
-const PSI = 6894.757293168;
-const ATM = 101325;
+const F = (f: number) => toSI('temperature', f, 'F');
+const PSI = PSI_PA;
+const ATM = STANDARD_ATMOSPHERE_PA;
 /** 50 lb of water at 60 °F (8.32828 lb/US gal): a common recovery-cylinder size. */
-const WC_50LB = (50 / 8.32828) * 0.003785411784;
+const WC_50LB = (50 / 8.32828) * US_GAL_M3;
 
 function r410aCylinder(over: Partial<TankCheckInput> = {}): TankCheckInput {
   // Filled to the reference bubble-line liquid density at 323.15 K: liquid-full there.

@@ -291,5 +291,62 @@ describe('pressure rules (FACTS cases 8, 9, 15–19)', () => {
     // published (derived from 1910.110(b)(10)(xii)), exact
     expect(hydrostaticReliefRange(250, false)).toEqual({ min: 350, max: 500 });
     expect(hydrostaticReliefRange(250, true).min).toBe(400);
+    // DOT container relief 300 psig: 1.4 × 300 = 420 psig is above the 400 psig floor.
+    expect(hydrostaticReliefRange(300, true)).toEqual({ min: 420, max: 500 });
+  });
+
+  it('reliefRange for ASME U-68/U-69 (1949 and earlier) is 110–125 % for both services', () => {
+    // published: 29 CFR 1910.110(b)(10)(iv) Table H-26 and 1910.111(b)(9)(ii) (FACTS section d3)
+    expect(reliefRange('lp-gas', 'asme-1949-and-earlier')).toEqual({
+      min: 1.1,
+      max: 1.25,
+      citation: '29 CFR 1910.110(b)(10)(iv) Table H-26',
+    });
+    expect(reliefRange('ammonia', 'asme-1949-and-earlier')).toEqual({
+      min: 1.1,
+      max: 1.25,
+      citation: '29 CFR 1910.111(b)(9)(ii)',
+    });
+    expect(reliefRange('lp-gas', 'asme-1950-and-later').citation).toBe(
+      '29 CFR 1910.110(b)(10)(iv) Table H-26',
+    );
+    expect(reliefRange('ammonia', 'asme-1950-and-later')).toEqual({
+      min: 0.95,
+      max: 1.0,
+      citation: '29 CFR 1910.111(b)(9)(ii)',
+    });
+  });
+
+  it('containerTypeFor raises the type in steps of 25 past 215 psig (Table H-31 notes)', () => {
+    // published (derived from Table H-31 notes): 260 psig → 200 + 25·ceil(60/25) = 275
+    expect(containerTypeFor(260, 'asme-1950-and-later')).toEqual({
+      type: 275,
+      minDesignPressure_psig: 343.75,
+    });
+    expect(containerTypeFor(90, 'asme-1949-and-earlier')).toEqual({
+      type: 100,
+      minDesignPressure_psig: 100,
+    });
+  });
+
+  it('reliefFlowAir uses the printed formula between table rows, and the surface areas by shape', () => {
+    // published formula 53.632·A^0.82 (1910.110(b)(10)(ii)): A = 50 ft² → 53.632·24.726 = 1326.1 cfm
+    expectWithin(reliefFlowAir(50, 'lp-gas'), 1326.1, 0.5, {
+      input: '50 ft²',
+      source: '29 CFR 1910.110(b)(10)(ii) formula, worked by hand',
+      kind: 'published',
+    });
+    // Surface area formulas of 1910.110(b)(10)(ii) (from memory of the printed text):
+    // sphere π·D² = 3.1416·16 = 50.27 ft²; other heads (L + 0.3·D)·D·π = 21.2·4·3.1416 = 266.4 ft²
+    expectWithin(reliefSurfaceArea('sphere', 20, 4), 50.27, 0.005, {
+      input: 'D = 4 ft',
+      source: 'worked by hand',
+      kind: 'published',
+    });
+    expectWithin(reliefSurfaceArea('other-heads', 20, 4), 266.41, 0.005, {
+      input: '20 ft × 4 ft',
+      source: 'worked by hand',
+      kind: 'published',
+    });
   });
 });

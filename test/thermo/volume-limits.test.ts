@@ -346,6 +346,11 @@ describe('refrigerated CO2 and N2O in DOT-4L cylinders (49 CFR 173.304a(e)(2))',
         kind: 'published',
       });
       expect(lim.citation).toContain('173.304a(e)(2)');
+      // FACTS section b: CO2 offered at 0 °F or colder, N2O at +4 °F or colder, ≤ 290 psig.
+      const [name, offered] =
+        product === 'carbon-dioxide' ? ['Carbon dioxide', '0 °F'] : ['Nitrous oxide', '+4 °F'];
+      expect(lim.description).toContain(`${name}, refrigerated liquid`);
+      expect(lim.description).toContain(`offered at ${offered} or colder and 290 psig or less`);
     }
   });
   it('a relief setting above 625 psig is not a DOT-4L: the 68 % rule of 173.304a(a)(2) applies', () => {

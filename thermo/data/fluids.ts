@@ -2,7 +2,7 @@
  * Pure-fluid constants: molar mass, critical point, acentric factor, triple point, critical
  * density and Rackett factor. Every figure is the primary value of the project's compiled
  * constants (figures read from the data files of the reference equations of state, see
- * `sources.ts`, key in `source`). The critical point and acentric factor are those stated with
+ * `data/sources.ts`, key in `source`). The critical point and acentric factor are those stated with
  * each fluid's reference equation of state, so the cubic models share their critical point.
  *
  * Units: molarMass kg/mol, Tc K, pc Pa, rhoc kg/m³, Ttriple K, Tb K (normal boiling point).

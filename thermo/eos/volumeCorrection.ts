@@ -24,7 +24,8 @@
  * every ln φ_i equally in all phases and so leaves equilibrium unchanged; the other two terms
  * are volume corrections applied after equilibrium (a "density correction": volumes are not
  * derivable from the same Helmholtz energy as the fugacities). The model's p–v isotherms
- * stay monotone on each branch (checked in test/thermo/volume-correction.test.ts).
+ * stay monotone on each branch (checked in test/thermo/identities.test.ts, "pressure rises
+ * with density along an isotherm").
  */
 
 export const SHIFT_EXPONENTS: readonly number[] = [0.35, 0.5, 0.75, 1, 2];
@@ -66,13 +67,16 @@ export function correctionAtT(
   vcCub: number,
   T: number,
 ): CorrectionAtT {
+  const { d, eps: e } = params;
+  // Empty arrays mean no such term (NO_CORRECTION); any other length is a data error.
+  if ((d.length !== 0 && d.length !== SHIFT_EXPONENTS.length) || (e.length !== 0 && e.length !== 3))
+    throw new RangeError(
+      `volume correction needs ${SHIFT_EXPONENTS.length} shift coefficients and 3 ε coefficients (or none), got ${d.length} and ${e.length}`,
+    );
   const tau = T < Tc ? 1 - T / Tc : 0;
   let c = params.cc;
-  if (tau > 0)
-    for (let k = 0; k < params.d.length; k++)
-      c += (params.d[k] ?? 0) * Math.pow(tau, SHIFT_EXPONENTS[k] ?? 1);
-  const e = params.eps;
-  const eps = (e[0] ?? 0) + tau * ((e[1] ?? 0) + tau * (e[2] ?? 0));
+  if (tau > 0) for (let k = 0; k < d.length; k++) c += d[k]! * Math.pow(tau, SHIFT_EXPONENTS[k]!);
+  const eps = e.length === 0 ? 0 : e[0]! + tau * (e[1]! + tau * e[2]!);
   return { c, delta: params.delta, eps, vcCub };
 }
 

@@ -22,10 +22,3 @@ export const MODEL_ALLOWANCE = {
   /** Relative uncertainty of the pressure of a liquid-full (hydraulically full) tank, fraction. */
   liquidFullPressure: 0.1,
 } as const;
-
-/** The allowance on a peak pressure in the given phase state, fraction. */
-export function peakPressureAllowance(phase: string): number {
-  return phase === 'liquid-full'
-    ? MODEL_ALLOWANCE.liquidFullPressure
-    : MODEL_ALLOWANCE.vapourPressure;
-}

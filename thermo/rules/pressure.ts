@@ -82,8 +82,7 @@ const FLOW_ROWS: Record<'lp-gas' | 'ammonia', Record<number, number>> = {
  */
 export function reliefFlowAir(area_ft2: number, service: 'lp-gas' | 'ammonia'): number {
   const row = FLOW_ROWS[service][area_ft2];
-  if (row !== undefined) return row;
-  return (service === 'lp-gas' ? 53.632 : 22.11) * area_ft2 ** 0.82;
+  return row ?? reliefFlowAirFormula(area_ft2, service);
 }
 
 /** The formula alone (for checking it against the table rows). */

@@ -53,6 +53,22 @@ export function closedTankState(product: ResolvedProduct, T: number, rho: number
   return closedTankBlend(product, T, rho);
 }
 
+/**
+ * A single-phase pressure found inside the saturation bound, checked against that bound: a miss
+ * beyond round-off (1e-9 relative) is reported rather than clamped, a round-off miss is snapped.
+ */
+function onSide(p: number, pSat: number, side: 'above' | 'below', T: number): number {
+  const miss = side === 'above' ? (pSat - p) / pSat : (p - pSat) / pSat;
+  if (miss > 1e-9)
+    throw new ConvergenceError(
+      'closed tank',
+      `single-phase pressure ${p} Pa on the wrong side of p_sat = ${pSat} Pa at T = ${T} K`,
+      0,
+      miss,
+    );
+  return side === 'above' ? Math.max(p, pSat) : Math.min(p, pSat);
+}
+
 function closedTankPure(product: ResolvedProduct, T: number, rho: number): ClosedTankState {
   const m = product.components[0]!;
   const v = m.molarMass / rho;
@@ -72,7 +88,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
         const p = pressureForVolume(volumeAlong(m, T, 'liquid'), v, sat.p * 1.05, sat.p).p;
         return {
           phase: 'liquid',
-          p: Math.max(p, sat.p),
+          p: onSide(p, sat.p, 'above', T),
           liquidFraction: 1,
           rhoL: rho,
           rhoV: null,
@@ -92,7 +108,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
         ).p;
         return {
           phase: 'vapour',
-          p: Math.min(p, sat.p),
+          p: onSide(p, sat.p, 'below', T),
           liquidFraction: 0,
           rhoL: null,
           rhoV: rho,

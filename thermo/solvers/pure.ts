@@ -4,7 +4,7 @@
  */
 import { R_J_molK } from '../constants.js';
 import { ConvergenceError } from '../errors.js';
-import { compressibilityRoots, dPdv, lnPhiPure, logTerm, pressure } from '../eos/cubic.js';
+import { compressibilityRoots, dPdv, lnPhiPure, logTerm } from '../eos/cubic.js';
 import { correctedVolume, correctionAtT, type CorrectionAtT } from '../eos/volumeCorrection.js';
 import type { ComponentModel } from '../eos/model.js';
 import type { SolverReport } from './result.js';
@@ -187,14 +187,4 @@ export function volumeAlong(
     const z = pureZ(m, k, T, p, choice);
     return modelVolume(m, k, T, (z.Z * R * T) / p);
   };
-}
-
-/** Pressure of the cubic at T and the cubic's molar volume vCub, Pa. */
-export function cubicPressure(
-  m: ComponentModel,
-  k: PureCoefficients,
-  T: number,
-  vCub: number,
-): number {
-  return pressure(m.family, R, T, vCub, k.a, k.b);
 }
