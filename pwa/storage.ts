@@ -6,6 +6,8 @@
  * once shipped, is never edited — a change is a new step):
  *   v1  stores `tanks` (key `id`, index `site`), `checks` (key `id`, index `tankId`),
  *       `drafts` (key `tankId`), `settings` (out-of-line keys: `settings`, `meta`).
+ *   v2  adds `sites` (key `site`: the site forecast and route) and `walkdowns` (key `id`, index
+ *       `site`); nothing else changes.
  *
  * Every write that must be all-or-nothing (delete a tank with its checks, import a backup,
  * clear) runs in a single transaction, so a failure leaves the stored data as it was.
@@ -18,10 +20,11 @@ import {
   type StoreNames,
 } from 'idb';
 import type { CheckRecord, DraftRecord, Settings, TankRecord } from '../components/types.js';
+import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 import { isClearableDemo } from './demo-own.js';
 
 export const DB_NAME = 'tankside';
-export const DB_VERSION = 1;
+export const DB_VERSION = 2;
 
 /** Bookkeeping that is not a user setting. */
 export interface Meta {
@@ -40,6 +43,8 @@ export interface TanksideDB extends DBSchema {
   checks: { key: string; value: CheckRecord; indexes: { tankId: string } };
   drafts: { key: string; value: DraftRecord };
   settings: { key: string; value: unknown };
+  sites: { key: string; value: SiteForecast };
+  walkdowns: { key: string; value: WalkdownRecord; indexes: { site: string } };
 }
 
 type UpgradeTx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'versionchange'>;
@@ -55,6 +60,12 @@ export const UPGRADES: readonly UpgradeStep[] = [
     checks.createIndex('tankId', 'tankId');
     db.createObjectStore('drafts', { keyPath: 'tankId' });
     db.createObjectStore('settings');
+  },
+  // 1 → 2: site forecasts and walkdowns (new stores only).
+  (db) => {
+    db.createObjectStore('sites', { keyPath: 'site' });
+    const walks = db.createObjectStore('walkdowns', { keyPath: 'id' });
+    walks.createIndex('site', 'site');
   },
 ];
 
@@ -84,6 +95,10 @@ export interface DataSet {
   tanks: TankRecord[];
   checks: CheckRecord[];
   settings: Settings | null;
+  /** Site forecasts (absent in a backup made before walkdowns). */
+  sites?: SiteForecast[];
+  /** Walkdowns, under way and finished (absent in a backup made before walkdowns). */
+  walkdowns?: WalkdownRecord[];
 }
 
 export class Store {
@@ -176,6 +191,38 @@ export class Store {
     await this.db.delete('drafts', tankId);
   }
 
+  // ── site forecasts and walkdowns ───────────────────────────────────────────────────────
+  async getSite(site: string): Promise<SiteForecast | undefined> {
+    return this.db.get('sites', site);
+  }
+
+  async putSite(forecast: SiteForecast): Promise<void> {
+    await this.db.put('sites', forecast);
+  }
+
+  /** Walkdowns of one site (or all), newest first. */
+  async listWalkdowns(site?: string): Promise<WalkdownRecord[]> {
+    const list =
+      site === undefined
+        ? await this.db.getAll('walkdowns')
+        : await this.db.getAllFromIndex('walkdowns', 'site', site);
+    return list.sort((a, b) =>
+      a.startedAt < b.startedAt ? 1 : a.startedAt > b.startedAt ? -1 : 0,
+    );
+  }
+
+  async getWalkdown(id: string): Promise<WalkdownRecord | undefined> {
+    return this.db.get('walkdowns', id);
+  }
+
+  async putWalkdown(w: WalkdownRecord): Promise<void> {
+    await this.db.put('walkdowns', w);
+  }
+
+  async deleteWalkdown(id: string): Promise<void> {
+    await this.db.delete('walkdowns', id);
+  }
+
   // ── settings and meta ──────────────────────────────────────────────────────────────────
   async getSettings(): Promise<Settings | null> {
     return ((await this.db.get('settings', 'settings')) as Settings | undefined) ?? null;
@@ -196,14 +243,25 @@ export class Store {
 
   // ── whole data set ─────────────────────────────────────────────────────────────────────
   async exportAll(): Promise<DataSet> {
-    const tx = this.db.transaction(['tanks', 'checks', 'settings'], 'readonly');
-    const [tanks, checks, settings] = await Promise.all([
+    const tx = this.db.transaction(
+      ['tanks', 'checks', 'settings', 'sites', 'walkdowns'],
+      'readonly',
+    );
+    const [tanks, checks, settings, sites, walkdowns] = await Promise.all([
       tx.objectStore('tanks').getAll(),
       tx.objectStore('checks').getAll(),
       tx.objectStore('settings').get('settings'),
+      tx.objectStore('sites').getAll(),
+      tx.objectStore('walkdowns').getAll(),
     ]);
     await tx.done;
-    return { tanks, checks, settings: (settings as Settings | undefined) ?? null };
+    return {
+      tanks,
+      checks,
+      settings: (settings as Settings | undefined) ?? null,
+      sites,
+      walkdowns,
+    };
   }
 
   /**
@@ -211,10 +269,15 @@ export class Store {
    * everything else is kept. Settings are replaced when the set has them.
    */
   async importAll(data: DataSet): Promise<void> {
-    const tx = this.db.transaction(['tanks', 'checks', 'settings'], 'readwrite');
+    const tx = this.db.transaction(
+      ['tanks', 'checks', 'settings', 'sites', 'walkdowns'],
+      'readwrite',
+    );
     try {
       for (const t of data.tanks) await tx.objectStore('tanks').put(t);
       for (const c of data.checks) await tx.objectStore('checks').put(c);
+      for (const f of data.sites ?? []) await tx.objectStore('sites').put(f);
+      for (const w of data.walkdowns ?? []) await tx.objectStore('walkdowns').put(w);
       if (data.settings) await tx.objectStore('settings').put(data.settings, 'settings');
     } catch (error) {
       // A put that throws before it reaches IndexedDB (a bad key) would not abort by itself.
@@ -225,13 +288,18 @@ export class Store {
     await tx.done;
   }
 
-  /** Removes every tank, check and draft (settings and meta stay). */
+  /** Removes every tank, check, draft, site forecast and walkdown (settings and meta stay). */
   async clearAll(): Promise<void> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+    const tx = this.db.transaction(
+      ['tanks', 'checks', 'drafts', 'sites', 'walkdowns'],
+      'readwrite',
+    );
     await Promise.all([
       tx.objectStore('tanks').clear(),
       tx.objectStore('checks').clear(),
       tx.objectStore('drafts').clear(),
+      tx.objectStore('sites').clear(),
+      tx.objectStore('walkdowns').clear(),
     ]);
     await tx.done;
   }

@@ -6,6 +6,7 @@ import { deleteDB } from 'idb';
 import { DB_VERSION, Store, UPGRADES, openAtVersion } from '../../pwa/storage.js';
 import type { CheckRecord, TankRecord } from '../../components/types.js';
 import { DEFAULT_SETTINGS, emptyReadings } from '../../components/types.js';
+import type { SiteForecast, WalkdownRecord } from '../../components/walkdown-types.js';
 
 const names: string[] = [];
 function dbName(): string {
@@ -84,7 +85,48 @@ const SEED: Record<number, (db: Awaited<ReturnType<typeof openAtVersion>>) => Pr
     });
     await db.put('settings', { ...DEFAULT_SETTINGS, sunAllowance: 3 }, 'settings');
   },
+  2: async (db) => {
+    await SEED[1]!(db);
+    await db.put('sites', FORECAST);
+    await db.put('walkdowns', walk('w1'));
+  },
 };
+
+// Placeholder site forecast and walkdown (not tank data).
+const FORECAST: SiteForecast = {
+  site: 'Site A',
+  days: [310],
+  sunAllowance: 5,
+  tankAllowances: [{ tankId: 't1', sunAllowance: 0 }],
+  enteredAt: '2024-01-04T00:00:00.000Z',
+};
+
+function walk(id: string): WalkdownRecord {
+  return {
+    id,
+    site: 'Site A',
+    status: 'in-progress',
+    startedAt: '2024-01-05T00:00:00.000Z',
+    finishedAt: null,
+    checkedBy: 'A. Person',
+    forecast: FORECAST,
+    entries: [
+      {
+        tankId: 't1',
+        tankName: 'Tank t1',
+        status: 'unreached',
+        readings: check('x', 't1', '').readings,
+        note: '',
+        reason: 'gate locked',
+        at: '2024-01-05T00:10:00.000Z',
+        result: null,
+        problem: '',
+      },
+    ],
+    current: 0,
+    appVersion: 'test',
+  };
+}
 
 describe('storage', () => {
   it('UPGRADES has one step per schema version', () => {
@@ -112,9 +154,15 @@ describe('storage', () => {
         expect((await store.getDraft('t1'))?.updatedAt).to.equal('2024-01-03T00:00:00.000Z');
         expect((await store.getSettings())?.sunAllowance).to.equal(3);
       }
+      if (v >= 2) {
+        expect(await store.getSite('Site A')).to.deep.equal(FORECAST);
+        expect(await store.listWalkdowns('Site A')).to.deep.equal([walk('w1')]);
+      }
       // The current schema is fully usable after the upgrade.
       await store.putTank(tank('t2'));
       expect((await store.listTanks()).length).to.equal(v === 0 ? 1 : 2);
+      await store.putWalkdown(walk('w2'));
+      expect((await store.listWalkdowns()).map((w) => w.id)).to.include('w2');
       store.close();
     });
   }
@@ -154,9 +202,13 @@ describe('storage', () => {
     await store.putTank(tank('a'));
     await store.putCheck(check('c1', 'a', '2024-01-01T00:00:00.000Z'));
     await store.putSettings({ ...DEFAULT_SETTINGS, theme: 'standard' });
+    await store.putSite(FORECAST);
+    await store.putWalkdown(walk('w1'));
     const data = await store.exportAll();
+    expect(data.walkdowns?.length).to.equal(1);
     await store.clearAll();
     expect(await store.listTanks()).to.deep.equal([]);
+    expect(await store.listWalkdowns()).to.deep.equal([]);
     await store.importAll(data);
     expect(await store.exportAll()).to.deep.equal(data);
     store.close();
