@@ -8,6 +8,8 @@
  *       `drafts` (key `tankId`), `settings` (out-of-line keys: `settings`, `meta`).
  *   v2  adds `sites` (key `site`: the site forecast and route) and `walkdowns` (key `id`, index
  *       `site`); nothing else changes.
+ *   v3  adds `fills` (key `id`, index `tankId`: saved fill records) and `fillDrafts` (key
+ *       `tankId`: a fill under way); nothing else changes.
  *
  * Every write that must be all-or-nothing (delete a tank with its checks, import a backup,
  * clear) runs in a single transaction, so a failure leaves the stored data as it was.
@@ -21,10 +23,11 @@ import {
 } from 'idb';
 import type { CheckRecord, DraftRecord, Settings, TankRecord } from '../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
+import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { isClearableDemo } from './demo-own.js';
 
 export const DB_NAME = 'tankside';
-export const DB_VERSION = 2;
+export const DB_VERSION = 3;
 
 /** Bookkeeping that is not a user setting. */
 export interface Meta {
@@ -45,6 +48,8 @@ export interface TanksideDB extends DBSchema {
   settings: { key: string; value: unknown };
   sites: { key: string; value: SiteForecast };
   walkdowns: { key: string; value: WalkdownRecord; indexes: { site: string } };
+  fills: { key: string; value: FillRecord; indexes: { tankId: string } };
+  fillDrafts: { key: string; value: FillDraft };
 }
 
 type UpgradeTx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'versionchange'>;
@@ -66,6 +71,12 @@ export const UPGRADES: readonly UpgradeStep[] = [
     db.createObjectStore('sites', { keyPath: 'site' });
     const walks = db.createObjectStore('walkdowns', { keyPath: 'id' });
     walks.createIndex('site', 'site');
+  },
+  // 2 → 3: fill records and fills under way (new stores only).
+  (db) => {
+    const fills = db.createObjectStore('fills', { keyPath: 'id' });
+    fills.createIndex('tankId', 'tankId');
+    db.createObjectStore('fillDrafts', { keyPath: 'tankId' });
   },
 ];
 
@@ -99,6 +110,8 @@ export interface DataSet {
   sites?: SiteForecast[];
   /** Walkdowns, under way and finished (absent in a backup made before walkdowns). */
   walkdowns?: WalkdownRecord[];
+  /** Fill records (absent in a backup made before fill records). */
+  fills?: FillRecord[];
 }
 
 export class Store {
@@ -128,35 +141,40 @@ export class Store {
     await this.db.put('tanks', tank);
   }
 
-  /** Deletes a tank with its checks and draft; returns what was removed so it can be restored (undo). */
-  async deleteTank(
-    id: string,
-  ): Promise<{ tank: TankRecord; checks: CheckRecord[]; draft: DraftRecord | undefined } | null> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+  /**
+   * Deletes a tank with its checks, fills and drafts; returns what was removed so it can be
+   * restored (undo).
+   */
+  async deleteTank(id: string): Promise<RemovedTank | null> {
+    const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
+    const tx = this.db.transaction([...names], 'readwrite');
     const tank = await tx.objectStore('tanks').get(id);
     if (!tank) {
       await tx.done;
       return null;
     }
     const checks = await tx.objectStore('checks').index('tankId').getAll(id);
+    const fills = await tx.objectStore('fills').index('tankId').getAll(id);
     const draft = await tx.objectStore('drafts').get(id);
+    const fillDraft = await tx.objectStore('fillDrafts').get(id);
     await tx.objectStore('tanks').delete(id);
     for (const c of checks) await tx.objectStore('checks').delete(c.id);
+    for (const f of fills) await tx.objectStore('fills').delete(f.id);
     await tx.objectStore('drafts').delete(id);
+    await tx.objectStore('fillDrafts').delete(id);
     await tx.done;
-    return { tank, checks, draft };
+    return { tank, checks, draft, fills, fillDraft };
   }
 
   /** Puts back what `deleteTank` removed. */
-  async restoreTank(removed: {
-    tank: TankRecord;
-    checks: CheckRecord[];
-    draft: DraftRecord | undefined;
-  }): Promise<void> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+  async restoreTank(removed: RemovedTank): Promise<void> {
+    const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
+    const tx = this.db.transaction([...names], 'readwrite');
     await tx.objectStore('tanks').put(removed.tank);
     for (const c of removed.checks) await tx.objectStore('checks').put(c);
+    for (const f of removed.fills ?? []) await tx.objectStore('fills').put(f);
     if (removed.draft) await tx.objectStore('drafts').put(removed.draft);
+    if (removed.fillDraft) await tx.objectStore('fillDrafts').put(removed.fillDraft);
     await tx.done;
   }
 
@@ -223,6 +241,42 @@ export class Store {
     await this.db.delete('walkdowns', id);
   }
 
+  // ── fills ──────────────────────────────────────────────────────────────────────────────
+  /** Fill records of one tank (or all), newest first (by the time the after-readings were saved). */
+  async listFills(tankId?: string): Promise<FillRecord[]> {
+    const list =
+      tankId === undefined
+        ? await this.db.getAll('fills')
+        : await this.db.getAllFromIndex('fills', 'tankId', tankId);
+    return list.sort((a, b) =>
+      a.finishedAt < b.finishedAt ? 1 : a.finishedAt > b.finishedAt ? -1 : 0,
+    );
+  }
+
+  /** Saves a fill record and removes the tank's fill under way, in one transaction. */
+  async putFill(fill: FillRecord): Promise<void> {
+    const tx = this.db.transaction(['fills', 'fillDrafts'], 'readwrite');
+    await tx.objectStore('fills').put(fill);
+    await tx.objectStore('fillDrafts').delete(fill.tankId);
+    await tx.done;
+  }
+
+  async deleteFill(id: string): Promise<void> {
+    await this.db.delete('fills', id);
+  }
+
+  async getFillDraft(tankId: string): Promise<FillDraft | undefined> {
+    return this.db.get('fillDrafts', tankId);
+  }
+
+  async putFillDraft(draft: FillDraft): Promise<void> {
+    await this.db.put('fillDrafts', draft);
+  }
+
+  async deleteFillDraft(tankId: string): Promise<void> {
+    await this.db.delete('fillDrafts', tankId);
+  }
+
   // ── settings and meta ──────────────────────────────────────────────────────────────────
   async getSettings(): Promise<Settings | null> {
     return ((await this.db.get('settings', 'settings')) as Settings | undefined) ?? null;
@@ -244,15 +298,16 @@ export class Store {
   // ── whole data set ─────────────────────────────────────────────────────────────────────
   async exportAll(): Promise<DataSet> {
     const tx = this.db.transaction(
-      ['tanks', 'checks', 'settings', 'sites', 'walkdowns'],
+      ['tanks', 'checks', 'settings', 'sites', 'walkdowns', 'fills'],
       'readonly',
     );
-    const [tanks, checks, settings, sites, walkdowns] = await Promise.all([
+    const [tanks, checks, settings, sites, walkdowns, fills] = await Promise.all([
       tx.objectStore('tanks').getAll(),
       tx.objectStore('checks').getAll(),
       tx.objectStore('settings').get('settings'),
       tx.objectStore('sites').getAll(),
       tx.objectStore('walkdowns').getAll(),
+      tx.objectStore('fills').getAll(),
     ]);
     await tx.done;
     return {
@@ -261,6 +316,7 @@ export class Store {
       settings: (settings as Settings | undefined) ?? null,
       sites,
       walkdowns,
+      fills,
     };
   }
 
@@ -270,7 +326,7 @@ export class Store {
    */
   async importAll(data: DataSet): Promise<void> {
     const tx = this.db.transaction(
-      ['tanks', 'checks', 'settings', 'sites', 'walkdowns'],
+      ['tanks', 'checks', 'settings', 'sites', 'walkdowns', 'fills'],
       'readwrite',
     );
     try {
@@ -278,6 +334,7 @@ export class Store {
       for (const c of data.checks) await tx.objectStore('checks').put(c);
       for (const f of data.sites ?? []) await tx.objectStore('sites').put(f);
       for (const w of data.walkdowns ?? []) await tx.objectStore('walkdowns').put(w);
+      for (const f of data.fills ?? []) await tx.objectStore('fills').put(f);
       if (data.settings) await tx.objectStore('settings').put(data.settings, 'settings');
     } catch (error) {
       // A put that throws before it reaches IndexedDB (a bad key) would not abort by itself.
@@ -288,10 +345,10 @@ export class Store {
     await tx.done;
   }
 
-  /** Removes every tank, check, draft, site forecast and walkdown (settings and meta stay). */
+  /** Removes every tank, check, draft, site forecast, walkdown and fill (settings and meta stay). */
   async clearAll(): Promise<void> {
     const tx = this.db.transaction(
-      ['tanks', 'checks', 'drafts', 'sites', 'walkdowns'],
+      ['tanks', 'checks', 'drafts', 'sites', 'walkdowns', 'fills', 'fillDrafts'],
       'readwrite',
     );
     await Promise.all([
@@ -300,6 +357,8 @@ export class Store {
       tx.objectStore('drafts').clear(),
       tx.objectStore('sites').clear(),
       tx.objectStore('walkdowns').clear(),
+      tx.objectStore('fills').clear(),
+      tx.objectStore('fillDrafts').clear(),
     ]);
     await tx.done;
   }
@@ -338,6 +397,15 @@ export class Store {
     for (const d of removed.drafts) await tx.objectStore('drafts').put(d);
     await tx.done;
   }
+}
+
+/** A tank taken out with everything of it, kept so it can be put back. */
+export interface RemovedTank {
+  tank: TankRecord;
+  checks: CheckRecord[];
+  draft: DraftRecord | undefined;
+  fills?: FillRecord[];
+  fillDraft?: FillDraft | undefined;
 }
 
 /** Records taken out together, kept so they can be put back. */
