@@ -247,6 +247,9 @@ function validateSettings(s: unknown): Settings {
   num(s, 'sunAllowance', where, 0, 40);
   oneOf(s, 'theme', where, ['standard', 'outdoor'] as const);
   oneOf(s, 'numberFormat', where, NUMBER_FORMAT_IDS, true);
+  optNum(s, 'fillGaugePoints', where, 0, 20);
+  optNum(s, 'fillMeterFraction', where, 0, 0.1);
+  bool(s, 'fillMeterCompensated', where, true);
   return { ...DEFAULT_SETTINGS, ...(s as unknown as Settings) };
 }
 
