@@ -9,7 +9,7 @@ import { LitElement, html, css } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent } from './display.js';
 import { formatDate } from './tank-list.js';
-import { fillFindingText } from './fill-messages.js';
+import { fillFindingText } from './messages.js';
 import { DEFAULT_SETTINGS } from './types.js';
 import type { FillRecord } from './fill-types.js';
 

@@ -4,7 +4,7 @@
  */
 import { html, nothing } from 'lit';
 import { formatPercent, type DisplayUnits } from './display.js';
-import { fillFindingText } from './fill-messages.js';
+import { fillFindingText } from './messages.js';
 import { formatDate } from './tank-list.js';
 import type { FillDraft } from './fill-types.js';
 import type { FillOutcome } from './fill-run.js';
