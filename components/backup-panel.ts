@@ -148,8 +148,8 @@ export class BackupPanel extends LitElement {
         </button>
       </div>
       <p class="muted">
-        An import adds the backup’s tanks, checks and fills and replaces those with the same id; nothing
-        else is removed. A file that is not a valid backup changes nothing.
+        An import adds the backup’s tanks, checks and fills and replaces those with the same id;
+        nothing else is removed. A file that is not a valid backup changes nothing.
       </p>
       <h3>Clear</h3>
       <div class="buttons">

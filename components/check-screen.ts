@@ -24,6 +24,9 @@ import './check-form.js';
 import './check-results.js';
 import './check-chart.js';
 import './check-history.js';
+import './fill-history.js';
+import { fillStartButton } from './fill-start.js';
+import type { FillRecord } from './fill-types.js';
 import type { ReadingsChange } from './check-form.js';
 import {
   errorText,
@@ -69,6 +72,7 @@ export class CheckScreen extends LitElement {
     settings: { attribute: false },
     readings: { attribute: false },
     checks: { attribute: false },
+    fills: { attribute: false },
     _readings: { state: true },
     _valid: { state: true },
     _outcome: { state: true },
@@ -85,6 +89,8 @@ export class CheckScreen extends LitElement {
   declare readings: Readings;
   /** Saved checks of this tank. */
   declare checks: CheckRecord[];
+  /** Saved fills of this tank. */
+  declare fills: FillRecord[];
   declare _readings: Readings;
   declare _valid: boolean;
   declare _outcome: CheckOutcome | null;
@@ -101,6 +107,7 @@ export class CheckScreen extends LitElement {
     this.settings = DEFAULT_SETTINGS;
     this.readings = emptyReadings(DEFAULT_SETTINGS.sunAllowance);
     this.checks = [];
+    this.fills = [];
     this._readings = this.readings;
     this._valid = true;
     this._outcome = null;
@@ -376,6 +383,7 @@ export class CheckScreen extends LitElement {
               >
                 Save check
               </button>
+              ${fillStartButton(this, t.id, result ? (o ?? null) : null, this.settings)}
               <button data-testid="check-share" ?disabled=${!result} @click=${this._share}>
                 Share summary
               </button>
@@ -408,6 +416,8 @@ export class CheckScreen extends LitElement {
             }
             <h3>History</h3>
             <check-history .checks=${this.checks} .display=${d}></check-history>
+            <h3>Fills</h3>
+            <fill-history .fills=${this.fills} .display=${d}></fill-history>
           </div>
         </div>
         <div class="keybar" data-testid="key-bar" aria-hidden="true">

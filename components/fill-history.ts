@@ -96,11 +96,13 @@ export class FillHistory extends LitElement {
             ${VERDICT_WORDS[r.verdict]}
           </div>
           <div class="figs">
-            Before ${b.gaugePercent === null ? d.format('mass', b.totalMass) : formatPercent(b.gaugePercent)}
+            Before
+            ${b.gaugePercent === null ? d.format('mass', b.totalMass) : formatPercent(b.gaugePercent)}
             · delivered ${d.format('volume', f.delivered.volume)}
             (${BASIS_WORDS[f.delivered.basis ?? 'compensated-60F']}${f.delivered.interrupted ? ', stopped early' : ''})
             · after ${formatPercent(f.after.gaugePercent)}, expected
-            ${formatPercent(r.expectedGaugePercent)} (±${formatPercent(r.band.halfWidth, 'down').replace(' %', '')} points)
+            ${formatPercent(r.expectedGaugePercent)}
+            (±${formatPercent(r.band.halfWidth, 'down').replace(' %', '')} points)
           </div>
           ${f.note ? html`<div class="figs">Note: ${f.note}</div>` : ''}
           <details>

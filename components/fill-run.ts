@@ -116,14 +116,22 @@ export function runFill(draft: FillDraft, settings: Settings, d: DisplayUnits): 
   } catch (e) {
     if (e instanceof InputError) {
       const field = FIELD[e.field] ?? null;
-      return { input, result: null, missing, refusal: { field, message: refusalText(e, field, d) } };
+      return {
+        input,
+        result: null,
+        missing,
+        refusal: { field, message: refusalText(e, field, d) },
+      };
     }
     const why = e instanceof Error ? e.message : String(e);
     return {
       input,
       result: null,
       missing,
-      refusal: { field: null, message: `The fill could not be worked out for these readings (${why}).` },
+      refusal: {
+        field: null,
+        message: `The fill could not be worked out for these readings (${why}).`,
+      },
     };
   }
 }

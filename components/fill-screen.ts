@@ -193,7 +193,9 @@ export class FillScreen extends LitElement {
           No fill is under way for this tank. Start one from the tank’s check, with the readings
           taken before the delivery.
         </p>
-        <p><a class="button" href="#/tank/${encodeURIComponent(this.tank.id)}">Go to the check</a></p>
+        <p>
+          <a class="button" href="#/tank/${encodeURIComponent(this.tank.id)}">Go to the check</a>
+        </p>
         <h3>Saved fills</h3>
         <fill-history .fills=${this.fills} .display=${d}></fill-history>
         ${standing}
@@ -201,11 +203,13 @@ export class FillScreen extends LitElement {
     return html`<div data-testid="fill-screen">
       <h2>Fill — ${this.tank.name}${this.tank.demo ? ' (demo, invented)' : ''}</h2>
       ${renderBefore(f, d)} ${this._renderDelivery(f, d)} ${this._renderAfter(f, d)}
-      ${this._outcome?.refusal && !this._outcome.refusal.field
-        ? html`<p class="error" role="alert" data-testid="fill-refusal-other">
-            ${this._outcome.refusal.message}
-          </p>`
-        : nothing}
+      ${
+        this._outcome?.refusal && !this._outcome.refusal.field
+          ? html`<p class="error" role="alert" data-testid="fill-refusal-other">
+              ${this._outcome.refusal.message}
+            </p>`
+          : nothing
+      }
       ${renderVerdict(this._outcome, d, this._invalid.size > 0)}
       <label for="fill-note">Note (ticket number, what was verified…)</label>
       <textarea
@@ -267,21 +271,23 @@ export class FillScreen extends LitElement {
         The meter reads temperature-compensated (to ${base})
       </label>
       ${this._refusal('compensated')}
-      ${f.compensated
-        ? nothing
-        : html`<number-field
-              label="Product temperature at the meter"
-              name="meterTemperature"
-              quantity="temperature"
-              testid="fill-meter-temperature"
-              hint="Leave empty to take the liquid temperature after the delivery"
-              .display=${d}
-              .value=${f.meterTemperature}
-              .min=${T_RANGE_K.min}
-              .max=${T_RANGE_K.max}
-              @value-change=${this._num('meterTemperature')}
-            ></number-field>
-            ${this._refusal('meterTemperature')}`}
+      ${
+        f.compensated
+          ? nothing
+          : html`<number-field
+                label="Product temperature at the meter"
+                name="meterTemperature"
+                quantity="temperature"
+                testid="fill-meter-temperature"
+                hint="Leave empty to take the liquid temperature after the delivery"
+                .display=${d}
+                .value=${f.meterTemperature}
+                .min=${T_RANGE_K.min}
+                .max=${T_RANGE_K.max}
+                @value-change=${this._num('meterTemperature')}
+              ></number-field>
+              ${this._refusal('meterTemperature')}`
+      }
       <label class="choice">
         <input
           type="checkbox"

@@ -32,11 +32,13 @@ export function renderBefore(f: FillDraft, d: DisplayUnits) {
       <dd>${d.format('temperature', b.liquidTemperature)}</dd>
       <dt>${b.gaugePercent === null ? 'Contents read by' : 'Float gauge'}</dt>
       <dd>
-        ${b.gaugePercent === null
-          ? b.contentsSource === 'netMass'
-            ? 'weight'
-            : 'level'
-          : formatPercent(b.gaugePercent)}
+        ${
+          b.gaugePercent === null
+            ? b.contentsSource === 'netMass'
+              ? 'weight'
+              : 'level'
+            : formatPercent(b.gaugePercent)
+        }
       </dd>
       <dt>Contents</dt>
       <dd>${d.format('mass', b.totalMass)}</dd>
@@ -74,7 +76,12 @@ export function renderVerdict(o: FillOutcome | null, d: DisplayUnits, invalid: b
     <ul>
       ${r.findings
         .filter((x) => x.code !== 'standing')
-        .map((x) => html`<li><span class="level ${x.level}">${x.level}</span> ${fillFindingText(x, d)}</li>`)}
+        .map(
+          (x) =>
+            html`<li>
+              <span class="level ${x.level}">${x.level}</span> ${fillFindingText(x, d)}
+            </li>`,
+        )}
     </ul>
     <dl>
       <dt>Float gauge after, as read</dt>
@@ -93,10 +100,12 @@ export function renderVerdict(o: FillOutcome | null, d: DisplayUnits, invalid: b
       <dd>${d.format('mass', r.maxMass, 'down')}</dd>
       <dt>Stop at, at the after temperature</dt>
       <dd>${formatPercent(r.stopAtGaugePercent, 'down')}</dd>
-      ${r.overMass > 0
-        ? html`<dt>Over the limit by (rounded up)</dt>
-            <dd>${d.format('mass', r.overMass, 'up')}</dd>`
-        : nothing}
+      ${
+        r.overMass > 0
+          ? html`<dt>Over the limit by (rounded up)</dt>
+              <dd>${d.format('mass', r.overMass, 'up')}</dd>`
+          : nothing
+      }
       <dt>Liquid temperature after</dt>
       <dd>${d.format('temperature', r.afterTemperature)}</dd>
     </dl>

@@ -536,7 +536,7 @@ export class TanksideApp extends LitElement {
     }
     await this._reload();
     this._setData(
-      `Imported ${parsed.data.tanks.length} tanks and ${parsed.data.checks.length} checks.`,
+      `Imported ${parsed.data.tanks.length} tanks, ${parsed.data.checks.length} checks and ${parsed.data.fills?.length ?? 0} fills.`,
       'ok',
     );
   }
