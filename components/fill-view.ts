@@ -89,7 +89,7 @@ export function renderVerdict(o: FillOutcome | null, d: DisplayUnits, invalid: b
       <dt>Expected from the meter</dt>
       <dd>${formatPercent(r.expectedGaugePercent)}</dd>
       <dt>Reading minus expected</dt>
-      <dd>${r.difference > 0 ? '+' : ''}${pts(r.difference)}</dd>
+      <dd>${r.difference >= 0.05 ? '+' : ''}${pts(r.difference)}</dd>
       <dt>Agreement band</dt>
       <dd>±${pts(r.band.halfWidth, 'down')}</dd>
       <dt>Delivered (by the meter)</dt>

@@ -41,6 +41,15 @@ async function openHomeTank(page: Page): Promise<TankCheckInput> {
   return JSON.parse(json) as TankCheckInput;
 }
 
+/** With FILL_SCREENSHOTS set: the before box, the verdict and the standing caution, as seen at 360 px. */
+async function shoot(page: Page, name: string): Promise<void> {
+  if (!SCREENSHOTS) return;
+  for (const id of ['fill-before', 'fill-verdict', 'fill-standing'])
+    await byTestId(page, id).screenshot({ path: `${SCREENSHOTS}/${name}-${id}.png` });
+  await byTestId(page, 'fill-delivered-volume').scrollIntoViewIfNeeded();
+  await page.screenshot({ path: `${SCREENSHOTS}/${name}-fields.png` });
+}
+
 async function startAFill(page: Page): Promise<void> {
   await byTestId(page, 'fill-start').click();
   await byTestId(page, 'fill-delivered-volume').waitFor();
@@ -113,8 +122,7 @@ describe('a fill, end to end', () => {
     expect(ok.want.expectedGaugePercent).toBeLessThan(80.5);
     expect(ok.text).toContain('agrees with the meter within the band');
     expect(ok.text).toMatch(/lb/);
-    if (SCREENSHOTS)
-      await page.screenshot({ path: `${SCREENSHOTS}/fill-us-consistent.png`, fullPage: true });
+    await shoot(page, 'fill-us-consistent');
     expect(await horizontalOverflow(page)).toBe(0);
     expect(await cutOffElements(page)).toEqual([]);
     await save(page, 1);
@@ -127,8 +135,7 @@ describe('a fill, end to end', () => {
     });
     expect(low.text).toContain('do not rely on it');
     expect(low.text).toContain('site’s procedures');
-    if (SCREENSHOTS)
-      await page.screenshot({ path: `${SCREENSHOTS}/fill-us-low.png`, fullPage: true });
+    await shoot(page, 'fill-us-low');
     await save(page, 2);
 
     await startAFill(page);
@@ -141,8 +148,7 @@ describe('a fill, end to end', () => {
     });
     expect(over.want.overMass).toBeGreaterThan(0);
     expect(over.text).toContain('Over the fill limit after the delivery by');
-    if (SCREENSHOTS)
-      await page.screenshot({ path: `${SCREENSHOTS}/fill-us-over.png`, fullPage: true });
+    await shoot(page, 'fill-us-over');
     await save(page, 3);
 
     await page.reload();
@@ -176,8 +182,7 @@ describe('a fill, end to end', () => {
     expect(r.text).not.toMatch(/\blb\b|gal|°F|psi/);
     const screen = (await byTestId(page, 'fill-screen').textContent()) ?? '';
     expect(screen).not.toMatch(/\blb\b|US gal|°F|psig/);
-    if (SCREENSHOTS)
-      await page.screenshot({ path: `${SCREENSHOTS}/fill-metric.png`, fullPage: true });
+    await shoot(page, 'fill-metric');
     expect(await horizontalOverflow(page)).toBe(0);
     await save(page, 1);
     await page.reload();
