@@ -10,6 +10,8 @@
  *       `site`); nothing else changes.
  *   v3  adds `fills` (key `id`, index `tankId`: saved fill records) and `fillDrafts` (key
  *       `tankId`: a fill under way); nothing else changes.
+ *   (v1) `Readings.takenAt`, an optional ISO time on a draft's or a check's readings, needs no
+ *       step: records without it stay valid (components/reopen.ts uses `updatedAt` / `at`).
  *
  * Every write that must be all-or-nothing (delete a tank with its checks, import a backup,
  * clear) runs in a single transaction, so a failure leaves the stored data as it was.
