@@ -259,10 +259,13 @@ export class TanksideApp extends LitElement {
 
   private async _reload(): Promise<void> {
     if (!this._store) return;
-    const [tanks, checks] = await Promise.all([this._store.listTanks(), this._store.listChecks()]);
+    const [tanks, checks] = await Promise.all([
+      this._store.listTanks(),
+      this._store.listChecks(),
+      this._fill.reload(this._store),
+    ]);
     this._tanks = tanks;
     this._checks = checks;
-    await this._fill.reload(this._store);
   }
 
   private _applyTheme(): void {
