@@ -7,10 +7,11 @@
  * @fires backup-export - `CustomEvent<Record<string, never>>`
  * @fires backup-import - `CustomEvent<{ file: File }>`
  * @fires csv-export - `CustomEvent<Record<string, never>>`
+ * @fires fill-csv-export - `CustomEvent<Record<string, never>>`
  * @fires demo-clear - `CustomEvent<Record<string, never>>`
  * @fires data-clear - `CustomEvent<Record<string, never>>` after the second, confirming tap.
  *
- * data-testid: `backup-export`, `backup-import` (the file input), `csv-export`, `demo-clear`,
+ * data-testid: `backup-export`, `backup-import` (the file input), `csv-export`, `fill-csv-export`, `demo-clear`,
  * `data-clear`, `data-clear-confirm`, `data-clear-backup` (a last-chance backup while asking),
  * `data-clear-cancel`, `data-message`, `storage-persisted`.
  */
@@ -142,10 +143,13 @@ export class BackupPanel extends LitElement {
         <button data-testid="csv-export" @click=${() => this._fire('csv-export', {})}>
           Export checks (CSV)
         </button>
+        <button data-testid="fill-csv-export" @click=${() => this._fire('fill-csv-export', {})}>
+          Export fills (CSV)
+        </button>
       </div>
       <p class="muted">
-        An import adds the backup’s tanks and checks and replaces those with the same id; nothing
-        else is removed. A file that is not a valid backup changes nothing.
+        An import adds the backup’s tanks, checks and fills and replaces those with the same id;
+        nothing else is removed. A file that is not a valid backup changes nothing.
       </p>
       <h3>Clear</h3>
       <div class="buttons">

@@ -5,6 +5,7 @@
  * commit), and draws the chart a moment later so typing never waits for it.
  *
  * @fires check-save - `CustomEvent<{ check: CheckRecord }>` when the user saves the check.
+ * @fires fill-start - `CustomEvent<{ draft: FillDraft }>`: a fill started from the readings on screen.
  * @fires tank-edit - `CustomEvent<{ id: string }>`
  * @fires readings-change - bubbles up from <check-form> (the shell keeps it as a draft).
  * @fires check-delete - bubbles up from <check-history>.
@@ -19,8 +20,8 @@
  * shown (absent while a reading is missing or invalid).
  *
  * data-testid: `check-screen`, `check-save`, `check-share`, `check-print`, `readings-clear`,
- * `check-status`, `tank-heading`, plus those of <check-form>, <check-results>, <check-chart>
- * and <check-history>.
+ * `check-status`, `tank-heading`, `fill-start` (fill-start.ts), plus those of <check-form>,
+ * <check-results>, <check-chart>, <check-history> and <fill-history>.
  */
 import { LitElement, html, nothing, type PropertyValues, type TemplateResult } from 'lit';
 import type { TankCheckResult } from '../thermo/check/types.js';
@@ -33,6 +34,9 @@ import './last-check.js';
 import './check-results.js';
 import './check-chart.js';
 import './check-history.js';
+import './fill-history.js';
+import { fillStartButton } from './fill-start.js';
+import type { FillRecord } from './fill-types.js';
 import type { ReadingsChange } from './check-form.js';
 import { screenErrors, type ScreenErrors } from './check-errors.js';
 import { minTemperatureFor, runCheck, summarize, type CheckOutcome } from './check-input.js';
@@ -73,6 +77,7 @@ export class CheckScreen extends LitElement {
     settings: { attribute: false },
     readings: { attribute: false },
     checks: { attribute: false },
+    fills: { attribute: false },
     last: { attribute: false },
     _readings: { state: true },
     _valid: { state: true },
@@ -90,6 +95,8 @@ export class CheckScreen extends LitElement {
   declare readings: Readings;
   /** Saved checks of this tank. */
   declare checks: CheckRecord[];
+  /** Saved fills of this tank. */
+  declare fills: FillRecord[];
   /** Old readings of this tank kept as a draft (offered for reuse with the saved checks), or null. */
   declare last: LastReadings | null;
   declare _readings: Readings;
@@ -108,6 +115,7 @@ export class CheckScreen extends LitElement {
     this.settings = DEFAULT_SETTINGS;
     this.readings = emptyReadings(DEFAULT_SETTINGS.sunAllowance);
     this.checks = [];
+    this.fills = [];
     this.last = null;
     this._readings = this.readings;
     this._valid = true;
@@ -359,6 +367,8 @@ export class CheckScreen extends LitElement {
             ${this._actions(result)} ${this._chart(result)}
             <h3>History</h3>
             <check-history .checks=${this.checks} .display=${d}></check-history>
+            <h3>Fills</h3>
+            <fill-history .fills=${this.fills} .display=${d}></fill-history>
           </div>
         </div>
       </div>
@@ -370,6 +380,7 @@ export class CheckScreen extends LitElement {
         <button class="primary" data-testid="check-save" ?disabled=${!result} @click=${this._save}>
           Save check
         </button>
+        ${fillStartButton(this, this.tank.id, result ? (this._outcome ?? null) : null, this.settings)}
         <button data-testid="check-share" ?disabled=${!result} @click=${this._share}>
           Share summary
         </button>

@@ -6,6 +6,8 @@
  */
 import type { DisplayUnits } from './display.js';
 import type { Caution } from '../thermo/check/types.js';
+import type { FillFinding, FillParam } from '../thermo/fill/types.js';
+import { formatPercent } from './display.js';
 import type {
   CautionCode,
   CauseCode,
@@ -162,4 +164,81 @@ export function refusalWords(field: string, label: string | undefined): string {
     return 'The model cannot work out this product with these readings; check the product, the temperatures and the contents';
   if (field.startsWith('tank')) return 'A figure of the tank’s nameplate cannot be used';
   return 'The check cannot use these readings together';
+}
+
+// ── fill findings (thermo/fill/findings.ts): the same code + SI params shape ─────────────────
+
+/** The codes a fill's reconciliation can give (thermo/fill/findings.ts). */
+export const FILL_CODES = [
+  'fill-over-limit',
+  'fill-gauge-low',
+  'fill-gauge-high',
+  'fill-consistent',
+  'fill-pressure-off-curve',
+  'fill-interrupted',
+  'fill-nothing-delivered',
+  'fill-from-empty',
+  'fill-same-gauge',
+  'fill-stop-at-moved',
+] as const;
+export type FillCode = (typeof FILL_CODES)[number];
+
+/** A fill parameter in the user's units; `round` toward safety where the entry asks. */
+type FillFmt = (name: string, round?: 'nearest' | 'up' | 'down', negate?: boolean) => string;
+
+const seen = (f: FillFmt) =>
+  `the gauge reads ${f('reading')}; the contents before and the metered delivery put it at ${f('expected')} (agreement band ±${f('band', 'down')})`;
+
+/** One entry per fill code: what the figures show and what to verify; never permission. */
+export const FILL_WORDS: Record<FillCode, (f: FillFmt, v: (name: string) => number) => string> = {
+  'fill-over-limit': (f) =>
+    `Over the fill limit after the delivery by ${f('overMass', 'up')} (about ${f('overVolume', 'up')} of liquid). The limit is ${f('maxMass', 'down')}; the gauge reading stands for ${f('gaugeMass')} and the contents before plus the metered delivery come to ${f('expectedMass')}. A tank over its limit can become liquid-full as it warms. Follow the site’s procedure for an overfilled tank.`,
+  'fill-gauge-low': (f) =>
+    `The gauge reads low: ${seen(f)}. The tank holds about ${f('differenceMass', 'up', true)} (${f('differenceVolume', 'up', true)} of liquid) more than the gauge shows. A gauge that reads low leads to overfilling: do not rely on it for the next fill until it is verified. Check for a sticking float or a loose dial, confirm the contents by weight or with the fixed maximum-level gauge, and follow the site’s procedures.`,
+  'fill-gauge-high': (f) =>
+    `The gauge reads high: ${seen(f)}. The tank holds about ${f('differenceMass', 'down')} less than the gauge shows. Check the meter ticket (the volume, and whether it is temperature-compensated), the temperatures and the gauge.`,
+  'fill-consistent': (f) => `The gauge agrees with the meter within the band: ${seen(f)}.`,
+  'fill-pressure-off-curve': (f, v) =>
+    `The pressure after the delivery, ${f('reading')}, is ${v('difference') < 0 ? 'below' : 'above'} the product’s expected ${f('expected', 'up')} by ${f('difference', 'up', v('difference') < 0)}, more than the ${f('tolerance')} the gauge and the model allow. A different product may have been delivered, the temperature may not have settled, or the pressure gauge may be faulty. Check the delivery ticket’s product and follow the site’s procedures.`,
+  'fill-interrupted': () =>
+    'The delivery was stopped before the intended amount: the comparison uses the volume the meter shows, not the amount ordered.',
+  'fill-nothing-delivered': () =>
+    'The meter shows nothing delivered: the comparison is of the gauge with the contents before, at the after temperature.',
+  'fill-from-empty': () =>
+    'The tank held vapour only before the delivery: the expected level comes from the meter alone, so a gauge that reads low by a fixed amount shows here.',
+  'fill-same-gauge': (f) =>
+    `The contents before were read on the same gauge (${f('beforeReading')}): a gauge off by a fixed amount is off both times and does not show here; a sticking or slipping gauge does. Weighing, or a delivery into an empty tank, shows a fixed error too.`,
+  'fill-stop-at-moved': (f) =>
+    `At the after temperature the stop-at gauge percent is ${f('stopAt', 'down')} (it was ${f('stopAtBefore', 'down')} before).`,
+};
+
+function formatFillParam(d: DisplayUnits, x: FillParam, round: 'nearest' | 'up' | 'down'): string {
+  if (x.quantity === 'gaugePercent') return formatPercent(x.value, round);
+  if (x.quantity === 'gaugePoints')
+    return `${formatPercent(x.value, round).replace(' %', '')} percentage points`;
+  return d.format(x.quantity, x.value, round);
+}
+
+/**
+ * A finding of a fill in the user's words and units. The standing caution, and any code
+ * without an entry or with a parameter missing, keep the engine's own sentence.
+ */
+export function fillFindingText(
+  c: Pick<FillFinding, 'code' | 'message' | 'params'>,
+  d: DisplayUnits,
+): string {
+  const entry = (FILL_WORDS as Partial<Record<string, (typeof FILL_WORDS)[FillCode]>>)[c.code];
+  if (!entry) return c.message;
+  let missing = false;
+  const f: FillFmt = (name, round = 'nearest', negate = false) => {
+    const x = c.params[name];
+    if (!x || !Number.isFinite(x.value)) {
+      missing = true;
+      return '';
+    }
+    return formatFillParam(d, negate ? { ...x, value: -x.value } : x, round);
+  };
+  const v = (name: string) => c.params[name]?.value ?? Number.NaN;
+  const text = entry(f, v);
+  return missing ? c.message : text;
 }

@@ -8,13 +8,15 @@
  * data-testid: `unit-pressure`, `unit-temperature`, `unit-volume`, `unit-mass`, `unit-length`,
  * `baro-mode-standard`, `baro-mode-pressure`, `baro-mode-elevation`, `baro-pressure`,
  * `elevation`, `gauge-accuracy`, `gauge-full-scale`, `thermometer-tolerance`,
- * `default-sun-allowance`, `theme-outdoor`, `number-format`.
+ * `default-sun-allowance`, `theme-outdoor`, `number-format`; the fills' fieldset
+ * (fill-settings.ts): `fill-gauge-points`, `fill-meter-percent`, `fill-meter-compensated-default`.
  */
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles } from './styles.js';
 import { DisplayUnits } from './display.js';
 import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
+import { fillSettingsFieldset } from './fill-settings.js';
 import { unitLabel } from '../thermo/units.js';
 import { DEFAULT_SETTINGS, type BarometerMode, type Settings, type UnitPrefs } from './types.js';
 import {
@@ -301,6 +303,8 @@ export class SettingsForm extends LitElement {
           @value-change=${this._num((st, v) => (v === null ? null : { ...st, thermometerTolerance: v }))}
         ></number-field>
       </fieldset>
+
+      ${fillSettingsFieldset(s, d, (next) => this._emit(next))}
 
       <fieldset>
         <legend>Forecast</legend>

@@ -9,6 +9,7 @@
  */
 import type { NumberFormatId } from './number-parse.js';
 import type { CautionLevel, TankInput, TankPhase } from '../thermo/check/types.js';
+import { FILL_ACCURACY_DEFAULTS } from '../thermo/fill/defaults.js';
 
 /** A tank in the register. */
 export interface TankRecord {
@@ -154,6 +155,12 @@ export interface Settings {
   theme: 'standard' | 'outdoor';
   /** How numbers are typed and shown: decimal mark and digit groups (`auto`: the device's language). */
   numberFormat: NumberFormatId;
+  /** Float gauge accuracy for a fill's reconciliation, ± percentage points per reading. */
+  fillGaugePoints: number;
+  /** Delivery meter accuracy, ± fraction of the delivered volume. */
+  fillMeterFraction: number;
+  /** The delivery meter reads temperature-compensated (60 °F in US units, 15 °C in metric) by default. */
+  fillMeterCompensated: boolean;
 }
 
 export const DEFAULT_SETTINGS: Settings = {
@@ -165,6 +172,10 @@ export const DEFAULT_SETTINGS: Settings = {
   sunAllowance: 5,
   theme: 'outdoor',
   numberFormat: 'auto',
+  // thermo/fill/defaults.ts: common practice (gauge), from memory marked common practice (meter).
+  fillGaugePoints: FILL_ACCURACY_DEFAULTS.gaugePoints,
+  fillMeterFraction: FILL_ACCURACY_DEFAULTS.meterFraction,
+  fillMeterCompensated: true,
 };
 
 /** Empty readings for a new check. */

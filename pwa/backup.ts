@@ -6,8 +6,11 @@
  *
  * Format history:
  *   1  { format: 'tankside-backup', version: 1, exportedAt, tanks, checks, settings }
+ *   2  adds `fills`: fill records (pwa/fill-backup.ts). A format-1 file still imports whole.
  */
 import type { DataSet } from './storage.js';
+import type { FillRecord } from '../thermo/fill/index.js';
+import { FillBackupError, validateBackupFills } from './fill-backup.js';
 import {
   DEFAULT_SETTINGS,
   type CheckRecord,
@@ -20,7 +23,7 @@ import { TEXT_LIMITS } from '../components/limits.js';
 import type { NumberFormatId } from '../components/number-parse.js';
 
 export const BACKUP_FORMAT = 'tankside-backup';
-export const BACKUP_VERSION = 1;
+export const BACKUP_VERSION = 2;
 /** Larger files are refused before they are read (a register of thousands of checks is far smaller). */
 export const BACKUP_MAX_BYTES = 20 * 1024 * 1024;
 
@@ -31,6 +34,8 @@ export interface BackupFile {
   tanks: TankRecord[];
   checks: CheckRecord[];
   settings: Settings | null;
+  /** From format 2 on. */
+  fills?: FillRecord[];
 }
 
 export function makeBackup(data: DataSet, now = new Date()): BackupFile {
@@ -242,6 +247,9 @@ function validateSettings(s: unknown): Settings {
   num(s, 'sunAllowance', where, 0, 40);
   oneOf(s, 'theme', where, ['standard', 'outdoor'] as const);
   oneOf(s, 'numberFormat', where, NUMBER_FORMAT_IDS, true);
+  optNum(s, 'fillGaugePoints', where, 0, 20);
+  optNum(s, 'fillMeterFraction', where, 0, 0.1);
+  bool(s, 'fillMeterCompensated', where, true);
   return { ...DEFAULT_SETTINGS, ...(s as unknown as Settings) };
 }
 
@@ -287,9 +295,10 @@ export function parseBackup(text: string): ParseResult {
     }
     const settings =
       raw.settings === null || raw.settings === undefined ? null : validateSettings(raw.settings);
-    return { ok: true, data: { tanks, checks, settings } };
+    const fills = validateBackupFills(raw.fills, tankIds);
+    return { ok: true, data: { tanks, checks, settings, fills } };
   } catch (e) {
-    if (e instanceof Invalid)
+    if (e instanceof Invalid || e instanceof FillBackupError)
       return {
         ok: false,
         reason: `This backup cannot be imported. ${e.message}. Nothing was changed.`,

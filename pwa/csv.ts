@@ -21,7 +21,7 @@ export function looksLikeFormula(v: string): boolean {
   );
 }
 
-function cell(v: string): string {
+export function csvCell(v: string): string {
   const safe = looksLikeFormula(v) ? `'${v}` : v;
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
@@ -75,18 +75,18 @@ export function checksToCsv(tanks: TankRecord[], checks: CheckRecord[], d: Displ
       const s = c.summary;
       const top = s.cautions.find((x) => x.code !== 'standing');
       return [
-        cell(t?.site ?? ''),
-        cell(t?.name ?? '(deleted tank)'),
-        cell(c.at),
-        cell(c.productLabel),
+        csvCell(t?.site ?? ''),
+        csvCell(t?.name ?? '(deleted tank)'),
+        csvCell(c.at),
+        csvCell(c.productLabel),
         n('temperature', r.liquidTemperature),
-        cell(r.contentsMode),
+        csvCell(r.contentsMode),
         r.gaugePercent === null ? '' : numCell(formatPercent(r.gaugePercent).replace(' %', '')),
         n('length', r.levelHeight),
         n('mass', r.netMass),
         n('gaugePressure', r.gaugePressure),
         n('temperature', s.peakTemperature),
-        cell(s.phase),
+        csvCell(s.phase),
         n('gaugePressure', s.pressure, 'up'),
         n('mass', s.totalMass),
         n('volume', s.liquidVolume),
@@ -94,14 +94,14 @@ export function checksToCsv(tanks: TankRecord[], checks: CheckRecord[], d: Displ
         n('mass', s.maxMass, 'down'),
         n('mass', s.roomLeftMass, 'down'),
         numCell(formatPercent(s.stopAtGaugePercent, 'down').replace(' %', '')),
-        cell(s.binding),
+        csvCell(s.binding),
         n('gaugePressure', s.peakPressure, 'up'),
         n('pressureDifference', s.headroomToDesign, 'down'),
         n('pressureDifference', s.headroomToRelief, 'down'),
         n('temperature', s.liquidFullTemperature, 'down'),
-        cell(top ? `${top.level}: ${top.message}` : ''),
+        csvCell(top ? `${top.level}: ${top.message}` : ''),
         c.demo ? 'yes' : 'no',
       ];
     });
-  return [head.map(cell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';
+  return [head.map(csvCell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';
 }

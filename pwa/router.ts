@@ -7,6 +7,7 @@ export type Route =
   | { name: 'tanks' }
   | { name: 'check'; id: string }
   | { name: 'edit'; id: string }
+  | { name: 'fill'; id: string }
   | { name: 'new' }
   | { name: 'settings' }
   | { name: 'data' }
@@ -26,6 +27,7 @@ export function parseRoute(hash: string): Route {
   if (a === 'tank' && b === 'new' && parts.length === 2) return { name: 'new' };
   if (a === 'tank' && b && parts.length === 2) return { name: 'check', id: b };
   if (a === 'tank' && b && c === 'edit' && parts.length === 3) return { name: 'edit', id: b };
+  if (a === 'tank' && b && c === 'fill' && parts.length === 3) return { name: 'fill', id: b };
   if (a === 'settings' && parts.length === 1) return { name: 'settings' };
   if (a === 'data' && parts.length === 1) return { name: 'data' };
   return { name: 'not-found', path };
@@ -39,6 +41,8 @@ export function href(route: Route): string {
       return `#/tank/${encodeURIComponent(route.id)}`;
     case 'edit':
       return `#/tank/${encodeURIComponent(route.id)}/edit`;
+    case 'fill':
+      return `#/tank/${encodeURIComponent(route.id)}/fill`;
     case 'new':
       return '#/tank/new';
     case 'settings':

@@ -6,6 +6,10 @@
  * once shipped, is never edited — a change is a new step):
  *   v1  stores `tanks` (key `id`, index `site`), `checks` (key `id`, index `tankId`),
  *       `drafts` (key `tankId`), `settings` (out-of-line keys: `settings`, `meta`).
+ *   v2  adds `sites` (key `site`: the site forecast and route) and `walkdowns` (key `id`, index
+ *       `site`); nothing else changes.
+ *   v3  adds `fills` (key `id`, index `tankId`: saved fill records) and `fillDrafts` (key
+ *       `tankId`: a fill under way); nothing else changes.
  *   (v1) `Readings.takenAt`, an optional ISO time on a draft's or a check's readings, needs no
  *       step: records without it stay valid (components/reopen.ts uses `updatedAt` / `at`).
  *
@@ -20,10 +24,12 @@ import {
   type StoreNames,
 } from 'idb';
 import type { CheckRecord, DraftRecord, Settings, TankRecord } from '../components/types.js';
+import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
+import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { isClearableDemo } from './demo-own.js';
 
 export const DB_NAME = 'tankside';
-export const DB_VERSION = 1;
+export const DB_VERSION = 3;
 
 /** Bookkeeping that is not a user setting. */
 export interface Meta {
@@ -42,6 +48,10 @@ export interface TanksideDB extends DBSchema {
   checks: { key: string; value: CheckRecord; indexes: { tankId: string } };
   drafts: { key: string; value: DraftRecord };
   settings: { key: string; value: unknown };
+  sites: { key: string; value: SiteForecast };
+  walkdowns: { key: string; value: WalkdownRecord; indexes: { site: string } };
+  fills: { key: string; value: FillRecord; indexes: { tankId: string } };
+  fillDrafts: { key: string; value: FillDraft };
 }
 
 type UpgradeTx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'versionchange'>;
@@ -57,6 +67,18 @@ export const UPGRADES: readonly UpgradeStep[] = [
     checks.createIndex('tankId', 'tankId');
     db.createObjectStore('drafts', { keyPath: 'tankId' });
     db.createObjectStore('settings');
+  },
+  // 1 → 2: site forecasts and walkdowns (new stores only).
+  (db) => {
+    db.createObjectStore('sites', { keyPath: 'site' });
+    const walks = db.createObjectStore('walkdowns', { keyPath: 'id' });
+    walks.createIndex('site', 'site');
+  },
+  // 2 → 3: fill records and fills under way (new stores only).
+  (db) => {
+    const fills = db.createObjectStore('fills', { keyPath: 'id' });
+    fills.createIndex('tankId', 'tankId');
+    db.createObjectStore('fillDrafts', { keyPath: 'tankId' });
   },
 ];
 
@@ -86,6 +108,12 @@ export interface DataSet {
   tanks: TankRecord[];
   checks: CheckRecord[];
   settings: Settings | null;
+  /** Site forecasts (absent in a backup made before walkdowns). */
+  sites?: SiteForecast[];
+  /** Walkdowns, under way and finished (absent in a backup made before walkdowns). */
+  walkdowns?: WalkdownRecord[];
+  /** Fill records (absent in a backup made before fill records). */
+  fills?: FillRecord[];
 }
 
 export class Store {
@@ -115,35 +143,40 @@ export class Store {
     await this.db.put('tanks', tank);
   }
 
-  /** Deletes a tank with its checks and draft; returns what was removed so it can be restored (undo). */
-  async deleteTank(
-    id: string,
-  ): Promise<{ tank: TankRecord; checks: CheckRecord[]; draft: DraftRecord | undefined } | null> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+  /**
+   * Deletes a tank with its checks, fills and drafts; returns what was removed so it can be
+   * restored (undo).
+   */
+  async deleteTank(id: string): Promise<RemovedTank | null> {
+    const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
+    const tx = this.db.transaction([...names], 'readwrite');
     const tank = await tx.objectStore('tanks').get(id);
     if (!tank) {
       await tx.done;
       return null;
     }
     const checks = await tx.objectStore('checks').index('tankId').getAll(id);
+    const fills = await tx.objectStore('fills').index('tankId').getAll(id);
     const draft = await tx.objectStore('drafts').get(id);
+    const fillDraft = await tx.objectStore('fillDrafts').get(id);
     await tx.objectStore('tanks').delete(id);
     for (const c of checks) await tx.objectStore('checks').delete(c.id);
+    for (const f of fills) await tx.objectStore('fills').delete(f.id);
     await tx.objectStore('drafts').delete(id);
+    await tx.objectStore('fillDrafts').delete(id);
     await tx.done;
-    return { tank, checks, draft };
+    return { tank, checks, draft, fills, fillDraft };
   }
 
   /** Puts back what `deleteTank` removed. */
-  async restoreTank(removed: {
-    tank: TankRecord;
-    checks: CheckRecord[];
-    draft: DraftRecord | undefined;
-  }): Promise<void> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+  async restoreTank(removed: RemovedTank): Promise<void> {
+    const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
+    const tx = this.db.transaction([...names], 'readwrite');
     await tx.objectStore('tanks').put(removed.tank);
     for (const c of removed.checks) await tx.objectStore('checks').put(c);
+    for (const f of removed.fills ?? []) await tx.objectStore('fills').put(f);
     if (removed.draft) await tx.objectStore('drafts').put(removed.draft);
+    if (removed.fillDraft) await tx.objectStore('fillDrafts').put(removed.fillDraft);
     await tx.done;
   }
 
@@ -178,6 +211,74 @@ export class Store {
     await this.db.delete('drafts', tankId);
   }
 
+  // ── site forecasts and walkdowns ───────────────────────────────────────────────────────
+  async getSite(site: string): Promise<SiteForecast | undefined> {
+    return this.db.get('sites', site);
+  }
+
+  async putSite(forecast: SiteForecast): Promise<void> {
+    await this.db.put('sites', forecast);
+  }
+
+  /** Walkdowns of one site (or all), newest first. */
+  async listWalkdowns(site?: string): Promise<WalkdownRecord[]> {
+    const list =
+      site === undefined
+        ? await this.db.getAll('walkdowns')
+        : await this.db.getAllFromIndex('walkdowns', 'site', site);
+    return list.sort((a, b) =>
+      a.startedAt < b.startedAt ? 1 : a.startedAt > b.startedAt ? -1 : 0,
+    );
+  }
+
+  async getWalkdown(id: string): Promise<WalkdownRecord | undefined> {
+    return this.db.get('walkdowns', id);
+  }
+
+  async putWalkdown(w: WalkdownRecord): Promise<void> {
+    await this.db.put('walkdowns', w);
+  }
+
+  async deleteWalkdown(id: string): Promise<void> {
+    await this.db.delete('walkdowns', id);
+  }
+
+  // ── fills ──────────────────────────────────────────────────────────────────────────────
+  /** Fill records of one tank (or all), newest first (by the time the after-readings were saved). */
+  async listFills(tankId?: string): Promise<FillRecord[]> {
+    const list =
+      tankId === undefined
+        ? await this.db.getAll('fills')
+        : await this.db.getAllFromIndex('fills', 'tankId', tankId);
+    return list.sort((a, b) =>
+      a.finishedAt < b.finishedAt ? 1 : a.finishedAt > b.finishedAt ? -1 : 0,
+    );
+  }
+
+  /** Saves a fill record and removes the tank's fill under way, in one transaction. */
+  async putFill(fill: FillRecord): Promise<void> {
+    const tx = this.db.transaction(['fills', 'fillDrafts'], 'readwrite');
+    await tx.objectStore('fills').put(fill);
+    await tx.objectStore('fillDrafts').delete(fill.tankId);
+    await tx.done;
+  }
+
+  async deleteFill(id: string): Promise<void> {
+    await this.db.delete('fills', id);
+  }
+
+  async getFillDraft(tankId: string): Promise<FillDraft | undefined> {
+    return this.db.get('fillDrafts', tankId);
+  }
+
+  async putFillDraft(draft: FillDraft): Promise<void> {
+    await this.db.put('fillDrafts', draft);
+  }
+
+  async deleteFillDraft(tankId: string): Promise<void> {
+    await this.db.delete('fillDrafts', tankId);
+  }
+
   // ── settings and meta ──────────────────────────────────────────────────────────────────
   async getSettings(): Promise<Settings | null> {
     return ((await this.db.get('settings', 'settings')) as Settings | undefined) ?? null;
@@ -198,14 +299,27 @@ export class Store {
 
   // ── whole data set ─────────────────────────────────────────────────────────────────────
   async exportAll(): Promise<DataSet> {
-    const tx = this.db.transaction(['tanks', 'checks', 'settings'], 'readonly');
-    const [tanks, checks, settings] = await Promise.all([
+    const tx = this.db.transaction(
+      ['tanks', 'checks', 'settings', 'sites', 'walkdowns', 'fills'],
+      'readonly',
+    );
+    const [tanks, checks, settings, sites, walkdowns, fills] = await Promise.all([
       tx.objectStore('tanks').getAll(),
       tx.objectStore('checks').getAll(),
       tx.objectStore('settings').get('settings'),
+      tx.objectStore('sites').getAll(),
+      tx.objectStore('walkdowns').getAll(),
+      tx.objectStore('fills').getAll(),
     ]);
     await tx.done;
-    return { tanks, checks, settings: (settings as Settings | undefined) ?? null };
+    return {
+      tanks,
+      checks,
+      settings: (settings as Settings | undefined) ?? null,
+      sites,
+      walkdowns,
+      fills,
+    };
   }
 
   /**
@@ -213,10 +327,16 @@ export class Store {
    * everything else is kept. Settings are replaced when the set has them.
    */
   async importAll(data: DataSet): Promise<void> {
-    const tx = this.db.transaction(['tanks', 'checks', 'settings'], 'readwrite');
+    const tx = this.db.transaction(
+      ['tanks', 'checks', 'settings', 'sites', 'walkdowns', 'fills'],
+      'readwrite',
+    );
     try {
       for (const t of data.tanks) await tx.objectStore('tanks').put(t);
       for (const c of data.checks) await tx.objectStore('checks').put(c);
+      for (const f of data.sites ?? []) await tx.objectStore('sites').put(f);
+      for (const w of data.walkdowns ?? []) await tx.objectStore('walkdowns').put(w);
+      for (const f of data.fills ?? []) await tx.objectStore('fills').put(f);
       if (data.settings) await tx.objectStore('settings').put(data.settings, 'settings');
     } catch (error) {
       // A put that throws before it reaches IndexedDB (a bad key) would not abort by itself.
@@ -227,13 +347,20 @@ export class Store {
     await tx.done;
   }
 
-  /** Removes every tank, check and draft (settings and meta stay). */
+  /** Removes every tank, check, draft, site forecast, walkdown and fill (settings and meta stay). */
   async clearAll(): Promise<void> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+    const tx = this.db.transaction(
+      ['tanks', 'checks', 'drafts', 'sites', 'walkdowns', 'fills', 'fillDrafts'],
+      'readwrite',
+    );
     await Promise.all([
       tx.objectStore('tanks').clear(),
       tx.objectStore('checks').clear(),
       tx.objectStore('drafts').clear(),
+      tx.objectStore('sites').clear(),
+      tx.objectStore('walkdowns').clear(),
+      tx.objectStore('fills').clear(),
+      tx.objectStore('fillDrafts').clear(),
     ]);
     await tx.done;
   }
@@ -272,6 +399,15 @@ export class Store {
     for (const d of removed.drafts) await tx.objectStore('drafts').put(d);
     await tx.done;
   }
+}
+
+/** A tank taken out with everything of it, kept so it can be put back. */
+export interface RemovedTank {
+  tank: TankRecord;
+  checks: CheckRecord[];
+  draft: DraftRecord | undefined;
+  fills?: FillRecord[];
+  fillDraft?: FillDraft | undefined;
 }
 
 /** Records taken out together, kept so they can be put back. */

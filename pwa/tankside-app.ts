@@ -41,6 +41,9 @@ import { checksToCsv } from './csv.js';
 import { claimByCheck, savedByUser } from './demo-own.js';
 import { lastCheckByTank } from './lookups.js';
 import '../components/confirm-bar.js';
+import { FillController } from './fill-route.js';
+import type { FillDraft, FillRecord } from '../components/fill-types.js';
+import { fillsToCsv } from './fill-csv.js';
 
 /** How long an undo offer stays, ms. */
 const UNDO_MS = 12_000;
@@ -105,6 +108,7 @@ export class TanksideApp extends LitElement {
 
   /** The blank tank of the "add a tank" screen, made once per visit so a re-render keeps the typing. */
   private _newTank: TankRecord = blankTank(newId());
+  private readonly _fill = new FillController(this);
   private _store: Store | null = null;
   private _meta: Meta | null = null;
   private _undoTimer: ReturnType<typeof setTimeout> | undefined;
@@ -255,7 +259,11 @@ export class TanksideApp extends LitElement {
 
   private async _reload(): Promise<void> {
     if (!this._store) return;
-    const [tanks, checks] = await Promise.all([this._store.listTanks(), this._store.listChecks()]);
+    const [tanks, checks] = await Promise.all([
+      this._store.listTanks(),
+      this._store.listChecks(),
+      this._fill.reload(this._store),
+    ]);
     this._tanks = tanks;
     this._checks = checks;
   }
@@ -293,6 +301,7 @@ export class TanksideApp extends LitElement {
     if (route.name === 'new' && this._route.name !== 'new') this._newTank = blankTank(newId());
     this._route = route;
     this._dataMessage = '';
+    if (route.name === 'fill' && this._store) await this._fill.open(this._store, route.id);
     if (route.name === 'check' && this._store) {
       const id = route.id;
       const [draft] = await Promise.all([this._store.getDraft(id), this._loadCheckScreen()]);
@@ -425,6 +434,32 @@ export class TanksideApp extends LitElement {
     await this._reload();
   }
 
+  // ── fills ──────────────────────────────────────────────────────────────────────────────
+  private async _startFill(e: CustomEvent<{ draft: FillDraft }>): Promise<void> {
+    if (!this._store) return;
+    await this._fill.start(this._store, e.detail.draft);
+    this._navigate({ name: 'fill', id: e.detail.draft.tankId });
+  }
+
+  private async _saveFill(e: CustomEvent<{ record: FillRecord }>): Promise<void> {
+    if (!this._store) return;
+    await this._fill.save(this._store, e.detail.record, this._tank(e.detail.record.tankId));
+    await this._reload();
+    this._navigate({ name: 'check', id: e.detail.record.tankId });
+  }
+
+  private async _discardFill(e: CustomEvent<{ tankId: string }>): Promise<void> {
+    if (!this._store) return;
+    const store = this._store;
+    const old = await this._fill.discard(store, e.detail.tankId);
+    this._navigate({ name: 'check', id: e.detail.tankId });
+    if (old)
+      this._offerUndo('Discarded the fill under way.', async () => {
+        await store.putFillDraft(old);
+        this._navigate({ name: 'fill', id: old.tankId });
+      });
+  }
+
   private async _deleteCheck(e: CustomEvent<{ id: string }>): Promise<void> {
     if (!this._store) return;
     const store = this._store;
@@ -503,7 +538,7 @@ export class TanksideApp extends LitElement {
     }
     await this._reload();
     this._setData(
-      `Imported ${parsed.data.tanks.length} tanks and ${parsed.data.checks.length} checks.`,
+      `Imported ${parsed.data.tanks.length} tanks, ${parsed.data.checks.length} checks and ${parsed.data.fills?.length ?? 0} fills.`,
       'ok',
     );
   }
@@ -516,6 +551,13 @@ export class TanksideApp extends LitElement {
       checksToCsv(this._tanks, this._checks, d),
     );
     this._setData(`Exported ${this._checks.length} checks as CSV.`, 'ok');
+  }
+
+  private _fillCsv(): void {
+    const d = DisplayUnits.fromSettings(this._settings);
+    const fills = this._fill.fills;
+    download(`tankside-fills-${stamp()}.csv`, 'text/csv', fillsToCsv(this._tanks, fills, d));
+    this._setData(`Exported ${fills.length} fills as CSV.`, 'ok');
   }
 
   private async _clearAll(): Promise<void> {
@@ -603,11 +645,29 @@ export class TanksideApp extends LitElement {
           .readings=${this._draft.readings}
           .last=${this._draft.last}
           .checks=${this._checks.filter((c) => c.tankId === t.id)}
+          .fills=${this._fill.fillsOf(t.id)}
+          @fill-start=${this._startFill}
           @readings-change=${this._onReadings}
           @check-save=${this._saveCheck}
           @check-delete=${this._deleteCheck}
           @tank-edit=${() => this._navigate({ name: 'edit', id: t.id })}
         ></check-screen>`;
+      }
+      case 'fill': {
+        const t = this._tank(r.id);
+        if (!t) return this._missingTank();
+        if (this._fill.error) return html`<p class="error">${this._fill.error}</p>`;
+        if (!this._fill.ready || this._fill.draft === undefined) return html`<p>Loading…</p>`;
+        return html`<fill-screen
+          .tank=${t}
+          .settings=${this._settings}
+          .draft=${this._fill.draft}
+          .fills=${this._fill.fillsOf(t.id)}
+          @fill-draft-change=${(e: CustomEvent<{ draft: FillDraft }>) =>
+            this._store && void this._fill.change(this._store, e.detail.draft)}
+          @fill-save=${this._saveFill}
+          @fill-discard=${this._discardFill}
+        ></fill-screen>`;
       }
       case 'settings':
         return html`<settings-form
@@ -625,6 +685,7 @@ export class TanksideApp extends LitElement {
           @backup-export=${this._export}
           @backup-import=${this._import}
           @csv-export=${this._csv}
+          @fill-csv-export=${this._fillCsv}
           @demo-clear=${this._clearDemo}
           @data-clear=${this._clearAll}
         ></backup-panel>`;
@@ -657,7 +718,7 @@ export class TanksideApp extends LitElement {
               class="button"
               href="#/"
               data-testid="nav-tanks"
-              aria-current=${current(['tanks', 'check', 'edit', 'new'])}
+              aria-current=${current(['tanks', 'check', 'edit', 'new', 'fill'])}
               >Tanks</a
             >
             <a

@@ -2,7 +2,9 @@
 // pwa/ modules as pure functions: backup validation, CSV export, routes and the demo site (run in
 // the browser with the other app tests). Kind: identity / behaviour; records are placeholders.
 import { expect } from '@open-wc/testing';
-import { BACKUP_FORMAT, makeBackup, parseBackup } from '../../pwa/backup.js';
+import { BACKUP_FORMAT, BACKUP_VERSION, makeBackup, parseBackup } from '../../pwa/backup.js';
+import { makeFillRecord, startFill, type FillRecord } from '../../thermo/fill/index.js';
+import { FORMAT1 } from './fixtures/backup-format1.js';
 import { checksToCsv, looksLikeFormula } from '../../pwa/csv.js';
 import { lastCheckByTank } from '../../pwa/lookups.js';
 import { TEXT_LIMITS } from '../../components/limits.js';
@@ -59,16 +61,70 @@ function check(id: string, tankId: string): CheckRecord {
   };
 }
 
+/** A placeholder fill on tank `tankId` (1 m³ water capacity, propane), made by the engine. */
+function fill(id: string, tankId: string): FillRecord {
+  const start = startFill(
+    {
+      tank: { waterCapacity: 1, designPressure: 1.7e6 },
+      product: 'propane',
+      liquidTemperature: 290,
+      contents: { gaugePercent: 20 },
+      peakTemperature: 300,
+    },
+    undefined,
+    new Date('2024-02-01T09:00:00.000Z'),
+  );
+  return makeFillRecord({
+    id,
+    tankId,
+    input: { start, delivered: { volume: 0.3 }, after: { gaugePercent: 50 } },
+    note: 'ticket 12',
+    at: new Date('2024-02-01T09:40:00.000Z'),
+  });
+}
+
 describe('parseBackup', () => {
-  it('parseBackup accepts what makeBackup wrote, unchanged', () => {
+  it('parseBackup accepts what makeBackup wrote, unchanged, fill records included', () => {
     const data = {
       tanks: [tank('a')],
       checks: [check('c', 'a')],
       settings: { ...DEFAULT_SETTINGS, theme: 'standard' as const },
+      fills: [fill('f1', 'a')],
     };
+    expect(makeBackup(data).version).to.equal(BACKUP_VERSION);
     const r = parseBackup(JSON.stringify(makeBackup(data)));
     expect(r.ok).to.equal(true);
     if (r.ok) expect(r.data).to.deep.equal(data);
+  });
+
+  it('parseBackup imports a format-1 backup (before fill records) whole', () => {
+    expect(FORMAT1.version).to.equal(1);
+    const r = parseBackup(JSON.stringify(FORMAT1));
+    expect(r.ok).to.equal(true);
+    if (!r.ok) return;
+    expect(r.data.tanks).to.deep.equal(FORMAT1.tanks);
+    expect(r.data.checks).to.deep.equal(FORMAT1.checks);
+    expect(r.data.settings).to.equal(null);
+    expect(r.data.fills).to.deep.equal([]);
+  });
+
+  it('parseBackup refuses a bad fill record, naming the fill and its field, and a fill of no tank', () => {
+    const base = { tanks: [tank('a')], checks: [], settings: null };
+    const f = fill('f1', 'a');
+    const cases: [unknown, string][] = [
+      [{ ...f, after: { ...f.after, gaugePercent: 140 } }, 'Fill 1: “fill.after.gaugePercent”'],
+      [{ ...f, result: { ...f.result, verdict: 'fine' } }, 'Fill 1: “fill.result.verdict”'],
+      [{ ...f, tankId: 'gone' }, 'belongs to a tank that is not in the file'],
+      ['not a record', 'Fill 1: “fill” must be'],
+    ];
+    for (const [bad, says] of cases) {
+      const r = parseBackup(JSON.stringify({ ...makeBackup(base), fills: [bad] }));
+      expect(r.ok).to.equal(false);
+      if (!r.ok) expect(r.reason).to.contain(says).and.to.contain('Nothing was changed');
+    }
+    const twice = parseBackup(JSON.stringify({ ...makeBackup(base), fills: [f, f] }));
+    expect(twice.ok).to.equal(false);
+    if (!twice.ok) expect(twice.reason).to.contain('same id as another fill');
   });
 
   it('parseBackup refuses a 200 000-character site name and says the limit', () => {

@@ -6,6 +6,9 @@ import { deleteDB } from 'idb';
 import { DB_VERSION, Store, UPGRADES, openAtVersion } from '../../pwa/storage.js';
 import type { CheckRecord, TankRecord } from '../../components/types.js';
 import { DEFAULT_SETTINGS, emptyReadings } from '../../components/types.js';
+import type { SiteForecast, WalkdownRecord } from '../../components/walkdown-types.js';
+import type { FillDraft } from '../../components/fill-types.js';
+import { makeFillRecord, startFill, type FillRecord } from '../../thermo/fill/index.js';
 
 const names: string[] = [];
 function dbName(): string {
@@ -84,7 +87,87 @@ const SEED: Record<number, (db: Awaited<ReturnType<typeof openAtVersion>>) => Pr
     });
     await db.put('settings', { ...DEFAULT_SETTINGS, sunAllowance: 3 }, 'settings');
   },
+  2: async (db) => {
+    await SEED[1]!(db);
+    await db.put('sites', FORECAST);
+    await db.put('walkdowns', walk('w1'));
+  },
+  3: async (db) => {
+    await SEED[2]!(db);
+    await db.put('fills', FILL);
+    await db.put('fillDrafts', FILL_DRAFT);
+  },
 };
+
+// A placeholder fill on the placeholder tank (1 m³ water capacity, propane): the engine's own
+// record, so the stored shape is the real one.
+const FILL_START = startFill(
+  {
+    tank: { waterCapacity: 1, designPressure: 1.7e6 },
+    product: 'propane',
+    liquidTemperature: 290,
+    contents: { gaugePercent: 20 },
+    peakTemperature: 300,
+  },
+  undefined,
+  new Date('2024-01-06T00:00:00.000Z'),
+);
+const FILL: FillRecord = makeFillRecord({
+  id: 'f1',
+  tankId: 't1',
+  input: { start: FILL_START, delivered: { volume: 0.3 }, after: { gaugePercent: 50 } },
+  note: 'placeholder',
+  at: new Date('2024-01-06T00:30:00.000Z'),
+});
+const FILL_DRAFT: FillDraft = {
+  tankId: 't1',
+  start: FILL_START,
+  volume: 0.1,
+  compensated: true,
+  meterTemperature: null,
+  afterGauge: null,
+  afterTemperature: null,
+  afterPressure: null,
+  interrupted: false,
+  note: '',
+  updatedAt: '2024-01-07T00:00:00.000Z',
+};
+
+// Placeholder site forecast and walkdown (not tank data).
+const FORECAST: SiteForecast = {
+  site: 'Site A',
+  days: [310],
+  sunAllowance: 5,
+  tankAllowances: [{ tankId: 't1', sunAllowance: 0 }],
+  enteredAt: '2024-01-04T00:00:00.000Z',
+};
+
+function walk(id: string): WalkdownRecord {
+  return {
+    id,
+    site: 'Site A',
+    status: 'in-progress',
+    startedAt: '2024-01-05T00:00:00.000Z',
+    finishedAt: null,
+    checkedBy: 'A. Person',
+    forecast: FORECAST,
+    entries: [
+      {
+        tankId: 't1',
+        tankName: 'Tank t1',
+        status: 'unreached',
+        readings: check('x', 't1', '').readings,
+        note: '',
+        reason: 'gate locked',
+        at: '2024-01-05T00:10:00.000Z',
+        result: null,
+        problem: '',
+      },
+    ],
+    current: 0,
+    appVersion: 'test',
+  };
+}
 
 describe('storage', () => {
   it('UPGRADES has one step per schema version', () => {
@@ -112,9 +195,23 @@ describe('storage', () => {
         expect((await store.getDraft('t1'))?.updatedAt).to.equal('2024-01-03T00:00:00.000Z');
         expect((await store.getSettings())?.sunAllowance).to.equal(3);
       }
+      if (v >= 2) {
+        expect(await store.getSite('Site A')).to.deep.equal(FORECAST);
+        expect(await store.listWalkdowns('Site A')).to.deep.equal([walk('w1')]);
+      }
+      if (v >= 3) {
+        expect(await store.listFills('t1')).to.deep.equal([FILL]);
+        expect(await store.getFillDraft('t1')).to.deep.equal(FILL_DRAFT);
+      } else {
+        expect(await store.listFills()).to.deep.equal([]);
+      }
       // The current schema is fully usable after the upgrade.
       await store.putTank(tank('t2'));
       expect((await store.listTanks()).length).to.equal(v === 0 ? 1 : 2);
+      await store.putWalkdown(walk('w2'));
+      expect((await store.listWalkdowns()).map((w) => w.id)).to.include('w2');
+      await store.putFill({ ...FILL, id: 'f2', tankId: 't2' });
+      expect((await store.listFills('t2')).map((f) => f.id)).to.deep.equal(['f2']);
       store.close();
     });
   }
@@ -136,8 +233,12 @@ describe('storage', () => {
     await store.putTank(tank('a'));
     await store.putCheck(check('c1', 'a', '2024-01-01T00:00:00.000Z'));
     await store.putDraft({ tankId: 'a', readings: check('x', 'a', '').readings, updatedAt: 'now' });
+    await store.putFill({ ...FILL, tankId: 'a' });
+    await store.putFillDraft({ ...FILL_DRAFT, tankId: 'a' });
     const removed = await store.deleteTank('a');
     expect(removed?.checks.length).to.equal(1);
+    expect(await store.listFills()).to.deep.equal([]);
+    expect(await store.getFillDraft('a')).to.equal(undefined);
     expect(await store.listTanks()).to.deep.equal([]);
     expect(await store.listChecks()).to.deep.equal([]);
     expect(await store.getDraft('a')).to.equal(undefined);
@@ -145,6 +246,8 @@ describe('storage', () => {
     expect((await store.listTanks()).map((t) => t.id)).to.deep.equal(['a']);
     expect((await store.listChecks('a')).map((c) => c.id)).to.deep.equal(['c1']);
     expect((await store.getDraft('a'))?.updatedAt).to.equal('now');
+    expect((await store.listFills('a')).map((f) => f.id)).to.deep.equal(['f1']);
+    expect((await store.getFillDraft('a'))?.volume).to.equal(0.1);
     expect(await store.deleteTank('missing')).to.equal(null);
     store.close();
   });
@@ -154,9 +257,16 @@ describe('storage', () => {
     await store.putTank(tank('a'));
     await store.putCheck(check('c1', 'a', '2024-01-01T00:00:00.000Z'));
     await store.putSettings({ ...DEFAULT_SETTINGS, theme: 'standard' });
+    await store.putSite(FORECAST);
+    await store.putWalkdown(walk('w1'));
+    await store.putFill({ ...FILL, tankId: 'a' });
     const data = await store.exportAll();
+    expect(data.walkdowns?.length).to.equal(1);
+    expect(data.fills?.length).to.equal(1);
     await store.clearAll();
     expect(await store.listTanks()).to.deep.equal([]);
+    expect(await store.listWalkdowns()).to.deep.equal([]);
+    expect(await store.listFills()).to.deep.equal([]);
     await store.importAll(data);
     expect(await store.exportAll()).to.deep.equal(data);
     store.close();
@@ -201,6 +311,19 @@ describe('storage', () => {
     const byId = (a: { id: string }, b: { id: string }) => (a.id < b.id ? -1 : 1);
     expect(after.tanks.sort(byId)).to.deep.equal(before.tanks.sort(byId));
     expect((await store.getDraft('demo-plain'))?.readings.gaugePercent).to.equal(40);
+    store.close();
+  });
+
+  it('Store.putFill saves the record and ends the fill under way; listFills is newest first', async () => {
+    const store = await Store.open(dbName());
+    await store.putFillDraft(FILL_DRAFT);
+    await store.putFill(FILL);
+    const later = { ...FILL, id: 'f9', finishedAt: '2024-02-01T00:00:00.000Z' };
+    await store.putFill(later);
+    expect(await store.getFillDraft('t1')).to.equal(undefined);
+    expect((await store.listFills('t1')).map((f) => f.id)).to.deep.equal(['f9', 'f1']);
+    await store.deleteFill('f9');
+    expect((await store.listFills()).map((f) => f.id)).to.deep.equal(['f1']);
     store.close();
   });
 
