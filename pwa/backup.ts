@@ -6,6 +6,8 @@
  *
  * Format history:
  *   1  { format: 'tankside-backup', version: 1, exportedAt, tanks, checks, settings }
+ *   2  adds `sites` (site forecasts) and `walkdowns` (pwa/walkdown-backup.ts); a version-1 file
+ *      reads as one with neither.
  */
 import type { DataSet } from './storage.js';
 import {
@@ -18,9 +20,11 @@ import {
 } from '../components/types.js';
 import { TEXT_LIMITS } from '../components/limits.js';
 import type { NumberFormatId } from '../components/number-parse.js';
+import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
+import { WalkInvalid, validateWalkData } from './walkdown-backup.js';
 
 export const BACKUP_FORMAT = 'tankside-backup';
-export const BACKUP_VERSION = 1;
+export const BACKUP_VERSION = 2;
 /** Larger files are refused before they are read (a register of thousands of checks is far smaller). */
 export const BACKUP_MAX_BYTES = 20 * 1024 * 1024;
 
@@ -31,10 +35,19 @@ export interface BackupFile {
   tanks: TankRecord[];
   checks: CheckRecord[];
   settings: Settings | null;
+  sites: SiteForecast[];
+  walkdowns: WalkdownRecord[];
 }
 
 export function makeBackup(data: DataSet, now = new Date()): BackupFile {
-  return { format: BACKUP_FORMAT, version: BACKUP_VERSION, exportedAt: now.toISOString(), ...data };
+  return {
+    format: BACKUP_FORMAT,
+    version: BACKUP_VERSION,
+    exportedAt: now.toISOString(),
+    ...data,
+    sites: data.sites ?? [],
+    walkdowns: data.walkdowns ?? [],
+  };
 }
 
 export type ParseResult = { ok: true; data: DataSet } | { ok: false; reason: string };
@@ -283,9 +296,10 @@ export function parseBackup(text: string): ParseResult {
     }
     const settings =
       raw.settings === null || raw.settings === undefined ? null : validateSettings(raw.settings);
-    return { ok: true, data: { tanks, checks, settings } };
+    const { sites, walkdowns } = validateWalkData(raw);
+    return { ok: true, data: { tanks, checks, settings, sites, walkdowns } };
   } catch (e) {
-    if (e instanceof Invalid)
+    if (e instanceof Invalid || e instanceof WalkInvalid)
       return {
         ok: false,
         reason: `This backup cannot be imported. ${e.message}. Nothing was changed.`,

@@ -65,6 +65,8 @@ describe('parseBackup', () => {
       tanks: [tank('a')],
       checks: [check('c', 'a')],
       settings: { ...DEFAULT_SETTINGS, theme: 'standard' as const },
+      sites: [],
+      walkdowns: [],
     };
     const r = parseBackup(JSON.stringify(makeBackup(data)));
     expect(r.ok).to.equal(true);
