@@ -21,13 +21,13 @@ export function looksLikeFormula(v: string): boolean {
   );
 }
 
-function cell(v: string): string {
+export function cell(v: string): string {
   const safe = looksLikeFormula(v) ? `'${v}` : v;
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
 /** A number cell (no formula guard: a negative number is a number). */
-function numCell(text: string): string {
+export function numCell(text: string): string {
   return text === '–' ? '' : text;
 }
 
