@@ -31,6 +31,7 @@ export function walkResult(row: BoardRow): WalkResult | null {
     designPressure: np.designPressure,
     reliefSetPressure: np.reliefSetPressure ?? np.designPressure,
     peakTemperature: r.peak.temperature,
+    peakPhase: r.peak.phase,
     peakLiquidPercent: row.peakLiquidPercent,
     liquidFullMargin: row.liquidFullMargin,
     reliefMargin: row.reliefMargin,

@@ -19,9 +19,8 @@ import {
   STANDING_WALK,
   cautionText,
   forecastText,
-  headroomText,
-  marginText,
   rankedEntries,
+  resultLines,
   walkdownText,
 } from './walkdown-words.js';
 import { formatDate } from './tank-list.js';
@@ -51,15 +50,18 @@ export class WalkdownReport extends LitElement {
       .wrap {
         overflow-x: auto;
       }
+      .line {
+        display: block;
+      }
       table {
         border-collapse: collapse;
-        font-size: 0.85em;
+        font-size: 0.78em;
         width: 100%;
       }
       th,
       td {
         border: 1px solid var(--line);
-        padding: 0.2rem 0.3rem;
+        padding: 0.15rem 0.2rem;
         text-align: left;
         vertical-align: top;
       }
@@ -132,18 +134,16 @@ export class WalkdownReport extends LitElement {
     return html`<div class="wrap">
       <table>
         <caption>
-          Tanks, worst first at the forecast
+          Tanks, worst first at the forecast (liquid and degrees to liquid-full at the peak)
         </caption>
         <thead>
           <tr>
             <th>#</th>
-            <th>Tank</th>
-            <th>Level</th>
+            <th>Tank and level</th>
             <th>Peak (${d.label('gaugePressure')})</th>
-            <th>To relief</th>
-            <th>To design</th>
-            <th>Liquid at peak</th>
-            <th>To liquid-full</th>
+            <th>To relief (${d.label('pressureDifference')})</th>
+            <th>Liquid (%)</th>
+            <th>To full (${d.label('temperatureDifference')})</th>
           </tr>
         </thead>
         <tbody>
@@ -151,16 +151,20 @@ export class WalkdownReport extends LitElement {
             const r = e.result;
             return html`<tr data-testid="walkdown-report-row" data-tank-id=${e.tankId}>
               <td>${i + 1}</td>
-              <td>${e.tankName}</td>
+              <td>
+                ${e.tankName}${r ? html`<br /><b>${LEVEL_SHAPES[r.level]} ${LEVEL_WORDS[r.level]}</b>` : nothing}
+              </td>
               ${
                 r
-                  ? html`<td>${LEVEL_SHAPES[r.level]} ${LEVEL_WORDS[r.level]}</td>
-                      <td class="n">${d.number('gaugePressure', r.summary.peakPressure, 'up')}</td>
-                      <td class="n">${headroomText(r.summary.headroomToRelief, d)}</td>
-                      <td class="n">${headroomText(r.summary.headroomToDesign, d)}</td>
-                      <td class="n">${formatPercent(r.peakLiquidPercent, 'up')}</td>
-                      <td class="n">${marginText(r.liquidFullMargin, d)}</td>`
-                  : html`<td colspan="6">
+                  ? html` <td class="n">
+                        ${d.number('gaugePressure', r.summary.peakPressure, 'up')}
+                      </td>
+                      <td class="n">${shortHeadroom(r.summary.headroomToRelief, d)}</td>
+                      <td class="n">
+                        ${noLiquid(r.peakPhase) ? 'none' : formatPercent(r.peakLiquidPercent, 'up').replace(' %', '')}
+                      </td>
+                      <td class="n">${shortMargin(r.liquidFullMargin, d)}</td>`
+                  : html`<td colspan="5">
                       ${
                         e.status === 'unreached'
                           ? `Could not reach: ${e.reason}`
@@ -187,10 +191,10 @@ export class WalkdownReport extends LitElement {
         ${
           r
             ? html`<p>
-                ${r.productLabel} · design ${d.format('gaugePressure', r.designPressure)} · relief
-                ${d.format('gaugePressure', r.reliefSetPressure)} · peak liquid
-                ${d.format('temperature', r.peakTemperature)}
-              </p>`
+                  ${r.productLabel} · design ${d.format('gaugePressure', r.designPressure)} · relief
+                  ${d.format('gaugePressure', r.reliefSetPressure)}
+                </p>
+                ${resultLines(r, d).map((l) => html`<span class="line">${l}</span>`)}`
             : nothing
         }
         ${
@@ -254,6 +258,24 @@ export class WalkdownReport extends LitElement {
       <p class="standing" role="note">${STANDING_WALK}</p>
     </article>`;
   }
+}
+
+/** No liquid surface at the peak: the liquid percent means nothing there. */
+function noLiquid(phase: string | undefined): boolean {
+  return phase === 'supercritical' || phase === 'vapour-only';
+}
+
+/** A headroom as a bare number (rounded down), or "over N" (rounded up) when exceeded. */
+function shortHeadroom(pa: number, d: DisplayUnits): string {
+  return pa < 0
+    ? `over ${d.number('pressureDifference', -pa, 'up')}`
+    : d.number('pressureDifference', pa, 'down');
+}
+
+/** Degrees to liquid-full (rounded down); "full" when reached at the peak; "–" when never. */
+function shortMargin(k: number | null, d: DisplayUnits): string {
+  if (k === null) return '–';
+  return k <= 0 ? 'full' : d.number('temperatureDifference', k, 'down');
 }
 
 customElements.define('walkdown-report', WalkdownReport);

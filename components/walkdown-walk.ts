@@ -68,13 +68,14 @@ export class WalkdownWalk extends LitElement {
     baseStyles,
     levelStyles,
     css`
-      .bar {
-        position: sticky;
-        top: 0;
-        background: var(--paper);
-        border-bottom: var(--border-width) solid var(--line);
-        padding: 0.4rem 0;
-        z-index: 1;
+      .bar h2 {
+        margin: 0;
+        font-size: 1.1em;
+        overflow-wrap: anywhere;
+      }
+      .bar p {
+        margin: 0.2rem 0 0.5rem;
+        font-weight: 800;
       }
       .go {
         display: grid;

@@ -52,7 +52,7 @@ export function headroomText(pa: number, d: DisplayUnits): string {
 /** Degrees left to liquid-full, rounded down; "already liquid-full" when none are left. */
 export function marginText(k: number | null, d: DisplayUnits): string {
   if (k === null) return 'not reached';
-  if (k <= 0) return 'liquid-full at the peak';
+  if (k <= 0) return 'reached at the peak';
   return `${d.format('temperatureDifference', k, 'down')} away`;
 }
 
@@ -70,7 +70,9 @@ export function resultLines(r: WalkResult, d: DisplayUnits): string[] {
   return [
     `Peak ${d.format('gaugePressure', s.peakPressure, 'up')} at ${d.format('temperature', r.peakTemperature)} liquid`,
     `To relief ${headroomText(s.headroomToRelief, d)} · to design ${headroomText(s.headroomToDesign, d)}`,
-    `Liquid ${formatPercent(r.peakLiquidPercent, 'up')} at the peak · liquid-full ${marginText(r.liquidFullMargin, d)}`,
+    r.peakPhase === 'supercritical' || r.peakPhase === 'vapour-only'
+      ? `No liquid surface at the peak (${r.peakPhase === 'supercritical' ? 'above the critical temperature' : 'vapour only'}) · liquid-full ${marginText(r.liquidFullMargin, d)}`
+      : `Liquid ${formatPercent(r.peakLiquidPercent, 'up')} at the peak · liquid-full ${marginText(r.liquidFullMargin, d)}`,
   ];
 }
 
