@@ -1,12 +1,14 @@
 /**
  * The products a tank can hold, as the app offers them: every fluid the core lists, grouped
- * the way the trade thinks of them, plus the LP-gas blend presets of the check engine. The
+ * the way the trade thinks of them, plus the LP-gas blend presets of the check engine and the
+ * refrigerant blends by id (R-410A …, with their nominal composition). The
  * stored tank keeps only `productId`; `productFor` turns it into the core's `Product`.
  *
  * It reads the core's data tables directly (names, triple points, preset compositions) rather
  * than through thermo/index.ts, so the tank register and the tank form load without the
  * solvers: the engine arrives with the check screen, in its own chunk (first-load budget).
  */
+import { REFRIGERANT_BLENDS } from '../thermo/data/blends.js';
 import { FLUIDS } from '../thermo/data/fluids.js';
 import { LPG_PRESETS } from '../thermo/rules/presets.js';
 import type { Product } from '../thermo/index.js';
@@ -20,6 +22,8 @@ export interface ProductChoice {
   product: Product;
   /** Where a blend preset's composition comes from. */
   source?: string;
+  /** A refrigerant blend's nominal composition in words, e.g. `R-32/R-125 50/50 % by mass`. */
+  composition?: string;
 }
 
 const LP_GAS = new Set(['propane', 'n-butane', 'isobutane', 'propylene', '1-butene', 'isobutene']);
@@ -42,6 +46,25 @@ function presets(): ProductChoice[] {
   }));
 }
 
+const fluidName = (id: string) => FLUIDS.find((f) => f.id === id)?.name ?? id;
+
+/** The refrigerant blends by id (thermo/data/blends.ts), with their nominal composition. */
+function refrigerantBlends(): ProductChoice[] {
+  return REFRIGERANT_BLENDS.map((b) => {
+    const composition = `${b.massFractions.map((c) => fluidName(c.id)).join('/')} ${b.massFractions
+      .map((c) => String(Math.round(c.w * 1000) / 10))
+      .join('/')} % by mass`;
+    return {
+      id: b.id,
+      label: `${b.name} (${composition})`,
+      group: 'Refrigerant' as const,
+      product: b.id,
+      source: b.source,
+      composition,
+    };
+  });
+}
+
 let cached: ProductChoice[] | null = null;
 
 /** Every product choice, LP-gas first. */
@@ -54,7 +77,7 @@ export function productChoices(): ProductChoice[] {
     group: groupOf(f.id),
     product: f.id,
   }));
-  cached = [...presets(), ...fluids].sort(
+  cached = [...presets(), ...refrigerantBlends(), ...fluids].sort(
     (a, b) => order.indexOf(a.group) - order.indexOf(b.group),
   );
   return cached;
@@ -77,8 +100,10 @@ export function productLabel(id: string): string {
 /** Triple-point temperatures of the product's components, K (the lowest the core accepts). */
 export function tripleTemperatures(id: string): number[] {
   const product = productFor(id);
-  const ids =
-    typeof product === 'string'
+  const blend = REFRIGERANT_BLENDS.find((b) => b.id === product);
+  const ids = blend
+    ? blend.massFractions.map((c) => c.id)
+    : typeof product === 'string'
       ? [product]
       : product && 'components' in product
         ? product.components.map((c) => c.id)

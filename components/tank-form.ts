@@ -38,6 +38,8 @@ export const TANK_RANGES = {
   sphereDiameter: { min: 0.05, max: 50 },
   diameter: { min: 0.05, max: 20 },
   shellLength: { min: 0, max: 200 },
+  /** Recovery-cylinder liquid-volume limit, fraction (thermo/rules/recovery.ts). */
+  recoveryFraction: { min: 0.5, max: 0.95 },
 } as const;
 
 export interface TankSaveDetail {
@@ -243,6 +245,45 @@ export class TankForm extends LitElement {
     );
   }
 
+  /** A recovery-cylinder limit belongs to cylinders only: leaving the class drops it. */
+  private _setClass(containerClass: ContainerClass): void {
+    this._setNameplate(
+      containerClass === 'cylinder' ? { containerClass } : { containerClass, recovery: undefined },
+    );
+  }
+
+  /** Recovery-cylinder option (cylinders only): the common-practice liquid-volume limit. */
+  private _recoveryFields() {
+    const np = this._draft.nameplate;
+    if ((np.containerClass ?? 'storage') !== 'cylinder') return nothing;
+    const on = np.recovery !== undefined;
+    return html`<label class="check">
+        <input
+          type="checkbox"
+          data-testid="tank-recovery"
+          .checked=${on}
+          @change=${(e: Event) => this._setNameplate({ recovery: (e.target as HTMLInputElement).checked ? {} : undefined })}
+        />
+        Refrigerant recovery cylinder (adds the usual liquid-volume limit, common practice)
+      </label>
+      ${
+        on
+          ? html`<number-field
+              label="Recovery limit, liquid share of the volume"
+              name="recoveryFraction"
+              quantity="fraction"
+              hint="Common practice: 80 %"
+              testid="tank-recovery-fraction"
+              .display=${this.display}
+              .value=${np.recovery?.fillFraction ?? 0.8}
+              .min=${TANK_RANGES.recoveryFraction.min}
+              .max=${TANK_RANGES.recoveryFraction.max}
+              @value-change=${this._number('recoveryFraction', (v) => this._setNameplate({ recovery: { fillFraction: v ?? 0.8 } }))}
+            ></number-field>`
+          : nothing
+      }`;
+  }
+
   private _productOptions() {
     const groups = new Map<ProductGroup, ReturnType<typeof productChoices>>();
     for (const p of productChoices()) groups.set(p.group, [...(groups.get(p.group) ?? []), p]);
@@ -377,7 +418,7 @@ export class TankForm extends LitElement {
             <select
               id="class"
               data-testid="tank-class"
-              @change=${(e: Event) => this._setNameplate({ containerClass: (e.target as HTMLSelectElement).value as ContainerClass })}
+              @change=${(e: Event) => this._setClass((e.target as HTMLSelectElement).value as ContainerClass)}
             >
               ${CLASSES.map(([v, text]) => html`<option value=${v} ?selected=${(np.containerClass ?? 'storage') === v}>${text}</option>`)}
             </select>
@@ -400,6 +441,7 @@ export class TankForm extends LitElement {
               ${FILL_METHOD_WORDS.map(([v, text]) => html`<option value=${v} ?selected=${fillMethodOf(np) === v}>${text}</option>`)}
             </select>
           </div>
+          ${this._recoveryFields()}
           <number-field
             label="Minimum design metal temperature"
             name="mdmt"

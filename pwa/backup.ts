@@ -142,6 +142,10 @@ function validateTank(t: unknown, i: number): TankRecord {
   bool(np, 'fixedDipTube', nw, true);
   oneOf(np, 'fillMethod', nw, ['gauge', 'fixed-gauge', 'weight'] as const, true);
   optNum(np, 'minDesignMetalTemperature', nw, 73.15, 373.15);
+  if (np.recovery !== undefined) {
+    if (!isObj(np.recovery)) fail(nw, '“recovery” is not an object');
+    optNum(np.recovery, 'fillFraction', `${nw}, recovery`, 0.5, 0.95);
+  }
   if (np.shape !== undefined) {
     const s = np.shape;
     if (!isObj(s)) fail(nw, '“shape” is not an object');

@@ -1,5 +1,6 @@
 /**
- * The demo site shown on first start: six plainly invented tanks at an invented site, each
+ * The demo sites shown on first start: plainly invented tanks at two invented sites (an LP-gas
+ * and gas yard, and a refrigeration van with an R-410A recovery cylinder and an R-454B cylinder), each
  * with invented readings, so a new user sees real results at once. Every name says it is a
  * demo; every record is marked `demo: true`. Clearing them asks once and can be undone; a demo tank
  * the user edits or saves a check on becomes theirs and is never cleared (pwa/demo-own.ts).
@@ -20,9 +21,14 @@ import {
 import type { TankInput } from '../thermo/check/types.js';
 
 export const DEMO_SITE = 'Demo site · Invented Acres, 1 Nowhere Lane (not a real place)';
+/** A second invented site: a refrigeration contractor's van (refrigerant blends). */
+export const DEMO_REFRIGERANT_SITE =
+  'Demo site · Make-Believe Cooling, service van 0 (not a real firm)';
 
 interface DemoSpec {
   key: string;
+  /** Default: DEMO_SITE. */
+  site?: string;
   name: string;
   productId: string;
   nameplate: TankInput;
@@ -128,6 +134,44 @@ function specs(): DemoSpec[] {
       notes: 'Invented for the demo. On an imaginary service van.',
     },
     {
+      key: 'r410a-recovery',
+      site: DEMO_REFRIGERANT_SITE,
+      name: 'Demo: R-410A recovery cylinder',
+      productId: 'r410a',
+      nameplate: {
+        waterCapacity: toSI('volume', 6, 'usgal'),
+        designPressure: psig(400),
+        containerClass: 'cylinder',
+        recovery: { fillFraction: 0.8 },
+      },
+      readings: {
+        liquidTemperature: F(82),
+        contentsMode: 'netMass',
+        netMass: toSI('mass', 38, 'lb'),
+        gaugePressure: psig(262),
+        peakAirTemperature: F(120),
+      },
+      notes: 'Invented for the demo. Behind the seat of a van that does not exist.',
+    },
+    {
+      key: 'r454b',
+      site: DEMO_REFRIGERANT_SITE,
+      name: 'Demo: R-454B cylinder',
+      productId: 'r454b',
+      nameplate: {
+        waterCapacity: toSI('volume', 24, 'L'),
+        designPressure: psig(400),
+        containerClass: 'cylinder',
+      },
+      readings: {
+        liquidTemperature: F(70),
+        contentsMode: 'netMass',
+        netMass: toSI('mass', 42, 'lb'),
+        peakAirTemperature: F(104),
+      },
+      notes: 'Invented for the demo. On an imaginary van shelf.',
+    },
+    {
       key: 'co2',
       name: 'Demo: CO2 cylinder',
       productId: 'carbon-dioxide',
@@ -166,7 +210,7 @@ export function buildDemo(settings: Settings = DEFAULT_SETTINGS, now = new Date(
   for (const s of specs()) {
     const tank: TankRecord = {
       id: `demo-${s.key}-${newId()}`,
-      site: DEMO_SITE,
+      site: s.site ?? DEMO_SITE,
       name: s.name,
       notes: s.notes,
       nameplate: s.nameplate,

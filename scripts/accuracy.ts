@@ -9,7 +9,13 @@
  * The same measurement backs test/thermo/reference.test.ts, which fails on any miss.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
-import { measureAccuracy, measureBlends, TARGETS } from '../test/reference/measure.js';
+import {
+  BLEND_TARGETS,
+  measureAccuracy,
+  measureBlends,
+  measureRefrigerantBlends,
+  TARGETS,
+} from '../test/reference/measure.js';
 
 const rows = measureAccuracy();
 const pct = (x: number | null) => (x === null ? '–' : `${(x * 100).toFixed(3)} %`);
@@ -30,7 +36,14 @@ const lines = [
       `| ${b.mixture} | ${pct(b.bubble)}${mark(b.bubble, TARGETS.bubble)} | ${pct(b.rhoL)} | ${pct(b.rhoV)} | ${b.points} |`,
   ),
   '',
-  `Targets: p_sat ${TARGETS.psat * 100} %, ρ_L ${TARGETS.rhoL * 100} %, ρ_V ${TARGETS.rhoV * 100} %, compressed liquid ${TARGETS.compressed * 100} %, liquid-full temperature ${TARGETS.liquidFullK} K; blends: bubble pressure ${TARGETS.bubble * 100} %. ✗ marks a miss.`,
+  `| refrigerant blend, 233–333 K | bubble p | dew p | bubble liquid ρ | dew vapour ρ | compressed liquid ρ | points |`,
+  `|---|---|---|---|---|---|---|`,
+  ...measureRefrigerantBlends().map((b) => {
+    const t = BLEND_TARGETS;
+    return `| ${b.blend} | ${pct(b.bubble)}${mark(b.bubble, t.bubble)} | ${pct(b.dew)}${mark(b.dew, t.dew)} | ${pct(b.rhoL)}${mark(b.rhoL, t.rhoL)} | ${pct(b.rhoV)}${mark(b.rhoV, t.rhoV)} | ${pct(b.compressed)}${mark(b.compressed, t.compressed)} | ${b.points} |`;
+  }),
+  '',
+  `Targets: p_sat ${TARGETS.psat * 100} %, ρ_L ${TARGETS.rhoL * 100} %, ρ_V ${TARGETS.rhoV * 100} %, compressed liquid ${TARGETS.compressed * 100} %, liquid-full temperature ${TARGETS.liquidFullK} K; LP-gas blends: bubble pressure ${TARGETS.bubble * 100} %; refrigerant blends (reference: Lemmon & Jacobsen 2004, Bell 2023 mixture models, test/reference/blends/): bubble and dew pressure ${BLEND_TARGETS.bubble * 100} %, bubble liquid ρ ${BLEND_TARGETS.rhoL * 100} %, dew vapour ρ ${BLEND_TARGETS.rhoV * 100} %, compressed liquid ${BLEND_TARGETS.compressed * 100} %. ✗ marks a miss.`,
 ];
 const table = lines.join('\n');
 console.log(table);

@@ -128,6 +128,18 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
  * when T lies beyond the end of that curve (the blend's critical region).
  */
 function blendPoint(r: ResolvedProduct, T: number, kind: 'bubble' | 'dew') {
+  if (r.Tmax !== undefined && T > r.Tmax + 1e-9)
+    throw new InputError(
+      'T',
+      `from ${fmt(r.Tmin)} K to ${fmt(r.Tmax)} K (${r.label} is offered up to 1 K or more below the end of its dew curve)`,
+      T,
+      {
+        min: r.Tmin,
+        max: r.Tmax,
+        quantity: 'temperature',
+        note: `(${r.label}: below the end of its dew curve)`,
+      },
+    );
   let point;
   try {
     point = saturationPointAt(r, T, kind);

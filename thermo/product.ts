@@ -2,8 +2,14 @@
  * What the caller calls a product — a listed fluid id, a blend of listed fluids, or a custom
  * fluid given by its constants — resolved and validated into component models.
  */
+import { REFRIGERANT_BLENDS, refrigerantBlendById } from './data/blends.js';
 import { fluidById, FLUIDS } from './data/fluids.js';
-import { interactionParameter } from './data/kij.js';
+import {
+  interactionCurve,
+  interactionParameter,
+  interactionSlope,
+  volumeExcess,
+} from './data/kij.js';
 import { componentModel, MODEL_IDS, type ComponentModel, type ModelId } from './eos/model.js';
 import { InputError } from './errors.js';
 
@@ -38,8 +44,28 @@ export interface ResolvedProduct {
   readonly components: readonly ComponentModel[];
   /** Mole fractions, summing to 1 (normalised after validation). */
   readonly z: readonly number[];
-  /** Binary interaction parameters k_ij (symmetric, zero diagonal). */
+  /** Binary interaction parameters k_ij at T_REF (symmetric, zero diagonal). */
   readonly kij: readonly (readonly number[])[];
+  /**
+   * Temperature slopes of k_ij: k_ij(T) = kij + kijSlope·(T/T_REF − 1), T_REF = 298.15 K
+   * (data/kij.ts). Absent means constant k_ij.
+   */
+  readonly kijSlope?: readonly (readonly number[])[];
+  /** Curvature of k_ij(T): adds kijCurve·(T/T_REF − 1)². Absent means none. */
+  readonly kijCurve?: readonly (readonly number[])[];
+  /**
+   * Binary volume-correction parameters (symmetric, zero diagonal; see mixtureModelVolume in
+   * solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. Absent means plain Kay's rule and no
+   * excess volume.
+   */
+  readonly volumeMixing?: {
+    readonly xi: readonly (readonly number[])[];
+    readonly vE: readonly (readonly number[])[];
+    /** Temperature slope of v^E_ij (per unit of T/T_REF − 1), m³/mol; absent means none. */
+    readonly vESlope?: readonly (readonly number[])[];
+  };
+  /** Highest temperature of a blend offered by id (its dew-curve end, less a margin), K. */
+  readonly Tmax?: number;
   /** Lowest temperature accepted, K: the highest triple point of the components. */
   readonly Tmin: number;
   /** Mixture molar mass, kg/mol. */
@@ -50,7 +76,7 @@ export interface ResolvedProduct {
 /** Highest temperature accepted by the API, K. The models are fitted well below it. */
 export const T_MAX_K = 600;
 
-const KNOWN_IDS = () => FLUIDS.map((f) => f.id).join(', ');
+const KNOWN_IDS = () => [...FLUIDS, ...REFRIGERANT_BLENDS].map((f) => f.id).join(', ');
 
 export function resolveModel(options: ModelOptions | undefined): ModelId {
   const model = options?.model ?? 'tuned';
@@ -72,10 +98,17 @@ export function resolveProduct(product: Product, options?: ModelOptions): Resolv
     const hit = cache.get(key);
     if (hit) return hit;
     const f = fluidById(product);
+    const blend = f ? undefined : refrigerantBlendById(product);
+    if (blend) {
+      const r = resolveBlend(blendComponents(blend.massFractions), model);
+      const named: ResolvedProduct = { ...r, label: blend.name, Tmax: blend.Tmax };
+      cache.set(key, named);
+      return named;
+    }
     if (!f)
       throw new InputError(
         'product',
-        `a listed fluid id (${KNOWN_IDS()}), a blend or a custom fluid`,
+        `a listed fluid or blend id (${KNOWN_IDS()}), a blend or a custom fluid`,
         product,
       );
     const cm = componentModel(f, model);
@@ -122,6 +155,15 @@ export function resolveProduct(product: Product, options?: ModelOptions): Resolv
     'a fluid id, { components: [...] } or { custom: {...} }',
     product,
   );
+}
+
+/** Mole fractions from mass fractions: x_i = (w_i/M_i)/Σ(w_j/M_j). */
+export function blendComponents(
+  massFractions: readonly { readonly id: string; readonly w: number }[],
+): BlendComponent[] {
+  const n = massFractions.map((c) => c.w / fluidById(c.id)!.molarMass);
+  const sum = n.reduce((s, x) => s + x, 0);
+  return massFractions.map((c, i) => ({ id: c.id, moleFraction: n[i]! / sum }));
 }
 
 function resolveCustom(c: CustomFluid, model: ModelId): ResolvedProduct {
@@ -193,6 +235,27 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
   const kij = fluids.map((fi) =>
     fluids.map((fj) => (fi === fj ? 0 : interactionParameter(fi.id, fj.id, model))),
   );
+  const kijSlope = fluids.map((fi) =>
+    fluids.map((fj) => (fi === fj ? 0 : interactionSlope(fi.id, fj.id, model))),
+  );
+  const kijCurve = fluids.map((fi) =>
+    fluids.map((fj) => (fi === fj ? 0 : interactionCurve(fi.id, fj.id, model))),
+  );
+  const excess = fluids.map((fi) =>
+    fluids.map((fj) =>
+      fi === fj ? { xi: 0, vE: 0, vESlope: 0 } : volumeExcess(fi.id, fj.id, model),
+    ),
+  );
+  const hasExcess = excess.some((row) =>
+    row.some((e) => e.xi !== 0 || e.vE !== 0 || e.vESlope !== 0),
+  );
+  const volumeMixing = hasExcess
+    ? {
+        xi: excess.map((r) => r.map((e) => e.xi)),
+        vE: excess.map((r) => r.map((e) => e.vE)),
+        vESlope: excess.map((r) => r.map((e) => e.vESlope)),
+      }
+    : undefined;
   return {
     label: kept
       .map((c, i) => `${fluids[i]!.name} ${(c.moleFraction * 100).toFixed(1)} %`)
@@ -200,6 +263,9 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
     components,
     z,
     kij,
+    kijSlope,
+    kijCurve,
+    volumeMixing,
     Tmin: Math.max(...fluids.map((f) => f.Ttriple)),
     molarMass: fluids.reduce((s, f, i) => s + f.molarMass * z[i]!, 0),
     model: components.every((c) => c.model === 'tuned') ? 'tuned' : (components[0]?.model ?? model),

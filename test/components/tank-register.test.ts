@@ -227,6 +227,55 @@ describe('tank-form', () => {
     );
   });
 
+  it('tank-form lists R-410A with its composition and keeps a recovery limit for cylinders only', async () => {
+    const el = await fixture<TankForm>(
+      html`<tank-form .tank=${blankTank('r1')} .display=${metric}></tank-form>`,
+    );
+    typeText(byTestId(el, 'tank-name') as HTMLInputElement, 'Van cylinder');
+    typeText(byTestId(el, 'tank-water-capacity') as HTMLInputElement, '22,7');
+    typeText(byTestId(el, 'tank-design-pressure') as HTMLInputElement, '27,6');
+    const select = byTestId(el, 'tank-product') as HTMLSelectElement;
+    const option = select.querySelector<HTMLOptionElement>('option[value="r410a"]')!;
+    // Nominal composition: test/reference/blends/README.md (R-32/R-125 50/50 by mass).
+    expect(option.textContent).to.contain('R-410A (R-32/R-125 50/50 % by mass)');
+    expect((option.parentElement as HTMLOptGroupElement).label).to.equal('Refrigerant');
+    select.value = 'r410a';
+    select.dispatchEvent(new Event('change'));
+    expect(deep(el, '[data-testid="tank-recovery"]')).to.equal(null);
+    const cls = byTestId(el, 'tank-class') as HTMLSelectElement;
+    cls.value = 'cylinder';
+    cls.dispatchEvent(new Event('change'));
+    await el.updateComplete;
+    byTestId(el, 'tank-recovery').click();
+    await el.updateComplete;
+    typeText(byTestId(el, 'tank-recovery-fraction') as HTMLInputElement, '75');
+    await el.updateComplete;
+    const ev = oneEvent(el, 'tank-save');
+    byTestId(el, 'tank-save').click();
+    const { tank: t } = ((await ev) as CustomEvent<TankSaveDetail>).detail;
+    expect(t.productId).to.equal('r410a');
+    expect(t.nameplate.recovery?.fillFraction).to.be.closeTo(0.75, 1e-12);
+    // Out of range: refused with the range named.
+    typeText(byTestId(el, 'tank-recovery-fraction') as HTMLInputElement, '99');
+    await el.updateComplete;
+    let fired = false;
+    el.addEventListener('tank-save', () => (fired = true));
+    byTestId(el, 'tank-save').click();
+    await el.updateComplete;
+    expect(fired).to.equal(false);
+    expect(deep(el, FIELD_ERROR)?.textContent).to.match(/must be from 50.* to 95/);
+    // Leaving the cylinder class drops the recovery limit.
+    typeText(byTestId(el, 'tank-recovery-fraction') as HTMLInputElement, '80');
+    cls.value = 'storage';
+    cls.dispatchEvent(new Event('change'));
+    await el.updateComplete;
+    expect(deep(el, '[data-testid="tank-recovery"]')).to.equal(null);
+    const ev2 = oneEvent(el, 'tank-save');
+    byTestId(el, 'tank-save').click();
+    const saved = ((await ev2) as CustomEvent<TankSaveDetail>).detail.tank;
+    expect(saved.nameplate.recovery).to.equal(undefined);
+  });
+
   it('tank-form asks for the dimensions when a shape is chosen', async () => {
     const el = await fixture<TankForm>(
       html`<tank-form .tank=${tank('s1', 'S', 'Shape')} .display=${metric}></tank-form>`,

@@ -7,7 +7,7 @@ import { checksToCsv, looksLikeFormula } from '../../pwa/csv.js';
 import { lastCheckByTank } from '../../pwa/lookups.js';
 import { TEXT_LIMITS } from '../../components/limits.js';
 import { href, parseRoute } from '../../pwa/router.js';
-import { buildDemo, DEMO_SITE } from '../../pwa/demo.js';
+import { buildDemo, DEMO_REFRIGERANT_SITE, DEMO_SITE } from '../../pwa/demo.js';
 import { DisplayUnits } from '../../components/display.js';
 import { blankTank } from '../../components/tank-form.js';
 import {
@@ -272,15 +272,19 @@ describe('router', () => {
 });
 
 describe('buildDemo', () => {
-  it('buildDemo makes six plainly invented tanks at one invented site, all marked demo, each with readings', () => {
+  it('buildDemo makes eight plainly invented tanks at two invented sites, all marked demo, each with readings', () => {
     const demo = buildDemo();
-    expect(demo.tanks).to.have.length(6);
+    expect(demo.tanks).to.have.length(8);
     for (const t of demo.tanks) {
       expect(t.demo).to.equal(true);
-      expect(t.site).to.equal(DEMO_SITE);
+      expect([DEMO_SITE, DEMO_REFRIGERANT_SITE]).to.include(t.site);
       expect(t.name).to.match(/^Demo: /);
     }
     expect(DEMO_SITE).to.contain('not a real place');
+    expect(DEMO_REFRIGERANT_SITE).to.contain('not a real firm');
+    // The refrigeration van: an R-410A recovery cylinder and an R-454B cylinder.
+    const van = demo.tanks.filter((t) => t.site === DEMO_REFRIGERANT_SITE);
+    expect(van.map((t) => t.productId).sort()).to.deep.equal(['r410a', 'r454b']);
     expect(demo.drafts.map((d) => d.tankId)).to.deep.equal(demo.tanks.map((t) => t.id));
     for (const d of demo.drafts) expect(d.readings.liquidTemperature).to.be.a('number');
   });

@@ -5,8 +5,10 @@
  */
 import { readFileSync } from 'node:fs';
 import { splitLine } from '../../scripts/lib/csv.js';
-import { closedTank, liquidDensity, saturation } from '../../thermo/index.js';
+import { closedTank, dewPoint, liquidDensity, saturation } from '../../thermo/index.js';
+import { REFRIGERANT_BLENDS } from '../../thermo/data/blends.js';
 import { fluidById } from '../../thermo/data/fluids.js';
+import { T_FIT_MAX, T_FIT_MIN } from './blend-rows.js';
 
 export const TARGETS = {
   psat: 0.005,
@@ -139,4 +141,63 @@ export function measureBlends(): BlendAccuracyRow[] {
     byName.set(r.mixture!, row);
   }
   return [...byName.values()];
+}
+
+/** Targets of the refrigerant blends over 233.15–333.15 K (relative, worst case). */
+export const BLEND_TARGETS = {
+  bubble: 0.005,
+  dew: 0.005,
+  rhoL: 0.005,
+  rhoV: 0.02,
+  compressed: 0.01,
+} as const;
+
+export interface RefrigerantAccuracyRow {
+  blend: string;
+  bubble: number;
+  dew: number;
+  rhoL: number;
+  rhoV: number;
+  compressed: number;
+  points: number;
+}
+
+/**
+ * Worst deviations per refrigerant blend (by product id) from test/reference/blends/ (Lemmon &
+ * Jacobsen 2004 and Bell 2023 mixture models), over T_FIT_MIN…T_FIT_MAX; `rows` picks the
+ * table rows (all, fitted or held-out).
+ */
+export function measureRefrigerantBlends(
+  rows: (T: number) => boolean = () => true,
+): RefrigerantAccuracyRow[] {
+  return REFRIGERANT_BLENDS.map(({ id }) => {
+    const inRange = (T: number) => T >= T_FIT_MIN - 1e-9 && T <= T_FIT_MAX + 1e-9 && rows(T);
+    const row: RefrigerantAccuracyRow = {
+      blend: id,
+      bubble: 0,
+      dew: 0,
+      rhoL: 0,
+      rhoV: 0,
+      compressed: 0,
+      points: 0,
+    };
+    for (const r of readTable(`blends/${id}.csv`)) {
+      const T = +r.T_K!;
+      if (!inRange(T)) continue;
+      const b = saturation(id, T);
+      const d = dewPoint(id, T);
+      row.bubble = Math.max(row.bubble, rel(b.p, +r.p_bubble_Pa!));
+      row.dew = Math.max(row.dew, rel(d.p, +r.p_dew_Pa!));
+      row.rhoL = Math.max(row.rhoL, rel(b.rhoL, +r.rhoL_bubble_kg_m3!));
+      row.rhoV = Math.max(row.rhoV, rel(d.rhoV, +r.rhoV_dew_kg_m3!));
+      row.points += 4;
+    }
+    for (const r of readTable(`blends/${id}-liquid.csv`)) {
+      const T = +r.T_K!;
+      if (!inRange(T)) continue;
+      row.compressed = Math.max(row.compressed, rel(liquidDensity(id, T, +r.p_Pa!), +r.rho_kg_m3!));
+      row.points++;
+    }
+    return row;
+  });
 }

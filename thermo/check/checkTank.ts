@@ -134,6 +134,7 @@ function check(input: TankCheckInput): TankCheckResult {
     satNow,
     totalMass,
     waterWeight,
+    recovery: input.tank.recovery,
   });
 
   // --- Peak. ---

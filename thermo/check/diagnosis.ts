@@ -11,6 +11,7 @@
  * checked against reference bubble pressures in the tests.
  */
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
+import { compositionShiftCauses } from './blendShift.js';
 import { ProductModel, type State } from './model.js';
 import { saturationTemperature } from './search.js';
 import type { DiagnosisResult } from './types.js';
@@ -56,6 +57,7 @@ export function diagnose(
     causes.push(
       'Air or another non-condensable gas in the vapour space (for example a new or opened tank that was not purged).',
     );
+    causes.push(...compositionShiftCauses(model.product, c.T, verdict));
     causes.push(
       'Lighter components than the product entered (for example ethane or propane in butane).',
     );
@@ -76,6 +78,7 @@ export function diagnose(
     causes.push(
       'The liquid is colder than the thermometer shows (a recent withdrawal or venting chills the liquid).',
     );
+    causes.push(...compositionShiftCauses(model.product, c.T, verdict));
     causes.push('Heavier components than the product entered (for example butane in propane).');
     causes.push('A different product from the one entered.');
     causes.push(

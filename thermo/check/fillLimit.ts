@@ -15,6 +15,7 @@
 import type { Product } from '../product.js';
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
 import { fillingRule, referenceRules } from '../rules/gases.js';
+import { recoveryLimit, type RecoveryInput } from '../rules/recovery.js';
 import { dot4lRule } from '../rules/refrigerated.js';
 import { volumeRules } from '../rules/volumeLimits.js';
 import type { ProductModel, Sat } from './model.js';
@@ -37,6 +38,8 @@ export interface FillLimitContext {
   totalMass: number;
   /** Water weight capacity at 60 °F (in air), kg. */
   waterWeight: number;
+  /** A refrigerant recovery cylinder's own limit (tank.recovery), when it is one. */
+  recovery?: RecoveryInput;
 }
 
 export interface FillLimitOutcome {
@@ -151,6 +154,8 @@ function physicalLimits(k: FillLimitContext, limits: LimitEntry[]): number[] {
       'physics of a closed tank (a liquid-full tank’s pressure climbs steeply with temperature); the same principle as 49 CFR 173.304(b) — common practice for storage',
     referenceTemperature: Math.max(c.Tpeak, c.T),
   });
+  const recovery = recoveryLimit(k.recovery, c.T);
+  if (recovery) refs.push({ ...recovery, kind: 'rule' });
   const skipped: number[] = [];
   for (const r of refs) {
     const s = model.sat(r.referenceTemperature);
@@ -158,7 +163,8 @@ function physicalLimits(k: FillLimitContext, limits: LimitEntry[]): number[] {
       skipped.push(r.referenceTemperature);
       continue;
     }
-    const mass = floorTo(c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
+    const share = r.id === 'recovery-cylinder' ? (recovery?.fraction ?? 1) : 1;
+    const mass = floorTo(share * c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
     limits.push({
       id: r.id,
       kind: r.kind,

@@ -10,6 +10,7 @@ import type { Product } from '../product.js';
 import type { FillMethod } from '../rules/volumeLimits.js';
 
 export type { FillMethod };
+import type { RecoveryInput } from '../rules/recovery.js';
 
 /** Where the container sits. A partly buried container counts as aboveground (29 CFR 1910.110(d)(7)(iv)(e)). */
 export type Placement = 'aboveground' | 'underground';
@@ -77,6 +78,11 @@ export interface TankInput {
   fixedDipTube?: boolean;
   /** Shape and inside dimensions; needed only for `contents.levelHeight`. */
   shape?: TankShape;
+  /**
+   * A refrigerant recovery cylinder: adds the technician's usual liquid-volume limit
+   * (common practice, default 80 % of the water capacity; see rules/recovery.ts). Optional.
+   */
+  recovery?: RecoveryInput;
   /** Minimum design metal temperature from the nameplate, K. Optional. */
   minDesignMetalTemperature?: number;
 }

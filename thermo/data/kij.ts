@@ -1,6 +1,8 @@
 /**
  * Binary interaction parameters k_ij for the van der Waals one-fluid rule,
- * a_ij = √(a_i·a_j)·(1 − k_ij). Pairs not listed use 0, which the cubic literature commonly
+ * a_ij = √(a_i·a_j)·(1 − k_ij), with k_ij(T) = k_ij + k'_ij·t + k''_ij·t², t = T/T_REF_KIJ − 1,
+ * where a temperature dependence is fitted (the HFC/HFO pairs of the refrigerant blends, data/kij-fitted.ts, written by
+ * scripts/fit-blends.ts). Pairs not listed use 0, which the cubic literature commonly
  * takes for chemically similar pairs (light alkanes, alkenes, HFC refrigerants of one family).
  *
  * The listed hydrocarbon pairs were checked against the reference bubble-point table
@@ -11,11 +13,24 @@
  * non-zero value is justified by that data.
  */
 
+import { FITTED_PAIRS } from './kij-fitted.js';
+
+/** Reference temperature of the k_ij slopes, K. */
+export const T_REF_KIJ = 298.15;
+
 interface PairEntry {
   readonly a: string;
   readonly b: string;
-  /** k_ij for the tuned model. */
+  /** k_ij for the tuned model (at T_REF_KIJ). */
   readonly tuned: number;
+  /** Temperature slope for the tuned model: k_ij(T) = tuned + tunedSlope·(T/T_REF_KIJ − 1). */
+  readonly tunedSlope?: number;
+  /** Curvature for the tuned model: adds tunedCurve·(T/T_REF_KIJ − 1)². */
+  readonly tunedCurve?: number;
+  /** Volume-correction excesses for the tuned model (solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. */
+  readonly xi?: number;
+  readonly vE?: number;
+  readonly vESlope?: number;
   /** k_ij for textbook PR and SRK. */
   readonly textbook: number;
   readonly source: string;
@@ -28,10 +43,52 @@ export const PAIRS: readonly PairEntry[] = [
   { a: 'propane', b: 'n-butane', tuned: 0, textbook: 0, source: CHECKED_ZERO },
   { a: 'ethane', b: 'propane', tuned: 0, textbook: 0, source: CHECKED_ZERO },
   { a: 'ethane', b: 'n-butane', tuned: 0, textbook: 0, source: CHECKED_ZERO },
+  // HFC/HFO pairs of the refrigerant blends: fitted for the tuned model only (textbook PR and
+  // SRK keep 0, as the literature defaults they are measured against).
+  ...FITTED_PAIRS.map((p) => ({
+    a: p.a,
+    b: p.b,
+    tuned: p.k,
+    tunedSlope: p.slope,
+    tunedCurve: p.curve,
+    xi: p.xi,
+    vE: p.vE,
+    vESlope: p.vESlope,
+    textbook: 0,
+    source: p.source,
+  })),
 ];
 
+function pair(a: string, b: string): PairEntry | undefined {
+  return PAIRS.find((p) => (p.a === a && p.b === b) || (p.a === b && p.b === a));
+}
+
 export function interactionParameter(a: string, b: string, model: string): number {
-  const e = PAIRS.find((p) => (p.a === a && p.b === b) || (p.a === b && p.b === a));
+  const e = pair(a, b);
   if (!e) return 0;
   return model === 'tuned' ? e.tuned : e.textbook;
+}
+
+/** Temperature slope of k_ij (0 for constant pairs and the textbook models). */
+export function interactionSlope(a: string, b: string, model: string): number {
+  const e = pair(a, b);
+  return e && model === 'tuned' ? (e.tunedSlope ?? 0) : 0;
+}
+
+/** Curvature of k_ij(T) (0 where not fitted). */
+export function interactionCurve(a: string, b: string, model: string): number {
+  const e = pair(a, b);
+  return e && model === 'tuned' ? (e.tunedCurve ?? 0) : 0;
+}
+
+/** Volume-correction excesses ξ_ij (K) and v^E_ij (m³/mol) of a pair; zero where not fitted. */
+export function volumeExcess(
+  a: string,
+  b: string,
+  model: string,
+): { xi: number; vE: number; vESlope: number } {
+  const e = pair(a, b);
+  return e && model === 'tuned'
+    ? { xi: e.xi ?? 0, vE: e.vE ?? 0, vESlope: e.vESlope ?? 0 }
+    : { xi: 0, vE: 0, vESlope: 0 };
 }

@@ -31,6 +31,14 @@ export const REFRIGERANT_NOS_IDS: readonly string[] = [
   'r143a',
   'r1234yf',
   'r1234ze-e',
+  // The refrigerant blends by id (thermo/data/blends.ts): the n.o.s. entry names R-404A, R-407C
+  // and R-410A among its examples (test/reference/trade/FACTS.md a3); R-507A and R-454B are not
+  // named either and take the same entry.
+  'r410a',
+  'r404a',
+  'r407c',
+  'r507a',
+  'r454b',
 ];
 
 /** Products that 49 CFR 173.304(b) lets be liquid full at 131 °F in DOT cylinders. */

@@ -1,6 +1,7 @@
 /**
  * Mixtures with the van der Waals one-fluid rule:
- *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij),  b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
+ *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij(T)),  k_ij(T) = k_ij + k'_ij·t + k''_ij·t²,
+ *   t = T/T_REF − 1 (data/kij.ts),  b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
  * Fugacity coefficients of the generic cubic:
  *   ln φ_i = (b_i/b)(Z − 1) − ln(Z − B) − (A/B)·(2·Σ_j x_j·a_ij/a − b_i/b)·L − c_i·p/(R·T),
  * with L = ln((Z + δ1·B)/(Z + δ2·B))/(δ1 − δ2). The translation term is the same in every
@@ -9,6 +10,7 @@
 import { R_J_molK } from '../constants.js';
 import { ConvergenceError } from '../errors.js';
 import { compressibilityRoots, dPdv, logTerm } from '../eos/cubic.js';
+import { T_REF_KIJ } from '../data/kij.js';
 import { correctedVolume, correctionAtT } from '../eos/volumeCorrection.js';
 import type { ResolvedProduct } from '../product.js';
 import type { RootChoice } from './pure.js';
@@ -47,9 +49,14 @@ export function mixtureAtT(product: ResolvedProduct, T: number): MixtureAtT {
     M[i] = m.molarMass;
   });
   const aij = new Float64Array(n * n);
+  const t = T / T_REF_KIJ - 1;
   for (let i = 0; i < n; i++)
-    for (let j = 0; j < n; j++)
-      aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - (product.kij[i]?.[j] ?? 0));
+    for (let j = 0; j < n; j++) {
+      const k =
+        (product.kij[i]?.[j] ?? 0) +
+        t * ((product.kijSlope?.[i]?.[j] ?? 0) + t * (product.kijCurve?.[i]?.[j] ?? 0));
+      aij[i * n + j] = Math.sqrt(a[i]! * a[j]!) * (1 - k);
+    }
   return { T, n, aij, b, Tc, vcCub, M, product };
 }
 
@@ -143,6 +150,12 @@ export function phaseAt(
  * near-critical shape of c_i(T) then follows the blend's own critical region instead of
  * switching on at each component's Tc (a propane-rich liquid at 370 K is far from critical even
  * though propane alone would be). For a pure fluid this is exactly the pure-fluid correction.
+ * Where a product carries fitted binary volume parameters (the refrigerant blends,
+ * data/kij-fitted.ts), the pseudo-critical temperature gets a quadratic excess,
+ * Tpc = Σ x_i·Tc_i + Σ_i Σ_j x_i·x_j·ξ_ij (the form of the reducing temperature of the
+ * multi-fluid mixture models), and the translation an excess volume Σ_i Σ_j x_i·x_j·v^E_ij(T),
+ * v^E_ij(T) = v^E_ij + v^E′_ij·(T/T_REF − 1);
+ * both act after equilibrium, like the rest of the correction.
  */
 export function mixtureModelVolume(
   mx: MixtureAtT,
@@ -154,6 +167,15 @@ export function mixtureModelVolume(
   let Tpc = 0;
   for (let i = 0; i < mx.n; i++) Tpc += x[i]! * mx.Tc[i]!;
   let c = 0;
+  const vm = mx.product.volumeMixing;
+  const tRef = mx.T / T_REF_KIJ - 1;
+  if (vm)
+    for (let i = 0; i < mx.n; i++)
+      for (let j = 0; j < mx.n; j++) {
+        const xx = x[i]! * x[j]!;
+        Tpc += xx * (vm.xi[i]?.[j] ?? 0);
+        c += xx * ((vm.vE[i]?.[j] ?? 0) + tRef * (vm.vESlope?.[i]?.[j] ?? 0));
+      }
   let delta = 0;
   let eps = 0;
   let vc = 0;
