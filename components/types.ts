@@ -148,6 +148,8 @@ export interface Settings {
   theme: 'standard' | 'outdoor';
   /** How numbers are typed and shown: decimal mark and digit groups (`auto`: the device's language). */
   numberFormat: NumberFormatId;
+  /** Days after which a tank's readings no longer count on the site board (it then needs a reading). */
+  staleReadingDays: number;
 }
 
 export const DEFAULT_SETTINGS: Settings = {
@@ -159,6 +161,7 @@ export const DEFAULT_SETTINGS: Settings = {
   sunAllowance: 5,
   theme: 'outdoor',
   numberFormat: 'auto',
+  staleReadingDays: 7,
 };
 
 /** Empty readings for a new check. */

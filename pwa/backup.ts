@@ -255,6 +255,7 @@ function validateSettings(s: unknown): Settings {
   num(s, 'sunAllowance', where, 0, 40);
   oneOf(s, 'theme', where, ['standard', 'outdoor'] as const);
   oneOf(s, 'numberFormat', where, NUMBER_FORMAT_IDS, true);
+  optNum(s, 'staleReadingDays', where, 1, 365);
   return { ...DEFAULT_SETTINGS, ...(s as unknown as Settings) };
 }
 

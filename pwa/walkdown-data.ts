@@ -20,7 +20,8 @@ export function siteOf(t: TankRecord): string {
 
 /** The age limit of readings for the board, days (Settings, default 7). */
 export function staleDays(settings: Settings): number {
-  const d = (settings as Settings & { staleReadingDays?: number }).staleReadingDays;
+  // Settings from before this field was added have none.
+  const d = settings.staleReadingDays as number | undefined;
   return typeof d === 'number' && Number.isFinite(d) && d > 0 ? d : DEFAULT_STALE_DAYS;
 }
 
