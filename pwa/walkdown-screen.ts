@@ -148,7 +148,13 @@ export class SiteScreen extends LitElement {
     }
     this._rows = rankRows(rows);
     this._computing = null;
-    this.dispatchEvent(new CustomEvent('board-ready', { detail: { tanks: rows.length } }));
+    this.dispatchEvent(
+      new CustomEvent('board-ready', {
+        detail: { tanks: rows.length },
+        bubbles: true,
+        composed: true,
+      }),
+    );
   }
 
   private async _forecastChange(e: CustomEvent<{ forecast: SiteForecast }>): Promise<void> {
