@@ -3,7 +3,8 @@
  * `TankCheckInput`, or a list of what is still missing. No arithmetic on units here: the only
  * sum is peak liquid temperature = peak air temperature + sun allowance, both already in K.
  */
-import { checkTank, InputError, type InputLimits } from '../thermo/index.js';
+import { checkTank, InputError, type InputErrorCode, type InputLimits } from '../thermo/index.js';
+import { cautionText, refusalWords } from './messages.js';
 import type { TankCheckInput, TankCheckResult } from '../thermo/check/types.js';
 import type { DisplayUnits } from './display.js';
 import { productFor, productLabel, tripleTemperatures } from './products.js';
@@ -83,6 +84,8 @@ export interface CheckError {
   field: string;
   message: string;
   limits?: InputLimits;
+  /** The engine's kind of refusal (`InputError.code`), when it was one. */
+  code?: InputErrorCode;
 }
 
 export interface CheckOutcome {
@@ -120,13 +123,15 @@ const PLAIN_UNITS: Record<string, string> = { 'contents.gaugePercent': '%' };
 /**
  * An engine refusal in words, with its range in the user's units when the engine gave the range
  * as numbers (e.g. "Liquid temperature must be from -189.6 to 260.3 °F for this product"), else
- * the engine's own message. The range goes through `DisplayUnits` (thermo/units.ts), rounded
+ * the field refused in the app's words (never the engine's field names or SI units). The range goes through `DisplayUnits` (thermo/units.ts), rounded
  * inward. No full stop at the end.
  */
 export function errorText(error: CheckError, display: DisplayUnits): string {
   const l = error.limits;
   const name = FIELD_LABELS[error.field];
-  if (!l || !name || (l.min === undefined && l.max === undefined)) return error.message;
+  if (error.code === 'not-a-number' && name) return `${name} must be a number`;
+  if (!l || !name || (l.min === undefined && l.max === undefined))
+    return refusalWords(error.field, name);
   try {
     const range = display.range(l.quantity ?? null, l.min, l.max, {
       ...(l.minExclusive ? { minExclusive: true } : {}),
@@ -134,8 +139,8 @@ export function errorText(error: CheckError, display: DisplayUnits): string {
     });
     return `${name} must be ${range}${l.note ? ` ${l.note}` : ''}`;
   } catch {
-    // A range the units cannot show (not expected): the engine's own words are still right.
-    return error.message;
+    // A range the units cannot show (not expected): say what was refused, in words.
+    return refusalWords(error.field, name);
   }
 }
 
@@ -147,7 +152,7 @@ export function runCheck(tank: TankRecord, readings: Readings, settings: Setting
     return { ...built, result: checkTank(built.input), error: null };
   } catch (e) {
     if (e instanceof InputError) {
-      const error: CheckError = { field: e.field, message: e.message };
+      const error: CheckError = { field: e.field, message: e.message, code: e.code };
       if (e.limits) error.limits = e.limits;
       return { ...built, result: null, error };
     }
@@ -163,7 +168,7 @@ export function runCheck(tank: TankRecord, readings: Readings, settings: Setting
 }
 
 /** The key figures of a result, kept with a saved check. */
-export function summarize(result: TankCheckResult): CheckSummary {
+export function summarize(result: TankCheckResult, display?: DisplayUnits): CheckSummary {
   const ranked = result.cautions.filter((c) => c.code !== 'standing');
   return {
     phase: result.phase,
@@ -182,6 +187,11 @@ export function summarize(result: TankCheckResult): CheckSummary {
     headroomToRelief: result.peak.headroomToRelief,
     liquidFullTemperature: result.liquidFullTemperature,
     topLevel: ranked[0]?.level ?? null,
-    cautions: result.cautions.map((c) => ({ level: c.level, code: c.code, message: c.message })),
+    // Saved in the user's words and units of the moment the check was saved.
+    cautions: result.cautions.map((c) => ({
+      level: c.level,
+      code: c.code,
+      message: display ? cautionText(c, display) : c.message,
+    })),
   };
 }

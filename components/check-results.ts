@@ -22,14 +22,22 @@ import { LitElement, html, css, nothing, type PropertyValues, type TemplateResul
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
-import type { Caution, TankCheckResult, TankPhase } from '../thermo/check/types.js';
+import type { Caution, FullKind, TankCheckResult, TankPhase } from '../thermo/check/types.js';
 import { T_60F_K } from '../thermo/constants.js';
 import { stopPlace } from './fill-words.js';
+import { causeText, cautionText } from './messages.js';
 
 /** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
 export const STANDING_FALLBACK =
   'These figures come from a model and the entered readings. They support, and never replace, the site ' +
   'procedures, the applicable code and the judgement of a licensed, trained person.';
+
+/** The phase in words; a tank full of dense fluid is named as such (as hazardous as liquid-full). */
+export function phaseWords(phase: TankPhase, full: FullKind | null | undefined): string {
+  return full === 'dense-fluid'
+    ? 'Full of dense fluid (above the critical temperature): no vapour space'
+    : PHASE_WORDS[phase];
+}
 
 export const PHASE_WORDS: Record<TankPhase, string> = {
   'two-phase': 'Liquid and vapour',
@@ -196,7 +204,7 @@ export class CheckResults extends LitElement {
     return [
       `Fill limit ${d.format('mass', r.fillLimit.maxMass, 'down')}; stop at ${formatPercent(r.fillLimit.stopAtGaugePercent, 'down')} ${stopPlace(r.fillLimit)}.`,
       `Peak-day pressure ${d.format('gaugePressure', r.peak.p, 'up')}.`,
-      top ? `${capital(top.level)}: ${top.message}` : '',
+      top ? `${capital(top.level)}: ${cautionText(top, d)}` : '',
     ]
       .filter(Boolean)
       .join(' ');
@@ -241,7 +249,7 @@ export class CheckResults extends LitElement {
       ${ranked.map(
         (c) =>
           html`<li data-testid="caution" data-level=${c.level} data-code=${c.code}>
-            <span class="level ${c.level}">${c.level}</span>${c.message}
+            <span class="level ${c.level}">${c.level}</span>${cautionText(c, this.display)}
           </li>`,
       )}
     </ol>`;
@@ -264,6 +272,8 @@ export class CheckResults extends LitElement {
     const f = r.fillLimit;
     const c = r.contents;
     const p = r.peak;
+    // An assumed relief setting is never shown as if read from the nameplate.
+    const assumed = r.cautions.some((c) => c.code === 'relief-assumed');
     const binding = f.limits.find((l) => l.id === f.binding);
     const over = f.roomLeftMass < 0;
     return html`
@@ -302,7 +312,16 @@ export class CheckResults extends LitElement {
             ${this._fig('peak-temperature', 'temperature', p.temperature)}
           </p>
           <dl>
-            <dt>Headroom to relief setting</dt>
+            <dt>
+              Headroom to relief
+              setting${
+                assumed
+                  ? html` <span class="muted note"
+                      >(not entered: assumed at the design pressure)</span
+                    >`
+                  : nothing
+              }
+            </dt>
             <dd>${this._headroom('peak-headroom-relief', p.headroomToRelief)}</dd>
             <dt>Headroom to design pressure</dt>
             <dd>${this._headroom('peak-headroom-design', p.headroomToDesign)}</dd>
@@ -333,7 +352,7 @@ export class CheckResults extends LitElement {
         <h3 id="h-now">Now</h3>
         <dl>
           <dt>Phase</dt>
-          <dd data-testid="result-phase" data-si=${r.phase}>${PHASE_WORDS[r.phase]}</dd>
+          <dd data-testid="result-phase" data-si=${r.phase}>${phaseWords(r.phase, r.full)}</dd>
           <dt>Expected pressure</dt>
           <dd>
             ${this._fig('result-pressure', 'gaugePressure', r.pressure, 'up')}
@@ -410,12 +429,25 @@ export class CheckResults extends LitElement {
         <h3 id="h-heat">Heating</h3>
         <dl>
           <dt>Phase at the peak</dt>
-          <dd>${PHASE_WORDS[p.phase]}</dd>
+          <dd>${phaseWords(p.phase, p.full)}</dd>
           <dt>Peak pressure, absolute</dt>
           <dd>${d.format('pressure', p.pAbsolute, 'up')}</dd>
-          <dt>Relief setting reached at</dt>
+          <dt>Relief setting${assumed ? ' (assumed)' : ''} reached at</dt>
           <dd>
-            ${this._tempWithTolerance('relief-temperature', r.reliefTemperature, `Not below ${d.format('temperature', RELIEF_SEARCH_MAX_K)}`)}
+            ${
+              r.cautions.some((c) => c.code === 'relief-now')
+                ? html`<span
+                    data-testid="relief-temperature"
+                    data-si=${String(r.reliefTemperature ?? '')}
+                    class="over"
+                    >Now: the pressure is already at or near the setting</span
+                  >`
+                : this._tempWithTolerance(
+                    'relief-temperature',
+                    r.reliefTemperature,
+                    `Not below ${d.format('temperature', RELIEF_SEARCH_MAX_K)}`,
+                  )
+            }
           </dd>
         </dl>
       </section>
@@ -445,7 +477,7 @@ export class CheckResults extends LitElement {
         g.causes.length
           ? html`<p>Likely causes, most likely first:</p>
               <ol>
-                ${g.causes.map((c) => html`<li>${c}</li>`)}
+                ${(g.causeCodes ?? []).map((c) => html`<li>${causeText(c)}</li>`)}
               </ol>`
           : nothing
       }

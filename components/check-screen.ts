@@ -246,7 +246,7 @@ export class CheckScreen extends LitElement {
       at: new Date().toISOString(),
       readings: this._readings,
       productLabel: o.result.product.label,
-      summary: summarize(o.result),
+      summary: summarize(o.result, this._display),
       demo: this.tank.demo,
     };
     this.dispatchEvent(
@@ -337,8 +337,14 @@ export class CheckScreen extends LitElement {
           <p class="plate">
             ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
             ${d.format('volume', np.waterCapacity)} · MAWP
-            ${d.format('gaugePressure', np.designPressure)} · relief
-            ${d.format('gaugePressure', relief)}
+            ${d.format('gaugePressure', np.designPressure)} ·
+            ${
+              np.reliefSetPressure === undefined
+                ? html`<span data-testid="relief-assumed"
+                    >relief not entered (assumed at the design pressure)</span
+                  >`
+                : html`relief ${d.format('gaugePressure', relief)}`
+            }
           </p>
           <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
           <button class="quiet no-print" @click=${this._editTank}>Edit tank</button>

@@ -4,8 +4,9 @@
  * the standing caution; never worded as permission.
  */
 import { DisplayUnits, formatPercent } from './display.js';
-import { PHASE_WORDS, STANDING_FALLBACK } from './check-results.js';
+import { STANDING_FALLBACK, phaseWords } from './check-results.js';
 import { stopPlace } from './fill-words.js';
+import { cautionText } from './messages.js';
 import { productLabel } from './products.js';
 import type { CheckRecord, Readings, TankRecord } from './types.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
@@ -45,7 +46,7 @@ export function summaryText(
     '',
     ...readingsLines(readings, d),
     '',
-    `Phase: ${PHASE_WORDS[result.phase]}`,
+    `Phase: ${phaseWords(result.phase, result.full)}`,
     `Contents: ${d.format('mass', result.contents.totalMass)} (filling density ${d.format('fraction', result.contents.fillingDensity)})`,
     `Fill limit: ${d.format('mass', f.maxMass, 'down')}; stop at ${formatPercent(f.stopAtGaugePercent, 'down')} ${stopPlace(f)}`,
     ...(f.bindingNote ? [`Why: ${f.bindingNote}`] : []),
@@ -56,7 +57,7 @@ export function summaryText(
     `Liquid-full at: ${result.liquidFullTemperature === null ? 'not reached' : d.format('temperature', result.liquidFullTemperature, 'down')}`,
     '',
     ranked.length ? 'Cautions:' : 'No further cautions from these figures.',
-    ...ranked.map((c) => `- ${c.level.toUpperCase()}: ${c.message}`),
+    ...ranked.map((c) => `- ${c.level.toUpperCase()}: ${cautionText(c, d)}`),
     '',
     result.standingCaution,
   ];

@@ -208,6 +208,7 @@ export interface ClosedTankResult extends Omit<ClosedTankState, 'iterations'> {
  */
 export function maxDensity(product: Product, T: number, options?: ModelOptions): number {
   const r = resolveProduct(product, options);
+  checkTemperature(r, T);
   if (r.components.length === 1)
     return r.molarMass / pureVolume(r.components[0]!, T, 1e8, 'liquid');
   return r.molarMass / phaseAt(mixtureAtT(r, T), 1e8, r.z, 'liquid').v;

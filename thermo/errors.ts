@@ -19,6 +19,8 @@ export interface InputLimits {
   readonly note?: string;
 }
 
+export type InputErrorCode = 'not-a-number' | 'out-of-range' | 'invalid';
+
 /**
  * The one error type the public API throws for bad input. The message always names the
  * argument (field) and its valid range in SI, so a script can read it as is; `limits`, where
@@ -31,17 +33,28 @@ export class InputError extends Error {
   readonly validRange: string;
   /** The range of `validRange` as numbers, when the field is a number with a numeric range. */
   readonly limits?: InputLimits;
+  /**
+   * What kind of refusal, for an app to word it: `not-a-number` (a number was expected: a
+   * string, a BigInt, NaN, an object…), `out-of-range` (a number outside `limits`), `invalid`
+   * (anything else: a choice, a shape, a product).
+   */
+  readonly code: InputErrorCode;
 
   constructor(field: string, validRange: string, got?: unknown, limits?: InputLimits) {
-    const shown =
-      got === undefined
-        ? ''
-        : ` (got ${typeof got === 'number' ? formatNumber(got) : JSON.stringify(got)})`;
+    const shown = got === undefined ? '' : ` (got ${describeValue(got)})`;
     super(`${field} must be ${validRange}${shown}`);
     this.name = 'InputError';
     this.field = field;
     this.validRange = validRange;
     if (limits !== undefined) this.limits = limits;
+    this.code =
+      limits === undefined && typeof got === 'number' && Number.isFinite(got)
+        ? 'invalid'
+        : typeof got === 'number' && Number.isFinite(got)
+          ? 'out-of-range'
+          : limits !== undefined
+            ? 'not-a-number'
+            : 'invalid';
   }
 }
 
@@ -61,6 +74,18 @@ export class ConvergenceError extends Error {
     this.solver = solver;
     this.iterations = iterations;
     this.residual = residual;
+  }
+}
+
+/** A refused value in words; never throws (a BigInt, a cycle or a symbol is shown, not serialised). */
+function describeValue(x: unknown): string {
+  if (typeof x === 'number') return formatNumber(x);
+  if (typeof x === 'bigint') return `the integer ${x.toString()}n (not a number)`;
+  if (typeof x === 'symbol' || typeof x === 'function') return `a ${typeof x}`;
+  try {
+    return JSON.stringify(x) ?? String(x);
+  } catch {
+    return 'an object that cannot be shown';
   }
 }
 

@@ -22,7 +22,7 @@ export type { Product, CustomFluid, BlendComponent, ModelOptions } from './produ
 export type { Phase } from './solvers/closedTank.js';
 export type { ModelId } from './eos/model.js';
 export { InputError, ConvergenceError } from './errors.js';
-export type { InputLimits } from './errors.js';
+export type { InputLimits, InputErrorCode } from './errors.js';
 export { R_J_molK, P_ATM_Pa, T_60F_K } from './constants.js';
 export * from './check/index.js';
 export * from './fill/index.js';

@@ -68,7 +68,7 @@ describe('tankside-app', () => {
     byTestId(app, 'demo-clear').click();
     // It asks once before removing anything.
     const yes = (await waitFor(app, 'confirm-yes')) as HTMLButtonElement;
-    expect(deepAll(app, '[data-testid="tank-item"]')).to.have.length(6);
+    expect(deepAll(app, '[data-testid="tank-item"]')).to.have.length(8);
     yes.click();
     await waitUntil(() => deepAll(app, '[data-testid="tank-item"]').length === 0, 'demo cleared');
     app.parentElement!.remove();

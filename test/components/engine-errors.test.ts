@@ -119,6 +119,25 @@ describe('check-screen engine errors in the user’s units', () => {
     expect(text).not.to.match(KELVIN);
   });
 
+  it('check-screen puts a float gauge above the critical temperature on the liquid temperature', async () => {
+    // Propane at 250 °F is past the end of its saturation curve (Tc 206.0 °F, Lemmon et al.
+    // 2009, test/reference/fluids.csv): a float gauge has no liquid surface to read. The refusal
+    // names the liquid temperature, in °F, with no engine field name.
+    const t = tank('propane');
+    const r = readings({ liquidTemperature: F(250), gaugePercent: 50 });
+    const el = await screen(t, r);
+    const text = byTestId(el, 'engine-error-liquidTemperature').textContent ?? '';
+    const limits = engineLimits(t, r, 'liquidTemperature');
+    const d = DisplayUnits.fromSettings(settings);
+    expect(text).to.contain(`to ${d.number('temperature', limits.max!, 'down')} °F`);
+    expect(Number(d.number('temperature', limits.max!, 'down'))).to.be.lessThan(206.1);
+    expect(text).not.to.match(KELVIN);
+    expect(text).not.to.contain('contents.');
+    expect(el.shadowRoot!.querySelector('[data-testid="engine-error-gaugePercent"]')).to.equal(
+      null,
+    );
+  });
+
   it('check-screen words a nameplate figure the check refuses in psig', async () => {
     // 1 psig is below the check's 10 000 Pa (1.45 psig); its 10 000…100 000 000 Pa gauge range is
     // 1.45…14 503.8 psig, shown in whole psig rounded inward and grouped from 10 000 up in the
@@ -132,10 +151,16 @@ describe('check-screen engine errors in the user’s units', () => {
     expect(text).not.to.contain('Pa gauge');
   });
 
-  it('errorText keeps the engine’s own words when the refusal has no numeric range', () => {
+  it('errorText never passes on the engine’s field names or SI words without a range', () => {
     const d = DisplayUnits.fromSettings(settings);
     const e = new InputError('contents', 'exactly one of { gaugePercent }, { netMass }', 2);
-    expect(errorText({ field: e.field, message: e.message }, d)).to.equal(e.message);
+    const text = errorText({ field: e.field, message: e.message }, d);
+    expect(text).not.to.contain('gaugePercent');
+    expect(text).not.to.contain('{');
+    const p = new InputError('product', 'a product the model can solve (density must be 5 K)');
+    const pt = errorText({ field: p.field, message: p.message }, d);
+    expect(pt).to.contain('product');
+    expect(pt).not.to.match(/\d\s*K\b/);
     // A known field with limits in a plain unit (percent, no quantity).
     expect(
       errorText({ field: 'contents.gaugePercent', message: '', limits: { min: 0, max: 100 } }, d),

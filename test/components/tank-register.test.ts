@@ -270,6 +270,9 @@ describe('tank-form', () => {
     cls.dispatchEvent(new Event('change'));
     await el.updateComplete;
     expect(deep(el, '[data-testid="tank-recovery"]')).to.equal(null);
+    // A 22.7 L storage tank is implausible (the form asks about it): give a storage-tank size.
+    typeText(byTestId(el, 'tank-water-capacity') as HTMLInputElement, '3800');
+    await el.updateComplete;
     const ev2 = oneEvent(el, 'tank-save');
     byTestId(el, 'tank-save').click();
     const saved = ((await ev2) as CustomEvent<TankSaveDetail>).detail.tank;

@@ -10,6 +10,7 @@ import {
   closedTank,
   saturation,
   CO2_TRIPLE_POINT_PA,
+  InputError,
   type TankCheckInput,
   type TankCheckResult,
 } from '../../thermo/index.js';
@@ -297,10 +298,17 @@ describe('checkTank: CO2 (FACTS cases 12, 13)', () => {
     expect(hot.phase).toBe('supercritical');
     expect(hot.contents.levelHeight).toBeNull();
     expect(codes(hot)).toContain('supercritical-now');
-    // a level reading cannot be used there
-    expect(() => co2({ liquidTemperature: F(100), peakTemperature: F(100) })).toThrow(
-      /contents\.gaugePercent/,
-    );
+    // a level reading cannot be used there: the refusal names the liquid temperature, with a
+    // range ending below the critical temperature 87.8 °F (304.13 K, Span & Wagner 1996)
+    let err: unknown;
+    try {
+      co2({ liquidTemperature: F(100), peakTemperature: F(100) });
+    } catch (e) {
+      err = e;
+    }
+    expect(err).toBeInstanceOf(InputError);
+    expect((err as InputError).field).toBe('liquidTemperature');
+    expect((err as InputError).limits!.max!).toBeLessThan(304.13);
   });
   it('checkTank gives CO2 at 70 °F: 838 psig, liquid 761 kg/m³ (case 13)', () => {
     const r = co2({ liquidTemperature: F(70), peakTemperature: F(70) });

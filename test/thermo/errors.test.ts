@@ -71,6 +71,37 @@ describe('InputError', () => {
   });
 });
 
+describe('InputError codes', () => {
+  it('checkTank says which kind of refusal: not a number, out of range, or invalid', () => {
+    const base: TankCheckInput = {
+      tank: { waterCapacity: 1, designPressure: 1.72e6 },
+      product: 'propane',
+      liquidTemperature: 290,
+      contents: { gaugePercent: 50 },
+      peakTemperature: 300,
+    };
+    const codeOf = (patch: Partial<TankCheckInput>) => {
+      try {
+        checkTank({ ...base, ...patch });
+      } catch (e) {
+        if (e instanceof InputError) return [e.field, e.code];
+        throw e;
+      }
+      return null;
+    };
+    expect(codeOf({ liquidTemperature: 1n as unknown as number })).toEqual([
+      'liquidTemperature',
+      'not-a-number',
+    ]);
+    expect(codeOf({ liquidTemperature: '290' as unknown as number })).toEqual([
+      'liquidTemperature',
+      'not-a-number',
+    ]);
+    expect(codeOf({ liquidTemperature: 1000 })).toEqual(['liquidTemperature', 'out-of-range']);
+    expect(codeOf({ product: 'no-such-fluid' })![1]).toBe('invalid');
+  });
+});
+
 describe('checkTank limits', () => {
   it('checkTank gives the liquid temperature range in K with its quantity, message unchanged', () => {
     const e = inputError(() => checkTank(base({ liquidTemperature: 100 })));

@@ -1,25 +1,18 @@
 /**
  * Ranked cautions: the signal words of the ANSI Z535 convention (danger, warning, caution,
- * notice), each in plain language with the number behind it, most severe first; the standing
- * caution always last. Messages say what the figures show and which limit applies; they never
- * give permission to fill.
+ * notice), each with a stable code and its numbers as typed parameters (SI with their quantity),
+ * most severe first; the standing caution always last. The English default message comes from
+ * caution-text.ts; an app writes each code in its user's words and units. Messages say what the
+ * figures show and which limit applies; they never give permission to fill.
  */
-import { peakPressureAllowance } from '../rules/allowance.js';
-import { fmtAbs, fmtDiff, fmtGauge, fmtMass, fmtPct, fmtT } from './format.js';
+import { CO2_TRIPLE_POINT_PA, cautionMessage } from './caution-text.js';
+import { num, type CautionCode, type MessageParams } from './codes.js';
 import type { ProductModel, State } from './model.js';
 import { saturationTemperature } from './search.js';
-import { STANDING_CAUTION } from './standing.js';
-import type {
-  Caution,
-  CautionLevel,
-  CautionQuantity,
-  TankCheckInput,
-  TankCheckResult,
-} from './types.js';
+import type { Caution, CautionLevel, TankCheckInput, TankCheckResult } from './types.js';
 import type { CleanInput } from './validate.js';
 
-/** CO2 triple point: 216.592 K at 517.96 kPa absolute (Span & Wagner 1996, J. Phys. Chem. Ref. Data 25, 1509). */
-export const CO2_TRIPLE_POINT_PA = 517_960;
+export { CO2_TRIPLE_POINT_PA };
 
 const RANK: Record<CautionLevel, number> = { danger: 0, warning: 1, caution: 2, notice: 3 };
 
@@ -33,309 +26,232 @@ export interface CautionContext {
   skippedRefs: number[];
   shapeVolume: number | null;
   T60: number;
+  /** Peak pressure raised by its model allowance, Pa gauge (as the headroom takes it). */
+  peakRaised: number;
+  /** The allowance taken on the peak pressure, fraction. */
+  peakAllowance: number;
 }
+
+type Add = (level: CautionLevel, code: CautionCode, params: MessageParams) => void;
 
 export function buildCautions(r: TankCheckResult, k: CautionContext): Caution[] {
   const out: Caution[] = [];
-  const add = (
-    level: CautionLevel,
-    code: string,
-    message: string,
-    value: number | null,
-    quantity: CautionQuantity | null,
-  ) => out.push({ level, code, message, value, quantity });
-  const c = k.clean;
-  const baro = c.baro;
-  const g = (pa: number, round: 'up' | 'down' | 'nearest' = 'nearest') => fmtGauge(pa, round, baro);
-  const productIsCo2 = k.input.product === 'carbon-dioxide';
-
-  // --- Now. ---
-  if (r.phase === 'liquid-full') {
-    add(
-      'danger',
-      'liquid-full-now',
-      `The figures show the tank liquid-full now at ${fmtT(c.T)}: there is no vapour space, and the pressure rises steeply with any warming. The contents are ${fmtPct(r.contents.fillingDensity, 'up')} of the water weight capacity.`,
-      c.T,
-      'temperature',
-    );
-  }
-  if (r.pressure >= c.reliefSetPressure) {
-    add(
-      'danger',
-      'relief-now',
-      `The expected pressure now, ${g(r.pressure, 'up')}, is at or above the relief set pressure ${g(c.reliefSetPressure)}: the relief valve may be discharging.`,
-      r.pressure,
-      'gaugePressure',
-    );
-  }
-  if (r.phase === 'supercritical') {
-    add(
-      'warning',
-      'supercritical-now',
-      `The liquid temperature ${fmtT(c.T)} is above the critical temperature ${fmtT(r.product.criticalTemperature)}: there is no liquid surface, so a level or float gauge means nothing; only the weight tells the contents.`,
-      r.product.criticalTemperature,
-      'temperature',
-    );
-  }
-  const readingAbs = c.gaugePressure === null ? null : c.gaugePressure + baro;
-  if (productIsCo2) {
-    const threshold = CO2_TRIPLE_POINT_PA - baro;
-    const low =
-      (readingAbs !== null && readingAbs < CO2_TRIPLE_POINT_PA) ||
-      r.pressureAbsolute < CO2_TRIPLE_POINT_PA;
-    if (low) {
-      add(
-        'danger',
-        'co2-below-triple-point',
-        `Pressure below the CO2 triple-point pressure ${fmtAbs(CO2_TRIPLE_POINT_PA)} = ${g(threshold)} here: liquid CO2 cannot exist below it, and dry ice (solid CO2) can form and block lines and valves. Do not vent or withdraw liquid; follow the supplier's procedure.`,
-        threshold,
-        'gaugePressure',
-      );
-    }
-  }
-  const vacuumNow = r.pressure < 0;
-  const vacuumRead = c.gaugePressure !== null && c.gaugePressure < 0;
-  if (vacuumNow || vacuumRead) {
-    const v = vacuumRead ? c.gaugePressure! : r.pressure;
-    add(
-      'warning',
-      'vacuum',
-      `The tank is under vacuum (${g(v)}${vacuumRead ? ', gauge reading' : `, expected at ${fmtT(c.T)}`}): no vapour will flow to appliances, and air can be drawn in through a leak or an open valve.`,
-      v,
-      'gaugePressure',
-    );
-  }
-  if (c.mdmt !== null) {
-    if (c.T < c.mdmt) {
-      add(
-        'warning',
-        'below-mdmt',
-        `The liquid at ${fmtT(c.T)} is colder than the minimum design metal temperature ${fmtT(c.mdmt)}: the shell may be brittle; avoid shocks and pressure changes and follow the site procedure.`,
-        c.mdmt,
-        'temperature',
-      );
-    } else {
-      const Tb = saturationTemperature(
-        k.model,
-        baro,
-        [c.T, c.Tpeak],
-        Math.max(k.model.basics.Tmin + 0.01, 150),
-      );
-      if (Tb !== null && Tb < c.mdmt) {
-        add(
-          'caution',
-          'autorefrigeration-below-mdmt',
-          `If the tank is vented or emptied fast, the liquid can chill toward its boiling point at atmospheric pressure, ${fmtT(Tb)}, which is below the minimum design metal temperature ${fmtT(c.mdmt)}.`,
-          Tb,
-          'temperature',
-        );
-      }
-    }
-  }
-
-  // --- Fill limit. ---
-  const fl = r.fillLimit;
-  const bind = fl.limits.find((l) => l.id === fl.binding);
-  // The limit is rounded down to 0.01 kg: contents exactly at the rule's figure are not "over".
-  if (r.contents.totalMass - fl.maxMass > 0.01) {
-    add(
-      'warning',
-      'over-fill-limit',
-      `The contents, ${fmtMass(r.contents.totalMass, 'up')}, are above the fill limit of ${fmtMass(fl.maxMass, 'down')} by ${fmtMass(-fl.roomLeftMass, 'up')}${bind ? ` (${bind.description}; ${bind.citation})` : ''}.`,
-      -fl.roomLeftMass,
-      'mass',
-    );
-  }
-  if (!k.rule) {
-    add(
-      'warning',
-      'no-filling-rule',
-      `No filling-density table in this tool covers this product in a ${c.containerClass} container${r.product.lpGas ? ` (specific gravity ${r.product.specificGravity.toFixed(4)})` : ''}. The limit shown is ${bind ? 'only the not-liquid-full limit' : 'the present contents (no limit could be computed)'}; the applicable code decides the real limit.`,
-      fl.maxMass,
-      'mass',
-    );
-  }
-  for (const T of k.skippedRefs) {
-    add(
-      'caution',
-      'no-liquid-at-reference',
-      `At ${fmtT(T)} the product is above its critical temperature, so a not-liquid-full limit cannot be computed for that temperature; the pressure then depends on the fill alone.`,
-      T,
-      'temperature',
-    );
-  }
-
-  // --- Peak. ---
-  const p = r.peak;
-  if (p.phase === 'liquid-full') {
-    add(
-      'danger',
-      'liquid-full-at-peak',
-      `At the forecast peak ${fmtT(p.temperature)} the figures show the tank liquid-full${r.liquidFullTemperature !== null ? ` (from about ${fmtT(r.liquidFullTemperature, 'down')})` : ''}: the pressure would then be limited only by the relief valve.`,
-      r.liquidFullTemperature ?? p.temperature,
-      'temperature',
-    );
-  } else if (
-    r.liquidFullTemperature !== null &&
-    r.liquidFullTemperature > p.temperature &&
-    r.liquidFullTemperature - p.temperature < 5
-  ) {
-    add(
-      'warning',
-      'liquid-full-near-peak',
-      `The tank would become liquid-full at ${fmtT(r.liquidFullTemperature, 'down')}, less than 5 K (9 °F) above the forecast peak ${fmtT(p.temperature)}.`,
-      r.liquidFullTemperature,
-      'temperature',
-    );
-  }
-  if (p.headroomToDesign < 0) {
-    add(
-      'danger',
-      'design-at-peak',
-      `At the forecast peak ${fmtT(p.temperature)} the expected pressure ${g(p.p, 'up')} (with the model allowance of ${(peakPressureAllowance(p.phase) * 100).toFixed(1)} %) is above the design pressure ${g(c.designPressure)} by ${fmtDiff(-p.headroomToDesign, 'up')}.`,
-      -p.headroomToDesign,
-      'pressureDifference',
-    );
-  }
-  if (p.headroomToRelief < 0) {
-    add(
-      'warning',
-      'relief-at-peak',
-      `The relief valve may open: at the forecast peak ${fmtT(p.temperature)} the expected pressure ${g(p.p, 'up')} (with the model allowance) reaches the relief set pressure ${g(c.reliefSetPressure)}${r.reliefTemperature !== null ? `, from about ${fmtT(r.reliefTemperature, 'down')}` : ''}.`,
-      r.reliefTemperature ?? p.temperature,
-      'temperature',
-    );
-  } else if (p.headroomToRelief < 0.05 * c.reliefSetPressure) {
-    add(
-      'caution',
-      'relief-near-at-peak',
-      `Little headroom at the forecast peak ${fmtT(p.temperature)}: ${fmtDiff(p.headroomToRelief, 'down')} below the relief set pressure ${g(c.reliefSetPressure)}.`,
-      p.headroomToRelief,
-      'pressureDifference',
-    );
-  }
-  if (
-    r.liquidFullTemperature === null &&
-    !k.model.basics.pure &&
-    r.contents.overallDensity > k.model.basics.rhoc
-  ) {
-    const top = k.model.satTop();
-    add(
-      'notice',
-      'liquid-full-beyond-model',
-      `No liquid-full temperature is given: for this blend it lies above ${fmtT(top, 'down')}, beyond the range where the model finds its bubble point.`,
-      top,
-      'temperature',
-    );
-  }
-  if (p.phase === 'supercritical' && r.phase !== 'supercritical') {
-    add(
-      'caution',
-      'supercritical-at-peak',
-      `At the forecast peak ${fmtT(p.temperature)} the product is above its critical temperature ${fmtT(r.product.criticalTemperature)}: no liquid level; the pressure depends on the fill.`,
-      r.product.criticalTemperature,
-      'temperature',
-    );
-  }
-  if (p.phase === 'two-phase' && p.liquidFraction > 0.95) {
-    add(
-      'caution',
-      'small-vapour-space-at-peak',
-      `At the forecast peak the liquid would fill ${fmtPct(p.liquidFraction, 'up')} of the tank.`,
-      p.liquidFraction,
-      'fraction',
-    );
-  }
-
-  // --- Readings. ---
-  const contents = k.input.contents;
-  if ('gaugePercent' in contents && (contents.gaugePercent <= 0 || contents.gaugePercent >= 100)) {
-    add(
-      'caution',
-      'gauge-at-end',
-      `The float gauge reads ${contents.gaugePercent} %: at the end of its scale the gauge may be stuck or the tank empty or liquid-full; check another way (weight, fixed level gauge).`,
-      contents.gaugePercent / 100,
-      'fraction',
-    );
-  }
-  if ('netMass' in contents && contents.netMass === 0) {
-    add('notice', 'empty', 'The scale shows no product in the tank.', 0, 'mass');
-  }
-  const d = r.diagnosis;
-  if (d && d.verdict !== 'fits') {
-    const word = d.verdict === 'high' ? 'higher' : 'lower';
-    add(
-      'caution',
-      d.verdict === 'high' ? 'pressure-high' : 'pressure-low',
-      `The gauge reads ${g(d.reading)}, ${fmtDiff(Math.abs(d.difference))} ${word} than the ${g(d.expected)} expected for this product at ${fmtT(c.T)} (band ±${fmtDiff(d.tolerance)}). Likely: ${d.causes[0] ?? ''}${d.propaneFraction !== null ? ` The reading fits a propane/butane mix of about ${Math.round(d.propaneFraction * 100)} % propane (mole).` : ''}`,
-      d.difference,
-      'pressureDifference',
-    );
-  }
-  if (k.shapeVolume !== null && Math.abs(k.shapeVolume / c.V - 1) > 0.03) {
-    add(
-      'caution',
-      'shape-capacity-mismatch',
-      `The tank dimensions give ${fmtPct(k.shapeVolume / c.V - 1)} more volume than the water capacity entered; check the dimensions (inside, tangent to tangent) and the nameplate.`,
-      k.shapeVolume,
-      'volume',
-    );
-  }
-
-  // --- Notices. ---
-  if (!c.reliefGiven) {
-    add(
-      'notice',
-      'relief-assumed',
-      `Relief set pressure not entered: taken as the design pressure ${g(c.designPressure)}. On many containers the relief valve may start to discharge lower (29 CFR 1910.110 Table H-26: 88–100 % of design for ASME 1950 and later).`,
-      c.designPressure,
-      'gaugePressure',
-    );
-  }
-  if (c.reliefSetPressure > c.designPressure) {
-    add(
-      'notice',
-      'relief-above-design',
-      `The relief set pressure ${g(c.reliefSetPressure)} is above the design pressure ${g(c.designPressure)}; check the valve marking against the nameplate.`,
-      c.reliefSetPressure,
-      'gaugePressure',
-    );
-  }
-  if (c.specificGravity !== null && Math.abs(c.specificGravity / k.sgModel - 1) > 0.02) {
-    add(
-      'notice',
-      'sg-differs',
-      `The entered specific gravity ${c.specificGravity.toFixed(3)} differs by more than 2 % from the model's ${k.sgModel.toFixed(4)} for this product; check the product.`,
-      c.specificGravity,
-      null,
-    );
-  }
-  if (c.Tpeak < c.T) {
-    add(
-      'notice',
-      'peak-below-now',
-      `The forecast peak ${fmtT(c.Tpeak)} is colder than the liquid now ${fmtT(c.T)}: the peak figures describe a cooler tank.`,
-      c.Tpeak,
-      'temperature',
-    );
-  }
-  if (!k.model.basics.pure) {
-    add(
-      'notice',
-      'blend-bubble-point',
-      `For a blend the two-phase pressure is taken as the bubble-point pressure of the whole contents (${g(r.pressure, 'up')} now), slightly above the real pressure.`,
-      r.pressure,
-      'gaugePressure',
-    );
-  }
-
+  const add: Add = (level, code, params) => {
+    const main = Object.values(params).find((v) => typeof v !== 'string');
+    out.push({
+      level,
+      code,
+      params,
+      message: cautionMessage(code, params, k.clean.baro),
+      value: main && typeof main !== 'string' ? main.value : null,
+      quantity: main && typeof main !== 'string' ? (main.quantity as Caution['quantity']) : null,
+    });
+  };
+  nowCautions(r, k, add);
+  limitCautions(r, k, add);
+  peakCautions(r, k, add);
+  readingCautions(r, k, add);
+  noticeCautions(r, k, add);
   out.sort((a, b) => RANK[a.level] - RANK[b.level]);
   out.push({
     level: 'notice',
     code: 'standing',
-    message: STANDING_CAUTION,
+    params: {},
+    message: cautionMessage('standing', {}, k.clean.baro),
     value: null,
     quantity: null,
   });
   return out;
+}
+
+const T = (K: number, round: 'up' | 'down' | 'nearest' = 'nearest') => num(K, 'temperature', round);
+const G = (pa: number, round: 'up' | 'down' | 'nearest' = 'nearest') =>
+  num(pa, 'gaugePressure', round);
+
+function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
+  const c = k.clean;
+  const baro = c.baro;
+  const Tc = T(r.product.criticalTemperature);
+  if (r.full === 'liquid')
+    add('danger', 'liquid-full-now', {
+      temperature: T(c.T),
+      fillingDensity: num(r.contents.fillingDensity, 'fraction', 'up'),
+    });
+  if (r.full === 'dense-fluid')
+    add('danger', 'dense-fluid-now', {
+      temperature: T(c.T),
+      criticalTemperature: Tc,
+      fillingDensity: num(r.contents.fillingDensity, 'fraction', 'up'),
+    });
+  // Reached now: the expected pressure, or the same raised by its allowance (relief temperature).
+  if (r.pressure >= c.reliefSetPressure || r.reliefTemperature === c.T)
+    add('danger', 'relief-now', { pressure: G(r.pressure, 'up'), relief: G(c.reliefSetPressure) });
+  if (r.phase === 'supercritical')
+    add('warning', 'supercritical-now', { temperature: T(c.T), criticalTemperature: Tc });
+  const readingAbs = c.gaugePressure === null ? null : c.gaugePressure + baro;
+  if (
+    k.input.product === 'carbon-dioxide' &&
+    ((readingAbs !== null && readingAbs < CO2_TRIPLE_POINT_PA) ||
+      r.pressureAbsolute < CO2_TRIPLE_POINT_PA)
+  )
+    add('danger', 'co2-below-triple-point', {
+      threshold: G(CO2_TRIPLE_POINT_PA - baro),
+      tripleAbsolute: num(CO2_TRIPLE_POINT_PA, 'pressure'),
+    });
+  const vacuumRead = c.gaugePressure !== null && c.gaugePressure < 0;
+  if (r.pressure < 0 || vacuumRead)
+    add('warning', 'vacuum', {
+      pressure: G(vacuumRead ? c.gaugePressure! : r.pressure),
+      source: vacuumRead ? 'reading' : 'expected',
+      temperature: T(c.T),
+    });
+  if (c.mdmt === null) return;
+  if (c.T < c.mdmt) {
+    add('warning', 'below-mdmt', { temperature: T(c.T), mdmt: T(c.mdmt) });
+    return;
+  }
+  const Tlo = Math.max(k.model.basics.Tmin + 0.01, 150);
+  const Tb = saturationTemperature(k.model, baro, [c.T, c.Tpeak], Tlo);
+  if (Tb !== null && Tb < c.mdmt)
+    add('caution', 'autorefrigeration-below-mdmt', { boiling: T(Tb), mdmt: T(c.mdmt) });
+}
+
+function limitCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
+  const c = k.clean;
+  const fl = r.fillLimit;
+  const bind = fl.limits.find((l) => l.id === fl.binding);
+  // The limit is rounded down to 0.01 kg: contents exactly at the rule's figure are not "over".
+  if (r.contents.totalMass - fl.maxMass > 0.01)
+    add('warning', 'over-fill-limit', {
+      contents: num(r.contents.totalMass, 'mass', 'up'),
+      limit: num(fl.maxMass, 'mass', 'down'),
+      over: num(-fl.roomLeftMass, 'mass', 'up'),
+      limitId: fl.binding,
+      ...(bind ? { description: bind.description, citation: bind.citation } : {}),
+    });
+  if (!k.rule)
+    add('warning', 'no-filling-rule', {
+      limit: num(fl.maxMass, 'mass', 'down'),
+      containerClass: c.containerClass,
+      shown: bind ? 'not-full' : 'contents',
+      ...(r.product.lpGas ? { specificGravity: num(r.product.specificGravity, null) } : {}),
+    });
+  for (const Tref of k.skippedRefs)
+    add('notice', 'reference-above-critical', {
+      reference: T(Tref),
+      criticalTemperature: T(r.product.criticalTemperature),
+    });
+}
+
+function peakCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
+  const c = k.clean;
+  const p = r.peak;
+  const Tf = r.liquidFullTemperature;
+  const peakT = T(p.temperature);
+  // Full at the peak, or from a temperature at or below it: always a danger.
+  const full =
+    p.full ??
+    (Tf !== null && Tf <= p.temperature
+      ? p.phase === 'supercritical'
+        ? 'dense-fluid'
+        : 'liquid'
+      : null);
+  const from: MessageParams = Tf !== null ? { from: T(Tf, 'down') } : {};
+  if (full === 'dense-fluid')
+    add('danger', 'dense-fluid-at-peak', {
+      peak: peakT,
+      criticalTemperature: T(r.product.criticalTemperature),
+      ...from,
+    });
+  else if (full === 'liquid') add('danger', 'liquid-full-at-peak', { peak: peakT, ...from });
+  else if (Tf !== null && Tf - p.temperature < 5)
+    add('warning', 'liquid-full-near-peak', {
+      full: T(Tf, 'down'),
+      peak: peakT,
+      margin: num(5, 'temperatureDifference'),
+    });
+  if (Tf === null && !k.model.basics.pure && r.contents.overallDensity > k.model.basics.rhoc)
+    add('notice', 'liquid-full-beyond-model', { top: T(k.model.satTop(), 'down') });
+  if (p.headroomToDesign < 0)
+    add('danger', 'design-at-peak', {
+      peak: peakT,
+      pressure: G(k.peakRaised, 'up'),
+      allowance: num(k.peakAllowance, 'fraction'),
+      design: G(c.designPressure),
+      over: num(-p.headroomToDesign, 'pressureDifference', 'up'),
+    });
+  if (p.headroomToRelief < 0)
+    add('warning', 'relief-at-peak', {
+      peak: peakT,
+      pressure: G(k.peakRaised, 'up'),
+      relief: G(c.reliefSetPressure),
+      ...(r.reliefTemperature !== null ? { from: T(r.reliefTemperature, 'down') } : {}),
+    });
+  else if (p.headroomToRelief < 0.05 * c.reliefSetPressure)
+    add('caution', 'relief-near-at-peak', {
+      peak: peakT,
+      headroom: num(p.headroomToRelief, 'pressureDifference', 'down'),
+      relief: G(c.reliefSetPressure),
+    });
+  if (p.phase === 'supercritical' && p.full === null && r.phase !== 'supercritical')
+    add('caution', 'supercritical-at-peak', {
+      peak: peakT,
+      criticalTemperature: T(r.product.criticalTemperature),
+    });
+  // Contents thinner than the critical density cannot nearly fill the tank with liquid (the
+  // liquid's share stays below about half up to the critical point, by the rule of rectilinear
+  // diameters); a flash that says so near a blend's critical region is not a real state.
+  if (
+    p.phase === 'two-phase' &&
+    p.liquidFraction > 0.95 &&
+    r.contents.overallDensity > k.model.basics.rhoc
+  )
+    add('caution', 'small-vapour-space-at-peak', {
+      liquidFraction: num(p.liquidFraction, 'fraction', 'up'),
+    });
+}
+
+function readingCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
+  const c = k.clean;
+  const contents = k.input.contents;
+  if ('gaugePercent' in contents && (contents.gaugePercent <= 0 || contents.gaugePercent >= 100))
+    add('caution', 'gauge-at-end', { reading: num(contents.gaugePercent / 100, 'fraction') });
+  if ('netMass' in contents && contents.netMass === 0)
+    add('notice', 'empty', { contents: num(0, 'mass') });
+  const d = r.diagnosis;
+  if (d && d.verdict !== 'fits')
+    add('caution', d.verdict === 'high' ? 'pressure-high' : 'pressure-low', {
+      difference: num(d.difference, 'pressureDifference'),
+      reading: G(d.reading),
+      expected: G(d.expected),
+      temperature: T(c.T),
+      tolerance: num(d.tolerance, 'pressureDifference'),
+      ...(d.causeCodes[0] ? { cause: d.causeCodes[0] } : {}),
+      ...(d.propaneFraction !== null
+        ? { propaneFraction: num(d.propaneFraction, 'fraction') }
+        : {}),
+    });
+  if (k.shapeVolume !== null && Math.abs(k.shapeVolume / c.V - 1) > 0.03)
+    add('caution', 'shape-capacity-mismatch', {
+      shapeVolume: num(k.shapeVolume, 'volume'),
+      waterCapacity: num(c.V, 'volume'),
+      excess: num(k.shapeVolume / c.V - 1, 'fraction'),
+    });
+}
+
+function noticeCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
+  const c = k.clean;
+  if (!c.reliefGiven) add('notice', 'relief-assumed', { design: G(c.designPressure) });
+  if (c.reliefSetPressure > c.designPressure)
+    add('notice', 'relief-above-design', {
+      relief: G(c.reliefSetPressure),
+      design: G(c.designPressure),
+    });
+  if (c.specificGravity !== null && Math.abs(c.specificGravity / k.sgModel - 1) > 0.02)
+    add('notice', 'sg-differs', {
+      entered: num(c.specificGravity, null),
+      model: num(k.sgModel, null),
+    });
+  if (c.Tpeak < c.T) add('notice', 'peak-below-now', { peak: T(c.Tpeak), temperature: T(c.T) });
+  if (!k.model.basics.pure) add('notice', 'blend-bubble-point', { pressure: G(r.pressure, 'up') });
 }

@@ -9,7 +9,7 @@
  */
 import { ConvergenceError, InputError } from '../errors.js';
 import { T_60F_K } from '../constants.js';
-import { MODEL_ALLOWANCE, peakPressureAllowance } from '../rules/allowance.js';
+import { fullKind, pressureAllowance } from './full.js';
 import { isLpGas } from '../rules/gases.js';
 import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
 import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../tank/geometry.js';
@@ -34,10 +34,24 @@ const ceilTo = (x: number, step: number) =>
 const P_STEP = 100;
 
 /** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
+/** The fields of `TankCheckInput` an `InputError` may name (dotted, as in the input). */
+const INPUT_FIELD =
+  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature)$/;
+
 export function checkTank(input: TankCheckInput): TankCheckResult {
   try {
     return check(input);
   } catch (e) {
+    // A core refusal about an internal argument (a density, a temperature of a search) is a
+    // flaw of the check, but the caller can only change the input: name the product and
+    // readings together rather than a field the input does not have.
+    if (e instanceof InputError && !INPUT_FIELD.test(e.field)) {
+      throw new InputError(
+        'product',
+        `a product and readings the model can solve together (${e.message})`,
+        undefined,
+      );
+    }
     // The core never hides a failed solve. Where it cannot solve this product at these
     // temperatures, say so about the input rather than crash with another error type.
     if (e instanceof ConvergenceError) {
@@ -95,11 +109,16 @@ function check(input: TankCheckInput): TankCheckResult {
     rho = Math.max(contents.netMass / c.V, 1e-6);
   } else {
     if (!satNow) {
-      const field = 'gaugePercent' in contents ? 'contents.gaugePercent' : 'contents.levelHeight';
+      // The level reading is fine; the liquid temperature is past where a liquid surface
+      // exists (the end of the saturation curve), so the temperature is the field refused.
+      const top = model.satTop();
+      const note =
+        'for a level or float-gauge reading (above it there is no liquid surface: weigh the tank instead)';
       throw new InputError(
-        field,
-        `not usable above the critical temperature (${b.Tc.toFixed(1)} K): there is no liquid level; give contents.netMass`,
+        'liquidTemperature',
+        `from ${Tlo.toFixed(2)} to ${top.toFixed(2)} K ${note}`,
         c.T,
+        { min: Tlo, max: top, quantity: 'temperature', note },
       );
     }
     let f: number;
@@ -152,7 +171,7 @@ function check(input: TankCheckInput): TankCheckResult {
       },
     );
   }
-  const peak = buildPeak(peakState, c);
+  const peak = buildPeak(peakState, c, rho, b.rhoc);
 
   // --- Liquid-full and relief temperatures. ---
   const hints = [c.T, c.Tpeak];
@@ -161,10 +180,10 @@ function check(input: TankCheckInput): TankCheckResult {
     model,
     rho,
     c.reliefSetPressure + c.baro,
-    1 + MODEL_ALLOWANCE.vapourPressure,
-    hints,
-    Tlo,
+    (s) => pressureAllowance(s, rho, b.rhoc),
+    c.T,
     liquidFullTemperature,
+    hints,
   );
 
   // --- Diagnosis. ---
@@ -184,6 +203,7 @@ function check(input: TankCheckInput): TankCheckResult {
 
   const result: TankCheckResult = {
     phase: now.phase,
+    full: fullKind(now, rho, b.rhoc),
     pressure: ceilTo(now.pAbs - c.baro, P_STEP),
     pressureAbsolute: now.pAbs,
     barometricPressure: c.baro,
@@ -214,6 +234,8 @@ function check(input: TankCheckInput): TankCheckResult {
     skippedRefs,
     shapeVolume,
     T60: T_60F_K,
+    peakAllowance: pressureAllowance(peakState, rho, b.rhoc),
+    peakRaised: peakState.pAbs * (1 + pressureAllowance(peakState, rho, b.rhoc)) - c.baro,
   });
   return result;
 }
@@ -226,11 +248,12 @@ function netMassCap(model: ProductModel, c: CleanInput): number {
   return Math.min(rhoCap, model.maxDensityAt(c.T)) * c.V;
 }
 
-function buildPeak(s: State, c: CleanInput): PeakResult {
-  const raised = s.pAbs * (1 + peakPressureAllowance(s.phase)) - c.baro;
+function buildPeak(s: State, c: CleanInput, rho: number, rhoc: number): PeakResult {
+  const raised = s.pAbs * (1 + pressureAllowance(s, rho, rhoc)) - c.baro;
   return {
     temperature: c.Tpeak,
     phase: s.phase,
+    full: fullKind(s, rho, rhoc),
     p: ceilTo(s.pAbs - c.baro, P_STEP),
     pAbsolute: s.pAbs,
     liquidFraction: s.lf,

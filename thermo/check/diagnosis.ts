@@ -15,6 +15,8 @@ import { compositionShiftCauses } from './blendShift.js';
 import { ProductModel, type State } from './model.js';
 import { saturationTemperature } from './search.js';
 import type { DiagnosisResult } from './types.js';
+import { CAUSE_TEXT } from './caution-text.js';
+import type { CauseCode } from './codes.js';
 import type { CleanInput } from './validate.js';
 
 let propane: ProductModel | undefined;
@@ -48,43 +50,20 @@ export function diagnose(
   const verdict: DiagnosisResult['verdict'] =
     difference > tolerance ? 'high' : difference < -tolerance ? 'low' : 'fits';
   const readingAbs = reading + c.baro;
-  const causes: string[] = [];
+  const causeCodes: CauseCode[] = [];
+  // A zeotropic blend's composition can shift (vapour withdrawal, leak, recovered vapour).
+  const shift = compositionShiftCauses(model.product, c.T, verdict)[0] ?? null;
   if (verdict === 'high') {
-    if (now.phase === 'liquid-full')
-      causes.push(
-        'The tank is liquid-full: with no vapour space the pressure climbs steeply with temperature.',
-      );
-    causes.push(
-      'Air or another non-condensable gas in the vapour space (for example a new or opened tank that was not purged).',
-    );
-    causes.push(...compositionShiftCauses(model.product, c.T, verdict));
-    causes.push(
-      'Lighter components than the product entered (for example ethane or propane in butane).',
-    );
-    causes.push('A different product from the one entered.');
-    causes.push(
-      'The liquid is warmer than the thermometer shows (sun on the shell, or a thermometer reading the air).',
-    );
-    causes.push('Gauge error: a zero offset, a damaged gauge or one of the wrong range.');
+    if (now.phase === 'liquid-full') causeCodes.push('liquid-full-high');
+    causeCodes.push('non-condensable');
+    if (shift) causeCodes.push('composition-shift-high');
+    causeCodes.push('lighter-components', 'different-product', 'liquid-warmer', 'gauge-error-high');
   } else if (verdict === 'low') {
-    if (now.phase === 'liquid-full')
-      causes.push(
-        'The tank is liquid-full: its pressure then depends steeply on the exact fill and temperature, so the expected figure is uncertain.',
-      );
-    if (now.phase === 'vapour-only' || now.lf < 0.02)
-      causes.push(
-        'There may be no liquid left: a tank holding vapour only shows less than the vapour pressure.',
-      );
-    causes.push(
-      'The liquid is colder than the thermometer shows (a recent withdrawal or venting chills the liquid).',
-    );
-    causes.push(...compositionShiftCauses(model.product, c.T, verdict));
-    causes.push('Heavier components than the product entered (for example butane in propane).');
-    causes.push('A different product from the one entered.');
-    causes.push(
-      'Vapour being drawn off faster than the liquid boils, pulling the pressure down for a while.',
-    );
-    causes.push('Gauge error: a zero offset, a blocked or damaged gauge.');
+    if (now.phase === 'liquid-full') causeCodes.push('liquid-full-uncertain');
+    if (now.phase === 'vapour-only' || now.lf < 0.02) causeCodes.push('no-liquid-left');
+    causeCodes.push('liquid-colder');
+    if (shift) causeCodes.push('composition-shift-low');
+    causeCodes.push('heavier-components', 'different-product', 'vapour-draw', 'gauge-error-low');
   }
   const temperatureForReading =
     readingAbs > 0 ? saturationTemperature(model, readingAbs, [c.T, c.Tpeak], Tlo) : null;
@@ -94,7 +73,10 @@ export function diagnose(
     difference,
     tolerance,
     verdict,
-    causes,
+    causes: causeCodes.map(
+      (code) => (code.startsWith('composition-shift') && shift) || CAUSE_TEXT[code],
+    ),
+    causeCodes,
     propaneFraction: lpGas && readingAbs > 0 ? propaneSplit(c.T, readingAbs) : null,
     temperatureForReading,
   };

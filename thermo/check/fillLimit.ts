@@ -158,13 +158,10 @@ function physicalLimits(k: FillLimitContext, limits: LimitEntry[]): number[] {
   if (recovery) refs.push({ ...recovery, kind: 'rule' });
   const skipped: number[] = [];
   for (const r of refs) {
-    const s = model.sat(r.referenceTemperature);
-    if (!s) {
-      skipped.push(r.referenceTemperature);
-      continue;
-    }
+    if (!model.sat(r.referenceTemperature)) skipped.push(r.referenceTemperature);
+    const rhoNotFull = notFullDensity(model, r.referenceTemperature);
     const share = r.id === 'recovery-cylinder' ? (recovery?.fraction ?? 1) : 1;
-    const mass = floorTo(share * c.V * s.rhoL * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
+    const mass = floorTo(share * c.V * rhoNotFull * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
     limits.push({
       id: r.id,
       kind: r.kind,
@@ -243,4 +240,24 @@ function bindingNote(
   if (b.kind === 'physical' && ruled)
     return `${lead}The not-liquid-full limit binds below the rule’s limits: ${b.description.charAt(0).toLowerCase()}${b.description.slice(1)}.`;
   return lead ? lead.trim() : null;
+}
+
+/**
+ * The highest overall density that is not full at T, kg/m³: the saturated liquid density on
+ * the saturation curve; above its end, the lower of the critical density (denser contents are
+ * full of dense fluid) and the liquid density where the curve ends, so the limit never rises
+ * as the reference temperature does (DECISIONS.md, "Full of dense fluid").
+ */
+export function notFullDensity(model: ProductModel, T: number): number {
+  const s = model.sat(T);
+  if (s) return s.rhoL;
+  const b = model.basics;
+  const Ttop = model.satTop();
+  const top = model.sat(Ttop);
+  if (!top || top.rhoL <= b.rhoc) return top ? top.rhoL : b.rhoc;
+  // A pure fluid between the end of the curve (Tc − 0.5 K) and Tc: ρL − ρc ∝ (Tc − T)^(1/3)
+  // (the critical scaling search.ts also uses), from the last saturation state down to ρc.
+  if (b.pure && T < b.Tc)
+    return b.rhoc + (top.rhoL - b.rhoc) * ((b.Tc - T) / (b.Tc - Ttop)) ** (1 / 3);
+  return b.rhoc;
 }

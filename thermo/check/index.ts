@@ -6,3 +6,5 @@ export * as rules from '../rules/index.js';
 export * as tankGeometry from '../tank/index.js';
 export { LPG_PRESETS } from '../rules/presets.js';
 export type { LpgPreset } from '../rules/presets.js';
+export { CAUTION_CODES, CAUSE_CODES } from './codes.js';
+export type { CautionCode, CauseCode, MessageNumber, MessageParams } from './codes.js';

@@ -95,6 +95,9 @@ export function productBasics(product: Product): ProductBasics {
 /** Top of each product's saturation curve, K (memoised by the product's JSON). */
 const topCache = new Map<string, number>();
 
+/** Highest temperature the check looks at, K (as search.ts T_SEARCH_MAX). */
+const T_TOP_K = 400;
+
 export class ProductModel {
   readonly basics: ProductBasics;
   private readonly sats = new Map<number, Sat | null>();
@@ -179,19 +182,42 @@ export class ProductModel {
 
   /** Closed-tank state at T for overall density rho (kg/m³). */
   state(T: number, rho: number): State {
-    if (!this.basics.pure) {
-      const s = this.sat(T);
-      if (s && rho < s.rhoL && rho > s.rhoV) {
-        return {
-          phase: 'two-phase',
-          pAbs: s.p,
-          lf: (rho - s.rhoV) / (s.rhoL - s.rhoV),
-          rhoL: s.rhoL,
-          rhoV: s.rhoV,
-          approximate: true,
-        };
-      }
+    if (this.basics.pure) return this.closed(T, rho);
+    const s = this.sat(T);
+    if (s && rho < s.rhoL && rho > s.rhoV) {
+      return {
+        phase: 'two-phase',
+        pAbs: s.p,
+        lf: (rho - s.rhoV) / (s.rhoL - s.rhoV),
+        rhoL: s.rhoL,
+        rhoV: s.rhoV,
+        approximate: true,
+      };
     }
+    const c = this.closed(T, rho);
+    if (s && rho >= s.rhoL) {
+      // At or above the bubble-point liquid density the blend is liquid-full (all liquid at
+      // its bubble point, or compressed), whatever the flash's own rounding says; its
+      // pressure is never below the bubble pressure.
+      return {
+        ...c,
+        phase: 'liquid-full',
+        pAbs: Math.max(c.pAbs, s.p),
+        lf: 1,
+        rhoL: rho,
+        rhoV: null,
+      };
+    }
+    // Past the end of the bubble-point approximation (the vapour side, or beyond the top of
+    // the bubble curve) the flash gives the real pressure, which is below the bubble pressure
+    // the approximation took up to there. A closed tank's pressure never falls as it warms,
+    // so the bubble pressure where the approximation ended stays a floor (DECISIONS.md).
+    const end = this.twoPhaseEnd(rho, T);
+    if (end === null) return c;
+    return { ...c, pAbs: Math.max(c.pAbs, end.p) };
+  }
+
+  private closed(T: number, rho: number): State {
     const c = closedTank(this.product, T, rho);
     return {
       phase: PHASE[c.phase] ?? 'supercritical',
@@ -201,6 +227,41 @@ export class ProductModel {
       rhoV: c.rhoV,
       approximate: false,
     };
+  }
+
+  private readonly ends = new Map<number, { T: number; p: number } | null>();
+
+  /** Blend: two-phase under the bubble-point approximation at T (rhoV < rho < rhoL there). */
+  private twoPhaseAt(T: number, rho: number): boolean {
+    const s = this.sat(T);
+    return s !== null && rho < s.rhoL && rho > s.rhoV;
+  }
+
+  /**
+   * Blend: the last temperature below T at which the bubble-point approximation held for this
+   * overall density, with its bubble pressure; null when it never held below T. The
+   * approximation holds on one interval of temperature (ρV rises and ρL falls with T), which
+   * starts at the lowest temperature the check takes if anywhere: bisection to 0.001 K.
+   */
+  private twoPhaseEnd(rho: number, T: number): { T: number; p: number } | null {
+    if (this.ends.has(rho)) {
+      const hit = this.ends.get(rho)!;
+      return hit && hit.T <= T ? hit : null;
+    }
+    // Bisection over the whole range searched (not up to T), so every call for this density
+    // finds the same end and the floor cannot wobble with T.
+    let lo = Math.max(this.basics.Tmin + 0.01, 150);
+    let hi = T_TOP_K;
+    if (lo >= T || !this.twoPhaseAt(lo, rho) || this.twoPhaseAt(hi, rho)) return null;
+    while (hi - lo > 0.001) {
+      const mid = 0.5 * (lo + hi);
+      if (this.twoPhaseAt(mid, rho)) lo = mid;
+      else hi = mid;
+    }
+    const end = { T: lo, p: this.sat(lo)!.p };
+    if (this.ends.size > 50) this.ends.clear();
+    this.ends.set(rho, end);
+    return end;
   }
 }
 

@@ -11,7 +11,8 @@
  *   closed-tank pressure (liquid-full or supercritical branch).
  * All stop at 0.005 K or better, far inside the ±1 °F the results are shown to.
  */
-import { bracketRoot, type ProductModel } from './model.js';
+import { MODEL_ALLOWANCE } from '../rules/allowance.js';
+import { bracketRoot, type ProductModel, type State } from './model.js';
 
 /** Highest temperature searched, K. */
 export const T_SEARCH_MAX = 400;
@@ -130,50 +131,61 @@ export function liquidFullTemperature(
   // Still short of liquid-full where the saturation curve ends: it never fills (the liquid
   // meets the vapour at the critical point instead).
   const yTop = y(Thi);
-  if (yTop < 0) return null;
+  // Denser than the critical density but still short of liquid-full where the curve ends: it
+  // is full of dense fluid by the critical point; say so from the end of the curve (earlier,
+  // the cautious side).
+  // (A curve that runs on past the highest temperature searched has not ended: not full there.)
+  const ended = Thi < T_SEARCH_MAX;
+  if (yTop < 0) return ended ? Thi : null;
   const hints: [number, number][] = [[Thi, yTop]];
   for (const T of hintsT) if (T >= Tlo && T < Thi) hints.push([T, y(T)]);
+  // Already denser than the liquid at the lowest temperature searched: full from there on.
+  if (y(Tlo) >= 0) return Tlo;
   const T = solveIncreasing(y, hints, Tlo, Thi, 0.002);
-  if (T === null) return null;
+  if (T === null) return ended ? Thi : null;
   const s = model.sat(T);
-  // Only a crossing on the saturation curve is a liquid-full state.
-  return s && Math.abs(s.rhoL - rho) <= 0.01 * rho ? T : null;
+  // A crossing on the saturation curve is a liquid-full state; otherwise the contents (denser
+  // than critical) are full of dense fluid from the end of the curve.
+  return s && Math.abs(s.rhoL - rho) <= 0.01 * rho ? T : ended ? Thi : null;
 }
 
 /**
- * Temperature at which the closed-tank pressure times `grow` reaches pReliefAbs, K, or null
- * below T_SEARCH_MAX. Two-phase part on the saturation curve, then the single-phase branch.
+ * Temperature at which the closed-tank pressure, raised by its model allowance (`allowance`,
+ * the same one the headroom takes), reaches pReliefAbs, K; `Tnow` itself when it is reached
+ * already at the present liquid temperature; null when not below T_SEARCH_MAX. A closed tank's
+ * pressure never falls as it warms, so the first crossing is the only one: two-phase part on
+ * the saturation curve, then the single-phase branch.
  */
 export function reliefTemperature(
   model: ProductModel,
   rho: number,
   pReliefAbs: number,
-  grow: number,
-  hintsT: readonly number[],
-  Tlo: number,
+  allowance: (s: State) => number,
+  Tnow: number,
   Tfull: number | null,
+  hintsT: readonly number[] = [Tnow],
 ): number | null {
-  const pSat = pReliefAbs / grow;
-  const Ts = saturationTemperature(model, pSat, hintsT, Tlo);
-  // Reached while still two-phase: the saturation answer stands. (Tfull is null when the tank never fills.)
-  if (Ts !== null && (Tfull === null || Ts <= Tfull)) {
-    // A nearly empty tank can turn vapour-only first; check the state there.
-    const st = model.state(Ts, rho);
-    if (st.phase === 'two-phase') return Ts;
-  }
-  // Otherwise follow the closed-tank pressure from where the two-phase part ends.
-  const start =
-    Tfull !== null
-      ? Tfull
-      : Ts !== null
-        ? Ts
-        : Math.max(Tlo, ...hintsT.filter((T) => T <= T_SEARCH_MAX));
-  // Where the model cannot hold the fill the pressure is beyond any relief setting: "above".
+  // ln of raised pressure over relief; where the model cannot hold the fill: "above".
   const h = (T: number) => {
     const st = model.stateOrNull(T, rho);
-    return st ? Math.log((st.pAbs * grow) / pReliefAbs) : null;
+    return st ? Math.log((st.pAbs * (1 + allowance(st))) / pReliefAbs) : null;
   };
-  const h0 = h(start);
-  if (h0 === null || h0 >= 0) return start;
-  return solveIncreasing(h, [[start, h0]], start, T_SEARCH_MAX, 0.002);
+  const h0 = h(Tnow);
+  if (h0 === null || h0 >= 0) return Tnow;
+  const pSat = pReliefAbs / (1 + MODEL_ALLOWANCE.vapourPressure);
+  const Ts = saturationTemperature(model, pSat, hintsT, Tnow);
+  // Reached while still two-phase: the saturation answer stands.
+  if (Ts !== null && Ts > Tnow && (Tfull === null || Ts <= Tfull)) {
+    // Only where the tank's pressure there is that saturation pressure (not a blend's flash
+    // held at a floor below it, nor vapour only).
+    const st = model.stateOrNull(Ts, rho);
+    if (st && st.phase === 'two-phase' && Math.abs(st.pAbs / pSat - 1) < 1e-4) return Ts;
+  }
+  const hints: [number, number][] = [[Tnow, h0]];
+  for (const T of [Tfull, Ts]) {
+    if (T === null || !(T > Tnow) || T > T_SEARCH_MAX) continue;
+    const v = h(T);
+    hints.push([T, v === null ? Infinity : v]);
+  }
+  return solveIncreasing(h, hints, Tnow, T_SEARCH_MAX, 0.002);
 }

@@ -11,6 +11,7 @@ import type { FillMethod } from '../rules/volumeLimits.js';
 
 export type { FillMethod };
 import type { RecoveryInput } from '../rules/recovery.js';
+import type { CautionCode, CauseCode, MessageParams } from './codes.js';
 
 /** Where the container sits. A partly buried container counts as aboveground (29 CFR 1910.110(d)(7)(iv)(e)). */
 export type Placement = 'aboveground' | 'underground';
@@ -126,6 +127,9 @@ export interface TankCheckInput {
   peakTemperature: number;
 }
 
+/** How a tank is full: with liquid, or (above the critical temperature) with dense fluid. */
+export type FullKind = 'liquid' | 'dense-fluid';
+
 /** Phase state of the tank contents. */
 export type TankPhase = 'two-phase' | 'liquid-full' | 'vapour-only' | 'supercritical';
 
@@ -145,8 +149,10 @@ export type CautionQuantity =
 export interface Caution {
   level: CautionLevel;
   /** Stable machine code, e.g. `relief-at-peak`, `vacuum`, `standing`. */
-  code: string;
-  /** Plain-language message with the number in it (°F/psig and °C/kPa). Never permission to fill. */
+  code: CautionCode;
+  /** The numbers (SI, with their quantity) and words behind the message, by name; see `CAUTION_CODES`. */
+  params: MessageParams;
+  /** Default plain-language message in English with the numbers in it (°F/psig and °C/kPa); an app writes `code` and `params` in its user's units instead. Never permission to fill. */
   message: string;
   /** The number behind the caution, SI (unit per `quantity`), or null when the caution has none. */
   value: number | null;
@@ -267,6 +273,8 @@ export interface PeakResult {
   temperature: number;
   /** Phase state at the peak (closed tank, same contents). */
   phase: TankPhase;
+  /** `liquid` when liquid-full at the peak, `dense-fluid` when above the critical temperature with contents denser than the critical density (as hazardous as liquid-full), else null. */
+  full: FullKind | null;
   /** Expected pressure at the peak, Pa gauge (rounded up to 100 Pa). */
   p: number;
   /** Same, Pa absolute. */
@@ -290,8 +298,10 @@ export interface DiagnosisResult {
   tolerance: number;
   /** `fits`, `high` (above the band) or `low` (below the band). */
   verdict: 'fits' | 'high' | 'low';
-  /** Likely causes in words, most likely first (empty when the reading fits). */
+  /** Likely causes in words (English default), most likely first (empty when the reading fits). */
   causes: string[];
+  /** The same causes as stable codes, in the same order (see `CAUSE_CODES`). */
+  causeCodes: CauseCode[];
   /**
    * LP-gas only: the propane mole fraction of a propane/n-butane mix whose vapour pressure at the
    * entered temperature equals the reading (ideal-solution estimate), fraction 0…1, or null.
@@ -304,6 +314,8 @@ export interface DiagnosisResult {
 export interface TankCheckResult {
   /** Phase state now. */
   phase: TankPhase;
+  /** `liquid` when liquid-full now, `dense-fluid` when full of dense fluid now (see `PeakResult.full`), else null. */
+  full: FullKind | null;
   /** Expected pressure now, Pa gauge (model, at the entered liquid temperature; rounded up to 100 Pa). */
   pressure: number;
   /** Expected pressure now, Pa absolute. */
@@ -314,9 +326,9 @@ export interface TankCheckResult {
   contents: ContentsResult;
   fillLimit: FillLimitResult;
   peak: PeakResult;
-  /** Temperature at which the tank (same contents, closed) becomes liquid-full, K, or null when it cannot (contents below the critical density, or above the critical temperature first). */
+  /** Temperature from which the tank (same contents, closed) is full — liquid-full, or full of dense fluid where the saturation curve ends first — K, or null when it never fills (contents not denser than the critical density). */
   liquidFullTemperature: number | null;
-  /** Temperature at which the pressure reaches the relief set pressure, K (model, raised by the vapour-pressure allowance), or null when not below 400 K. */
+  /** Temperature at which the pressure, raised by the same model allowance as the headroom, reaches the relief set pressure, K; the present liquid temperature when it is reached already; null when not below 400 K. */
   reliefTemperature: number | null;
   /** Present when a gauge pressure was entered. */
   diagnosis: DiagnosisResult | null;
