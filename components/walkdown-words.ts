@@ -9,6 +9,8 @@ import type { BoardLevel } from './walkdown-board.js';
 import type { WalkEntry, WalkResult, WalkdownRecord } from './walkdown-types.js';
 import type { Caution } from '../thermo/check/types.js';
 import { forecastPeakAir } from './walkdown-board.js';
+import { cautionText as messageText } from './messages.js';
+import { STANDING_CAUTION } from '../thermo/check/standing.js';
 
 export const LEVEL_WORDS: Record<BoardLevel, string> = {
   danger: 'Danger',
@@ -29,8 +31,8 @@ export const LEVEL_SHAPES: Record<BoardLevel, string> = {
   'needs-reading': '?',
 };
 
-export const STANDING_WALK =
-  'These figures come from a model and the readings entered; they do not replace site procedures, the applicable code or a licensed person’s judgement, and they never mean a tank may be filled.';
+/** The standing caution on every walkdown screen and record: the engine's own. */
+export const STANDING_WALK = STANDING_CAUTION;
 
 /** The age of readings in words: "40 min", "5 h", "3 d". */
 export function ageText(ms: number | null): string {
@@ -56,12 +58,9 @@ export function marginText(k: number | null, d: DisplayUnits): string {
   return `${d.format('temperatureDifference', k, 'down')} away`;
 }
 
-/**
- * A caution in the user's units. The engine's message carries both unit systems; until the
- * app's message catalogue renders it, the engine's own words are used.
- */
-export function cautionText(c: Pick<Caution, 'message'>, _d: DisplayUnits): string {
-  return c.message;
+/** A caution in the user's words and units, through the app's message catalogue. */
+export function cautionText(c: Caution, d: DisplayUnits): string {
+  return messageText(c, d);
 }
 
 /** The figure lines of one projected tank. */
