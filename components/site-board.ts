@@ -48,6 +48,7 @@ export class SiteBoard extends LitElement {
     tanks: { attribute: false },
     history: { attribute: false },
     staleDays: { attribute: false },
+    _ownOpen: { state: true },
   };
 
   declare site: string;
@@ -61,6 +62,8 @@ export class SiteBoard extends LitElement {
   /** The site's walkdowns, newest first (an unfinished one can be resumed). */
   declare history: WalkdownRecord[];
   declare staleDays: number;
+  /** The per-tank allowances are open (their fields are made only then: a site can have hundreds). */
+  declare _ownOpen: boolean;
 
   constructor() {
     super();
@@ -72,6 +75,7 @@ export class SiteBoard extends LitElement {
     this.tanks = [];
     this.history = [];
     this.staleDays = 7;
+    this._ownOpen = false;
   }
 
   static override styles = [
@@ -218,9 +222,9 @@ export class SiteBoard extends LitElement {
           e.detail.value !== null &&
           this._change({ sunAllowance: e.detail.value })}
       ></number-field>
-      <details>
+      <details @toggle=${(e: Event) => (this._ownOpen = (e.target as HTMLDetailsElement).open)}>
         <summary>Shaded or insulated tanks: their own allowance</summary>
-        ${this.tanks.map(
+        ${(this._ownOpen ? this.tanks : []).map(
           (t) =>
             html`<number-field
               label=${t.name}

@@ -15,7 +15,6 @@ import type { CheckRecord, Settings, TankRecord } from '../components/types.js';
 import {
   allowanceFor,
   forecastPeakAir,
-  projectTank,
   rankRows,
   type BoardRow,
   type LatestReadings,
@@ -28,9 +27,7 @@ import type { Store } from './storage.js';
 import { latestReadingsFor, siteOf, staleDays } from './walkdown-data.js';
 import { walkdownToCsv } from './walkdown-csv.js';
 import { href } from './router.js';
-
-/** Longest stretch of work between two yields to the page, ms. */
-const SLICE_MS = 12;
+import { BoardClient } from './board-client.js';
 
 export class SiteScreen extends LitElement {
   static override properties = {
@@ -64,7 +61,7 @@ export class SiteScreen extends LitElement {
   declare _lastWho: string;
 
   private _latest = new Map<string, LatestReadings | null>();
-  private _generation = 0;
+  private readonly _board = new BoardClient();
   private _loadedKey = '';
 
   constructor() {
@@ -117,44 +114,44 @@ export class SiteScreen extends LitElement {
     void this._compute();
   }
 
-  /** Projects every tank in slices of about `SLICE_MS`, yielding to the page between them. */
-  private async _compute(): Promise<void> {
-    const gen = ++this._generation;
+  /** Projects every tank off the input path; the board fills in batch by batch. */
+  private _compute(): void {
     const f = this._forecast;
     if (!f) return;
     const tanks = this._siteTanks();
-    const now = new Date();
-    const rows: BoardRow[] = [];
+    let rows: BoardRow[] = [];
+    let first = true;
     this._computing = { done: 0, total: tanks.length };
-    let sliceStart = performance.now();
-    for (const t of tanks) {
-      rows.push(
-        projectTank(
-          t,
-          this._latest.get(t.id) ?? null,
-          f,
-          this.settings,
-          now,
-          staleDays(this.settings),
-        ),
-      );
-      if (performance.now() - sliceStart > SLICE_MS) {
-        this._rows = rankRows(rows);
-        this._computing = { done: rows.length, total: tanks.length };
-        await new Promise((r) => setTimeout(r, 0));
-        if (gen !== this._generation) return;
-        sliceStart = performance.now();
-      }
-    }
-    this._rows = rankRows(rows);
-    this._computing = null;
-    this.dispatchEvent(
-      new CustomEvent('board-ready', {
-        detail: { tanks: rows.length },
-        bubbles: true,
-        composed: true,
-      }),
-    );
+    const input = {
+      tanks,
+      latest: [...this._latest.entries()],
+      forecast: f,
+      settings: this.settings,
+      now: Date.now(),
+      staleDays: staleDays(this.settings),
+    };
+    this._board.run(structuredClone(input), (batch, finished) => {
+      rows = rows.concat(batch);
+      this._rows = rankRows(rows);
+      this._computing = finished ? null : { done: rows.length, total: tanks.length };
+      const name = finished ? 'board-ready' : first ? 'board-first' : '';
+      first = false;
+      if (name)
+        void this.updateComplete.then(() =>
+          this.dispatchEvent(
+            new CustomEvent(name, {
+              detail: { tanks: rows.length },
+              bubbles: true,
+              composed: true,
+            }),
+          ),
+        );
+    });
+  }
+
+  override disconnectedCallback(): void {
+    super.disconnectedCallback();
+    this._board.close();
   }
 
   private async _forecastChange(e: CustomEvent<{ forecast: SiteForecast }>): Promise<void> {
