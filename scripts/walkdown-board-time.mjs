@@ -1,3 +1,4 @@
+/* global document, indexedDB, location, requestAnimationFrame -- run inside the page by playwright */
 // Measures how long the site board takes to show its first rows and all of them for a site of 6 and of 200 tanks, in the
 // built app (dist/) in headless Chromium at 4× CPU throttling (a phone-class CPU), and the
 // longest main-thread task while it fills in. Run by hand after `npm run build`:
