@@ -111,16 +111,13 @@ export function checkEntry(
   const at = now.toISOString();
   if (!tank)
     return withEntry(w, i, { ...e, status: 'checked', at, result: null, problem: 'Tank deleted' });
-  const row = projectTank(
-    tank,
-    { readings: e.readings, at, source: 'walk' },
-    w.forecast,
-    settings,
-    now,
-  );
+  // Looked at on the walk: the readings count as taken now.
+  const readings = { ...e.readings, takenAt: at };
+  const row = projectTank(tank, { readings, at, source: 'walk' }, w.forecast, settings, now);
   const result = walkResult(row);
   return withEntry(w, i, {
     ...e,
+    readings,
     status: 'checked',
     reason: '',
     at,

@@ -96,6 +96,7 @@ function validateEntry(e: unknown, where: string): void {
   if (!['gaugePercent', 'levelHeight', 'netMass'].includes(r.contentsMode as string))
     fail(`${where}, readings`, '“contentsMode” is not known');
   for (const k of READING_KEYS) num(r, k, `${where}, readings`, -2e5, 1e8, true);
+  if (r.takenAt !== undefined) date(r, 'takenAt', `${where}, readings`);
   if (e.result !== null) {
     const res = e.result;
     if (!isObj(res) || !isObj(res.summary) || !Array.isArray(res.cautions))

@@ -1,12 +1,13 @@
 /**
  * Where a tank's latest readings come from, for the site board: the newest of its saved checks
- * (their `takenAt` when present, else the time saved), the tanks checked on walkdowns, and — for
+ * (their readings' `takenAt` when present, else the time saved), the tanks checked on walkdowns, and — for
  * an invented demo tank with neither — the demo readings it was seeded with, at the seed time.
  */
 import type { CheckRecord, Settings, TankRecord } from '../components/types.js';
 import {
   DEFAULT_STALE_DAYS,
   checkTime,
+  readingsTime,
   newestReadings,
   type LatestReadings,
 } from '../components/walkdown-board.js';
@@ -50,7 +51,14 @@ export async function latestReadingsFor(
     let list = candidates.get(t.id) ?? [];
     if (list.length === 0 && t.demo) {
       const draft = await store.getDraft(t.id);
-      if (draft) list = [{ readings: draft.readings, at: draft.updatedAt, source: 'demo' }];
+      if (draft)
+        list = [
+          {
+            readings: draft.readings,
+            at: readingsTime(draft.readings, draft.updatedAt),
+            source: 'demo',
+          },
+        ];
     }
     out.set(t.id, newestReadings(list));
   }

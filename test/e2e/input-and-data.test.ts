@@ -111,7 +111,8 @@ describe('clearing', () => {
     const { page, requests } = await app.open('/');
     const items = await tankList(page);
     const total = await items.count();
-    expect(total).toBe(6);
+    // Six tanks at the invented yard and two cylinders on the invented van (pwa/demo.ts).
+    expect(total).toBe(8);
     // Make one demo tank the user's own by editing it.
     const first = items.first();
     await first.getByTestId('tank-edit').click();
@@ -129,7 +130,7 @@ describe('clearing', () => {
     expect(await byTestId(page, 'tank-item').textContent()).toContain('My own home tank');
     expect(await byTestId(page, 'tank-item').getAttribute('data-demo')).toBe('false');
 
-    // Undo puts the five demo tanks back.
+    // Undo puts the seven demo tanks back.
     await page.locator('[data-testid="notice"][data-kind="undo"]').waitFor();
     await byTestId(page, 'notice-action').click();
     await expect.poll(() => byTestId(page, 'tank-item').count()).toBe(total);
