@@ -6,6 +6,7 @@ import { expect } from '@open-wc/testing';
 import { deleteDB } from 'idb';
 import { BACKUP_VERSION, makeBackup, parseBackup } from '../../pwa/backup.js';
 import { Store } from '../../pwa/storage.js';
+import { href, parseRoute, type Route } from '../../pwa/router.js';
 import { DEFAULT_SETTINGS, emptyReadings, type TankRecord } from '../../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../../components/walkdown-types.js';
 
@@ -127,5 +128,16 @@ describe('walkdowns in the backup', () => {
       }),
     );
     expect(r2.ok).to.equal(false);
+  });
+});
+
+describe('walkdown routes', () => {
+  it('a site with a slash, a walk and a record read back from their links', () => {
+    const routes: Route[] = [
+      { name: 'site', site: 'Yard 2/North · Invented' },
+      { name: 'walk', id: 'w-1' },
+      { name: 'walkdown', id: 'w-1' },
+    ];
+    for (const r of routes) expect(parseRoute(href(r))).to.deep.equal(r);
   });
 });
