@@ -320,9 +320,8 @@ export class SettingsForm extends LitElement {
           @value-change=${this._num((st, v) => (v === null ? null : { ...st, sunAllowance: v }))}
         ></number-field>
         <number-field
-          label="Readings count on the site board for"
+          label="Days readings count on the site board"
           name="staleReadingDays"
-          unit-text="days"
           testid="stale-reading-days"
           required
           hint="Older readings are listed as needing a reading, never projected"
