@@ -6,10 +6,14 @@ import type { FillLimitResult, FillMethod } from '../thermo/check/types.js';
 
 /** How a tank is filled, in the trade's words (the tank form's choices). */
 export const FILL_METHOD_WORDS: [FillMethod, string][] = [
-  ['gauge', 'By float or variable gauge (rotary, slip-tube), read with the liquid temperature'],
-  ['fixed-gauge', 'To the fixed maximum-level gauge (dip tube): stop when liquid appears at it'],
-  ['weight', 'By weight on a scale'],
+  ['gauge', 'Float gauge'],
+  ['fixed-gauge', 'Fixed max. level gauge'],
+  ['weight', 'Scale (by weight)'],
 ];
+
+/** What each way of filling means, shown under the choice (the options stay short at 320 px). */
+export const FILL_METHOD_HINT =
+  'Float gauge: a float or variable gauge (rotary, slip-tube), read with the liquid temperature. Fixed max. level gauge: the fixed maximum-level gauge (dip tube); the fill stops when liquid appears at it. Scale: filled by weight.';
 
 /** What follows "Stop at N %": where that percent is read. */
 export function stopPlace(f: Pick<FillLimitResult, 'fillMethod' | 'stopAtFixedGauge'>): string {

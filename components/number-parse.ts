@@ -35,11 +35,12 @@ export const NUMBER_FORMATS: Record<Exclude<NumberFormatId, 'auto'>, NumberForma
 
 /** Labels for the Settings choice (examples in the format itself). */
 export const NUMBER_FORMAT_LABELS: Record<NumberFormatId, string> = {
-  auto: 'As this device’s language',
-  point: '12,345.6 (decimal point)',
-  'point-space': '12 345.6 (decimal point, spaced groups)',
-  comma: '12.345,6 (decimal comma)',
-  'comma-space': '12 345,6 (decimal comma, spaced groups)',
+  // Short, so a closed select shows the whole choice on a 320 px phone; the note under it explains.
+  auto: 'Device language',
+  point: '12,345.6',
+  'point-space': '12 345.6',
+  comma: '12.345,6',
+  'comma-space': '12 345,6',
 };
 
 /** The decimal mark and group separator a locale uses (via Intl), as one of our formats. */

@@ -17,7 +17,7 @@ import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
 import { productChoices, productLabel, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
-import { FILL_METHOD_WORDS } from './fill-words.js';
+import { FILL_METHOD_HINT, FILL_METHOD_WORDS } from './fill-words.js';
 import { TEXT_LIMITS } from './limits.js';
 import { PLAUSIBLE_DESIGN_PRESSURE, PLAUSIBLE_WATER_CAPACITY, plausibleFor } from './plausible.js';
 import type { NumberField } from './number-field.js';
@@ -445,8 +445,10 @@ export class TankForm extends LitElement {
           </label>
           <div class="field">
             <label for="fill-method">How it is filled</label>
+            <p class="hint" id="fill-method-hint">${FILL_METHOD_HINT}</p>
             <select
               id="fill-method"
+              aria-describedby="fill-method-hint"
               data-testid="tank-fill-method"
               @change=${(e: Event) => this._setNameplate({ fillMethod: (e.target as HTMLSelectElement).value as FillMethod, fixedDipTube: undefined })}
             >

@@ -15,7 +15,7 @@ import { DEFAULT_SETTINGS } from '../../components/types.js';
 import { DisplayUnits } from '../../components/display.js';
 import { summaryText } from '../../components/summary.js';
 import { checkTank } from '../../thermo/index.js';
-import { byTestId } from './dom.js';
+import { byTestId, deep } from './dom.js';
 
 /** 49 CFR 173.315(a) Note 5 (CFR 2015 ed.), copied in test/reference/trade/filling_density_other.csv. */
 const NOTE_5_VOLUME_PERCENT = 87.5;
@@ -66,6 +66,10 @@ describe('fill stop: the binding limit', () => {
     const sel = byTestId(el, 'tank-fill-method') as HTMLSelectElement;
     expect(sel.value).to.equal('fixed-gauge');
     expect([...sel.options].map((o) => o.value)).to.deep.equal(['gauge', 'fixed-gauge', 'weight']);
-    expect(sel.options[1]!.textContent).to.contain('liquid appears');
+    expect(sel.options[1]!.textContent).to.contain('Fixed max. level gauge');
+    // The short option is explained beside it, in the trade's words.
+    const hint = deep(el, '#fill-method-hint')!;
+    expect(hint.textContent).to.contain('fixed maximum-level gauge');
+    expect(hint.textContent).to.contain('liquid appears');
   });
 });
