@@ -1,5 +1,10 @@
 import { defineConfig, type Plugin } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
+import { readFileSync } from 'node:fs';
+
+/** The app's version, written into records it makes (walkdowns). */
+const APP_VERSION = (JSON.parse(readFileSync('package.json', 'utf8')) as { version: string })
+  .version;
 
 /** Colour of the browser/OS chrome around the installed app; matches public/manifest.webmanifest. */
 const THEME_COLOR = '#12324a';
@@ -44,6 +49,7 @@ export default defineConfig({
     emptyOutDir: true,
     sourcemap: false,
   },
+  define: { __APP_VERSION__: JSON.stringify(APP_VERSION) },
   server: { host: '127.0.0.1' },
   preview: { host: '127.0.0.1', port: 4173, strictPort: true },
   plugins: [

@@ -39,6 +39,8 @@ export const SETTING_RANGES = {
   gaugeFullScale: { min: 1e4, max: 1e8 },
   thermometerTolerance: { min: 0, max: 10 },
   sunAllowance: { min: 0, max: 40 },
+  /** Days after which readings no longer count on the site board. */
+  staleReadingDays: { min: 1, max: 365 },
 } as const;
 
 type UnitChoice<K extends keyof UnitPrefs> = {
@@ -320,6 +322,19 @@ export class SettingsForm extends LitElement {
           .min=${SETTING_RANGES.sunAllowance.min}
           .max=${SETTING_RANGES.sunAllowance.max}
           @value-change=${this._num((st, v) => (v === null ? null : { ...st, sunAllowance: v }))}
+        ></number-field>
+        <number-field
+          label="Days readings count on the site board"
+          name="staleReadingDays"
+          testid="stale-reading-days"
+          required
+          hint="Older readings are listed as needing a reading, never projected"
+          .decimals=${0}
+          .display=${d}
+          .value=${s.staleReadingDays}
+          .min=${SETTING_RANGES.staleReadingDays.min}
+          .max=${SETTING_RANGES.staleReadingDays.max}
+          @value-change=${this._num((st, v) => (v === null ? null : { ...st, staleReadingDays: v }))}
         ></number-field>
       </fieldset>
 

@@ -8,9 +8,10 @@
  * @fires tank-delete - `CustomEvent<{ id: string }>` (the shell deletes and offers undo)
  * @fires tank-add - `CustomEvent<{ site: string }>`: add a tank (at this site, or '' for a new site).
  * @fires demo-clear - `CustomEvent<Record<string, never>>`: remove the invented demo tanks.
+ * @fires site-walk - `CustomEvent<{ site: string }>`: open the site's board and walkdown.
  *
  * data-testid: `tank-add`, `tank-item` (with `data-tank-id` and `data-demo`), `tank-edit`,
- * `tank-duplicate`, `tank-delete`, `demo-clear`.
+ * `tank-duplicate`, `tank-delete`, `demo-clear`, `walkdown-start` (with `data-site`).
  */
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
@@ -91,6 +92,10 @@ export class TankList extends LitElement {
         min-width: max-content;
         padding: 0.5rem 0.4rem;
         font-size: 0.9em;
+      }
+      .walk {
+        width: 100%;
+        margin: 0 0 0.6rem;
       }
       .site {
         margin: 1.25rem 0 0.5rem;
@@ -232,6 +237,14 @@ export class TankList extends LitElement {
         ([site, list]) =>
           html`<section aria-label=${site}>
             <h3 class="site">${site}</h3>
+            <button
+              class="walk"
+              data-testid="walkdown-start"
+              data-site=${site}
+              @click=${() => this._fire('site-walk', { site })}
+            >
+              Site board and walkdown (${list.length} tank${list.length === 1 ? '' : 's'})
+            </button>
             <ul>
               ${list.map((t) => this._tank(t))}
             </ul>

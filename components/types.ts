@@ -161,6 +161,8 @@ export interface Settings {
   fillMeterFraction: number;
   /** The delivery meter reads temperature-compensated (60 °F in US units, 15 °C in metric) by default. */
   fillMeterCompensated: boolean;
+  /** Days after which a tank's readings no longer count on the site board (it then needs a reading). */
+  staleReadingDays: number;
 }
 
 export const DEFAULT_SETTINGS: Settings = {
@@ -176,6 +178,7 @@ export const DEFAULT_SETTINGS: Settings = {
   fillGaugePoints: FILL_ACCURACY_DEFAULTS.gaugePoints,
   fillMeterFraction: FILL_ACCURACY_DEFAULTS.meterFraction,
   fillMeterCompensated: true,
+  staleReadingDays: 7,
 };
 
 /** Empty readings for a new check. */

@@ -95,10 +95,15 @@ export function allowanceFor(f: SiteForecast, tankId: string): number {
   return f.tankAllowances.find((a) => a.tankId === tankId)?.sunAllowance ?? f.sunAllowance;
 }
 
-/** The readings as time: `takenAt` when a check carries it, else the time it was saved. */
+/** When a check's readings were taken: their `takenAt` when present, else the check's saved time. */
 export function checkTime(c: CheckRecord): string {
-  const taken = (c as CheckRecord & { takenAt?: unknown }).takenAt;
-  return typeof taken === 'string' && !Number.isNaN(Date.parse(taken)) ? taken : c.at;
+  return readingsTime(c.readings, c.at);
+}
+
+/** The readings' own `takenAt` when it is a readable time, else `recordTime`. */
+export function readingsTime(r: Readings, recordTime: string): string {
+  const t = r.takenAt;
+  return typeof t === 'string' && !Number.isNaN(Date.parse(t)) ? t : recordTime;
 }
 
 /** The newest of the given candidates (checks, walk entries, demo readings), or null. */

@@ -5,7 +5,7 @@
  */
 import type { CheckSummary, Readings } from './types.js';
 import type { SiteForecast } from './walkdown-board.js';
-import type { Caution } from '../thermo/check/types.js';
+import type { Caution, TankPhase } from '../thermo/check/types.js';
 import type { BoardLevel } from './walkdown-board.js';
 
 export type { SiteForecast };
@@ -23,6 +23,8 @@ export interface WalkResult {
   reliefSetPressure: number;
   /** K, the peak liquid temperature used (forecast + allowance). */
   peakTemperature: number;
+  /** Phase state at the peak (a record made before this field reads as two-phase). */
+  peakPhase?: TankPhase;
   /** Percent 0…100 at the peak. */
   peakLiquidPercent: number;
   /** K, or null when the tank cannot become liquid-full. */

@@ -6,7 +6,8 @@
  *
  * Format history:
  *   1  { format: 'tankside-backup', version: 1, exportedAt, tanks, checks, settings }
- *   2  adds `fills`: fill records (pwa/fill-backup.ts). A format-1 file still imports whole.
+ *   2  adds `fills` (fill records, pwa/fill-backup.ts), `sites` (site forecasts) and `walkdowns`
+ *      (pwa/walkdown-backup.ts); a format-1 file reads as one with none of them and imports whole.
  */
 import type { DataSet } from './storage.js';
 import type { FillRecord } from '../thermo/fill/index.js';
@@ -21,6 +22,8 @@ import {
 } from '../components/types.js';
 import { TEXT_LIMITS } from '../components/limits.js';
 import type { NumberFormatId } from '../components/number-parse.js';
+import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
+import { WalkInvalid, validateWalkData } from './walkdown-backup.js';
 
 export const BACKUP_FORMAT = 'tankside-backup';
 export const BACKUP_VERSION = 2;
@@ -36,10 +39,19 @@ export interface BackupFile {
   settings: Settings | null;
   /** From format 2 on. */
   fills?: FillRecord[];
+  sites: SiteForecast[];
+  walkdowns: WalkdownRecord[];
 }
 
 export function makeBackup(data: DataSet, now = new Date()): BackupFile {
-  return { format: BACKUP_FORMAT, version: BACKUP_VERSION, exportedAt: now.toISOString(), ...data };
+  return {
+    format: BACKUP_FORMAT,
+    version: BACKUP_VERSION,
+    exportedAt: now.toISOString(),
+    ...data,
+    sites: data.sites ?? [],
+    walkdowns: data.walkdowns ?? [],
+  };
 }
 
 export type ParseResult = { ok: true; data: DataSet } | { ok: false; reason: string };
@@ -250,6 +262,7 @@ function validateSettings(s: unknown): Settings {
   optNum(s, 'fillGaugePoints', where, 0, 20);
   optNum(s, 'fillMeterFraction', where, 0, 0.1);
   bool(s, 'fillMeterCompensated', where, true);
+  optNum(s, 'staleReadingDays', where, 1, 365);
   return { ...DEFAULT_SETTINGS, ...(s as unknown as Settings) };
 }
 
@@ -296,9 +309,10 @@ export function parseBackup(text: string): ParseResult {
     const settings =
       raw.settings === null || raw.settings === undefined ? null : validateSettings(raw.settings);
     const fills = validateBackupFills(raw.fills, tankIds);
-    return { ok: true, data: { tanks, checks, settings, fills } };
+    const { sites, walkdowns } = validateWalkData(raw);
+    return { ok: true, data: { tanks, checks, settings, fills, sites, walkdowns } };
   } catch (e) {
-    if (e instanceof Invalid || e instanceof FillBackupError)
+    if (e instanceof Invalid || e instanceof FillBackupError || e instanceof WalkInvalid)
       return {
         ok: false,
         reason: `This backup cannot be imported. ${e.message}. Nothing was changed.`,

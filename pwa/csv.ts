@@ -21,13 +21,13 @@ export function looksLikeFormula(v: string): boolean {
   );
 }
 
-export function csvCell(v: string): string {
+export function cell(v: string): string {
   const safe = looksLikeFormula(v) ? `'${v}` : v;
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
 /** A number cell (no formula guard: a negative number is a number). */
-function numCell(text: string): string {
+export function numCell(text: string): string {
   return text === '–' ? '' : text;
 }
 
@@ -75,18 +75,18 @@ export function checksToCsv(tanks: TankRecord[], checks: CheckRecord[], d: Displ
       const s = c.summary;
       const top = s.cautions.find((x) => x.code !== 'standing');
       return [
-        csvCell(t?.site ?? ''),
-        csvCell(t?.name ?? '(deleted tank)'),
-        csvCell(c.at),
-        csvCell(c.productLabel),
+        cell(t?.site ?? ''),
+        cell(t?.name ?? '(deleted tank)'),
+        cell(c.at),
+        cell(c.productLabel),
         n('temperature', r.liquidTemperature),
-        csvCell(r.contentsMode),
+        cell(r.contentsMode),
         r.gaugePercent === null ? '' : numCell(formatPercent(r.gaugePercent).replace(' %', '')),
         n('length', r.levelHeight),
         n('mass', r.netMass),
         n('gaugePressure', r.gaugePressure),
         n('temperature', s.peakTemperature),
-        csvCell(s.phase),
+        cell(s.phase),
         n('gaugePressure', s.pressure, 'up'),
         n('mass', s.totalMass),
         n('volume', s.liquidVolume),
@@ -94,14 +94,14 @@ export function checksToCsv(tanks: TankRecord[], checks: CheckRecord[], d: Displ
         n('mass', s.maxMass, 'down'),
         n('mass', s.roomLeftMass, 'down'),
         numCell(formatPercent(s.stopAtGaugePercent, 'down').replace(' %', '')),
-        csvCell(s.binding),
+        cell(s.binding),
         n('gaugePressure', s.peakPressure, 'up'),
         n('pressureDifference', s.headroomToDesign, 'down'),
         n('pressureDifference', s.headroomToRelief, 'down'),
         n('temperature', s.liquidFullTemperature, 'down'),
-        csvCell(top ? `${top.level}: ${top.message}` : ''),
+        cell(top ? `${top.level}: ${top.message}` : ''),
         c.demo ? 'yes' : 'no',
       ];
     });
-  return [head.map(csvCell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';
+  return [head.map(cell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';
 }

@@ -6,7 +6,7 @@
 import { DisplayUnits, formatPercent } from '../components/display.js';
 import type { TankRecord } from '../components/types.js';
 import type { FillRecord } from '../thermo/fill/index.js';
-import { csvCell as cell } from './csv.js';
+import { cell } from './csv.js';
 
 const pct = (v: number | null | undefined, round: 'nearest' | 'up' | 'down' = 'nearest') =>
   v === null || v === undefined ? '' : formatPercent(v, round).replace(' %', '');

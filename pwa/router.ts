@@ -11,6 +11,9 @@ export type Route =
   | { name: 'new' }
   | { name: 'settings' }
   | { name: 'data' }
+  | { name: 'site'; site: string }
+  | { name: 'walk'; id: string }
+  | { name: 'walkdown'; id: string }
   | { name: 'not-found'; path: string };
 
 export function parseRoute(hash: string): Route {
@@ -30,6 +33,9 @@ export function parseRoute(hash: string): Route {
   if (a === 'tank' && b && c === 'fill' && parts.length === 3) return { name: 'fill', id: b };
   if (a === 'settings' && parts.length === 1) return { name: 'settings' };
   if (a === 'data' && parts.length === 1) return { name: 'data' };
+  if (a === 'site' && b && parts.length === 2) return { name: 'site', site: b };
+  if (a === 'walk' && b && parts.length === 2) return { name: 'walk', id: b };
+  if (a === 'walkdown' && b && parts.length === 2) return { name: 'walkdown', id: b };
   return { name: 'not-found', path };
 }
 
@@ -49,6 +55,12 @@ export function href(route: Route): string {
       return '#/settings';
     case 'data':
       return '#/data';
+    case 'site':
+      return `#/site/${encodeURIComponent(route.site)}`;
+    case 'walk':
+      return `#/walk/${encodeURIComponent(route.id)}`;
+    case 'walkdown':
+      return `#/walkdown/${encodeURIComponent(route.id)}`;
     case 'not-found':
       return '#/';
   }

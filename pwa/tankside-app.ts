@@ -83,6 +83,7 @@ export class TanksideApp extends LitElement {
     _dataMessageKind: { state: true },
     _persisted: { state: true },
     _checkScreenReady: { state: true },
+    _siteScreenReady: { state: true },
   };
 
   /** IndexedDB database name (tests use their own). */
@@ -105,6 +106,8 @@ export class TanksideApp extends LitElement {
   declare _persisted: boolean | null;
   /** The check screen (with the check engine) is loaded; it comes in its own chunk. */
   declare _checkScreenReady: boolean;
+  /** The walkdown screens (pwa/walkdown-screen.ts, with the engine) are loaded. */
+  declare _siteScreenReady: boolean;
 
   /** The blank tank of the "add a tank" screen, made once per visit so a re-render keeps the typing. */
   private _newTank: TankRecord = blankTank(newId());
@@ -135,6 +138,7 @@ export class TanksideApp extends LitElement {
     this._dataMessageKind = 'ok';
     this._persisted = null;
     this._checkScreenReady = false;
+    this._siteScreenReady = false;
   }
 
   static override styles = [
@@ -311,6 +315,8 @@ export class TanksideApp extends LitElement {
       if (this._route === route)
         this._draft = { tankId: id, ...openingReadings(draft, this._settings.sunAllowance) };
     }
+    if (route.name === 'site' || route.name === 'walk' || route.name === 'walkdown')
+      await this._loadSiteScreen();
     await this.updateComplete;
     // A new screen starts at its top, and a screen reader starts reading there.
     window.scrollTo(0, 0);
@@ -325,6 +331,17 @@ export class TanksideApp extends LitElement {
       this._checkScreenReady = true;
     } catch (e) {
       this._fatal = `The check screen could not be loaded (${e instanceof Error ? e.message : String(e)}). Reload the app.`;
+    }
+  }
+
+  /** Loads the walkdown screens on first use (their own chunk, precached for offline use). */
+  private async _loadSiteScreen(): Promise<void> {
+    if (this._siteScreenReady) return;
+    try {
+      await import('./walkdown-screen.js');
+      this._siteScreenReady = true;
+    } catch (e) {
+      this._fatal = `The walkdown screens could not be loaded (${e instanceof Error ? e.message : String(e)}). Reload the app.`;
     }
   }
 
@@ -611,8 +628,22 @@ export class TanksideApp extends LitElement {
           @tank-duplicate=${this._duplicate}
           @tank-delete=${this._deleteTank}
           @demo-clear=${this._clearDemo}
+          @site-walk=${(e: CustomEvent<{ site: string }>) => this._navigate({ name: 'site', site: e.detail.site })}
         ></tank-list>`;
       }
+      case 'site':
+      case 'walk':
+      case 'walkdown':
+        if (!this._siteScreenReady) return html`<p>Loading…</p>`;
+        return html`<site-screen
+          .store=${this._store}
+          view=${r.name === 'site' ? 'board' : r.name === 'walk' ? 'walk' : 'report'}
+          site=${r.name === 'site' ? r.site : ''}
+          walk-id=${r.name === 'site' ? '' : r.id}
+          .settings=${this._settings}
+          .tanks=${this._tanks}
+          .checks=${this._checks}
+        ></site-screen>`;
       case 'new':
         return html`<tank-form
           heading="Add a tank"
@@ -718,7 +749,7 @@ export class TanksideApp extends LitElement {
               class="button"
               href="#/"
               data-testid="nav-tanks"
-              aria-current=${current(['tanks', 'check', 'edit', 'new', 'fill'])}
+              aria-current=${current(['tanks', 'check', 'edit', 'new', 'fill', 'site', 'walk', 'walkdown'])}
               >Tanks</a
             >
             <a

@@ -90,6 +90,8 @@ describe('parseBackup', () => {
       checks: [check('c', 'a')],
       settings: { ...DEFAULT_SETTINGS, theme: 'standard' as const },
       fills: [fill('f1', 'a')],
+      sites: [],
+      walkdowns: [],
     };
     expect(makeBackup(data).version).to.equal(BACKUP_VERSION);
     const r = parseBackup(JSON.stringify(makeBackup(data)));

@@ -1,0 +1,364 @@
+/**
+ * The site board: the site's forecast (one or more days, the sun allowance, per-tank allowances
+ * for shaded or insulated tanks) and every tank of the site projected to it, worst first by the
+ * rule in `RANK_RULE`, with the walk's start and the site's past walkdowns.
+ *
+ * Takes ranked rows from its host (which computes them off the input path) and shows how far the
+ * computation got.
+ *
+ * @fires forecast-change - `CustomEvent<{ forecast: SiteForecast }>` (only with valid figures)
+ * @fires board-open - `CustomEvent<{ id: string }>`: open this tank's readings with the forecast.
+ * @fires walk-start - `CustomEvent<Record<string, never>>`
+ * @fires walk-resume - `CustomEvent<{ id: string }>`
+ * @fires walk-open - `CustomEvent<{ id: string }>`: show a past walkdown's record.
+ *
+ * data-testid: `walkdown-forecast-air`, `walkdown-sun`, `walkdown-add-day`, `walkdown-row` (with
+ * `data-tank-id`, `data-level`, `data-si-headroom-relief` (Pa), `data-si-liquid-full-margin` (K,
+ * empty when none)), `walkdown-board-progress`, `walkdown-begin`, `walkdown-resume`,
+ * `walkdown-history-item`.
+ */
+import { LitElement, html, css, nothing } from 'lit';
+import { baseStyles, levelStyles } from './styles.js';
+import { DisplayUnits } from './display.js';
+import './number-field.js';
+import type { NumberFieldChange } from './number-field.js';
+import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
+import { T_RANGE_K } from './check-input.js';
+import { READING_RANGES } from './check-form.js';
+import { RANK_RULE, type BoardRow, type SiteForecast } from './walkdown-board.js';
+import { progress, type WalkdownRecord } from './walkdown-types.js';
+import {
+  LEVEL_SHAPES,
+  LEVEL_WORDS,
+  STANDING_WALK,
+  ageText,
+  cautionText,
+  resultLines,
+} from './walkdown-words.js';
+import { walkResult } from './walkdown-ops.js';
+import { formatDate } from './tank-list.js';
+
+export class SiteBoard extends LitElement {
+  static override properties = {
+    site: { type: String },
+    forecast: { attribute: false },
+    rows: { attribute: false },
+    computing: { attribute: false },
+    display: { attribute: false },
+    tanks: { attribute: false },
+    history: { attribute: false },
+    staleDays: { attribute: false },
+    _ownOpen: { state: true },
+  };
+
+  declare site: string;
+  declare forecast: SiteForecast;
+  /** Ranked rows (those computed so far). */
+  declare rows: BoardRow[];
+  /** Progress of the computation, or null when done. */
+  declare computing: { done: number; total: number } | null;
+  declare display: DisplayUnits;
+  declare tanks: TankRecord[];
+  /** The site's walkdowns, newest first (an unfinished one can be resumed). */
+  declare history: WalkdownRecord[];
+  declare staleDays: number;
+  /** The per-tank allowances are open (their fields are made only then: a site can have hundreds). */
+  declare _ownOpen: boolean;
+
+  constructor() {
+    super();
+    this.site = '';
+    this.forecast = { site: '', days: [], sunAllowance: 5, tankAllowances: [], enteredAt: '' };
+    this.rows = [];
+    this.computing = null;
+    this.display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
+    this.tanks = [];
+    this.history = [];
+    this.staleDays = 7;
+    this._ownOpen = false;
+  }
+
+  static override styles = [
+    baseStyles,
+    levelStyles,
+    css`
+      ol {
+        list-style: none;
+        margin: 0;
+        padding: 0;
+      }
+      li.row {
+        border: var(--border-width) solid var(--line);
+        border-radius: 0.6rem;
+        margin: 0 0 0.6rem;
+        background: var(--paper);
+      }
+      li.row[data-level='danger'],
+      li.row[data-level='warning'] {
+        border-width: 4px;
+        border-color: var(--ink);
+      }
+      .open {
+        width: 100%;
+        display: block;
+        text-align: left;
+        border: 0;
+        padding: 0.6rem;
+        font-weight: 400;
+      }
+      .name {
+        font-weight: 800;
+        font-size: 1.05em;
+      }
+      .line {
+        display: block;
+        overflow-wrap: anywhere;
+      }
+      .muted {
+        color: var(--muted);
+      }
+      .days {
+        display: grid;
+        gap: 0.25rem;
+      }
+      .rule,
+      .standing {
+        font-size: 0.92em;
+      }
+      .actions {
+        display: flex;
+        flex-wrap: wrap;
+        gap: 0.5rem;
+        margin: 0.75rem 0;
+      }
+      fieldset {
+        border: var(--border-width) solid var(--line);
+        border-radius: 0.6rem;
+        margin: 0 0 0.75rem;
+      }
+      h2 {
+        overflow-wrap: anywhere;
+      }
+    `,
+  ];
+
+  private _fire<T>(type: string, detail: T): void {
+    this.dispatchEvent(new CustomEvent<T>(type, { detail, bubbles: true, composed: true }));
+  }
+
+  private _change(next: Partial<SiteForecast>): void {
+    const forecast = { ...this.forecast, ...next, enteredAt: new Date().toISOString() };
+    this._fire('forecast-change', { forecast });
+  }
+
+  private _day(i: number) {
+    return (e: CustomEvent<NumberFieldChange>) => {
+      if (!e.detail.valid) return;
+      const days = this.forecast.days.slice();
+      if (e.detail.value === null) days.splice(i, 1);
+      else days[i] = e.detail.value;
+      this._change({ days });
+    };
+  }
+
+  private _tankSun(id: string) {
+    return (e: CustomEvent<NumberFieldChange>) => {
+      if (!e.detail.valid) return;
+      const rest = this.forecast.tankAllowances.filter((a) => a.tankId !== id);
+      const v = e.detail.value;
+      this._change({
+        tankAllowances: v === null ? rest : [...rest, { tankId: id, sunAllowance: v }],
+      });
+    };
+  }
+
+  private _forecastForm() {
+    const d = this.display;
+    const f = this.forecast;
+    const days = f.days.length ? f.days : [null];
+    const range = { min: T_RANGE_K.min, max: T_RANGE_K.max - READING_RANGES.sunAllowance.max };
+    return html`<fieldset>
+      <legend>Site forecast</legend>
+      <div class="days">
+        ${days.map(
+          (t, i) =>
+            html`<number-field
+              label=${i === 0 ? 'Peak air temperature' : `Day ${i + 1} peak air temperature`}
+              name="day${i}"
+              quantity="temperature"
+              testid=${i === 0 ? 'walkdown-forecast-air' : `walkdown-forecast-day-${i + 1}`}
+              hint=${i === 0 ? 'Every tank of the site uses this; add days to take the hottest' : ''}
+              .display=${d}
+              .value=${t}
+              .min=${range.min}
+              .max=${range.max}
+              @value-change=${this._day(i)}
+            ></number-field>`,
+        )}
+      </div>
+      ${
+        f.days.length > 0 && f.days.length < 14
+          ? html`<button
+              class="quiet"
+              data-testid="walkdown-add-day"
+              @click=${() => this._change({ days: [...f.days, f.days[f.days.length - 1]!] })}
+            >
+              Add another day
+            </button>`
+          : nothing
+      }
+      <number-field
+        label="Sun allowance (rule of thumb)"
+        name="sun"
+        quantity="temperatureDifference"
+        testid="walkdown-sun"
+        hint="Added to the air temperature for the liquid of an unshaded, uninsulated tank"
+        .display=${d}
+        .value=${f.sunAllowance}
+        .min=${READING_RANGES.sunAllowance.min}
+        .max=${READING_RANGES.sunAllowance.max}
+        @value-change=${(e: CustomEvent<NumberFieldChange>) =>
+          e.detail.valid &&
+          e.detail.value !== null &&
+          this._change({ sunAllowance: e.detail.value })}
+      ></number-field>
+      <details @toggle=${(e: Event) => (this._ownOpen = (e.target as HTMLDetailsElement).open)}>
+        <summary>Shaded or insulated tanks: their own allowance</summary>
+        ${(this._ownOpen ? this.tanks : []).map(
+          (t) =>
+            html`<number-field
+              label=${t.name}
+              name="sun-${t.id}"
+              quantity="temperatureDifference"
+              hint="Empty: the site’s allowance"
+              .display=${d}
+              .value=${f.tankAllowances.find((a) => a.tankId === t.id)?.sunAllowance ?? null}
+              .min=${READING_RANGES.sunAllowance.min}
+              .max=${READING_RANGES.sunAllowance.max}
+              @value-change=${this._tankSun(t.id)}
+            ></number-field>`,
+        )}
+      </details>
+      <p class="muted">
+        ${f.enteredAt ? `Forecast entered ${formatDate(f.enteredAt)}.` : 'No forecast entered yet.'}
+      </p>
+    </fieldset>`;
+  }
+
+  private _row(row: BoardRow, i: number) {
+    const d = this.display;
+    const res = walkResult(row);
+    const relief = row.summary ? String(row.summary.headroomToRelief) : '';
+    const full = row.liquidFullMargin === null ? '' : String(row.liquidFullMargin);
+    return html`<li
+      class="row"
+      data-testid="walkdown-row"
+      data-tank-id=${row.tank.id}
+      data-level=${row.level}
+      data-si-headroom-relief=${relief}
+      data-si-liquid-full-margin=${full}
+    >
+      <button
+        class="open"
+        @click=${() => this._fire('board-open', { id: row.tank.id })}
+        aria-label="${i + 1}. ${row.tank.name}: ${LEVEL_WORDS[row.level]}. Open its readings"
+      >
+        <span class="line"
+          ><span class="name">${i + 1}. ${row.tank.name}</span>
+          <span class="level ${row.level}"
+            >${LEVEL_SHAPES[row.level]} ${LEVEL_WORDS[row.level]}</span
+          ></span
+        >
+        ${
+          res
+            ? html`${resultLines(res, d).map((l) => html`<span class="line">${l}</span>`)}
+              ${
+                row.result?.cautions[0] && row.summary?.topLevel
+                  ? html`<span class="line">Worst: ${cautionText(row.result.cautions[0], d)}</span>`
+                  : nothing
+              }`
+            : html`<span class="line">${row.reason}: not projected</span>`
+        }
+        <span class="line muted"
+          >Readings ${row.ageMs === null ? 'none' : `${ageText(row.ageMs)} old`} (limit
+          ${this.staleDays} days)</span
+        >
+      </button>
+    </li>`;
+  }
+
+  private _history() {
+    if (!this.history.length) return nothing;
+    return html`<section aria-labelledby="h-hist">
+      <h3 id="h-hist">Walkdowns of this site</h3>
+      <ol>
+        ${this.history.map((w) => {
+          const p = progress(w);
+          return html`<li>
+            <button
+              class="quiet"
+              data-testid="walkdown-history-item"
+              data-id=${w.id}
+              @click=${() =>
+                this._fire(w.status === 'finished' ? 'walk-open' : 'walk-resume', { id: w.id })}
+            >
+              ${formatDate(w.startedAt)} · ${p.done} of ${p.total} done ·
+              ${w.status === 'finished' ? `by ${w.checkedBy || 'not given'}` : 'under way'}
+            </button>
+          </li>`;
+        })}
+      </ol>
+    </section>`;
+  }
+
+  override render() {
+    const active = this.history.find((w) => w.status === 'in-progress');
+    const c = this.computing;
+    return html`
+      <h2>Site board: ${this.site}</h2>
+      ${this._forecastForm()}
+      <div class="actions">
+        ${
+          active
+            ? html`<button
+                class="primary"
+                data-testid="walkdown-resume"
+                @click=${() => this._fire('walk-resume', { id: active.id })}
+              >
+                Go on with the walk (${progress(active).done} of ${progress(active).total} done)
+              </button>`
+            : html`<button
+                class="primary"
+                data-testid="walkdown-begin"
+                ?disabled=${c !== null || this.rows.length === 0}
+                @click=${() => this._fire('walk-start', {})}
+              >
+                Start the walk
+              </button>`
+        }
+      </div>
+      <p class="rule">${RANK_RULE}</p>
+      ${
+        c
+          ? html`<p role="status" data-testid="walkdown-board-progress">
+              Working out ${c.done} of ${c.total} tanks…
+              <progress max=${c.total} value=${c.done}></progress>
+            </p>`
+          : nothing
+      }
+      <ol aria-label="Tanks, worst first">
+        ${this.rows.map((r, i) => this._row(r, i))}
+      </ol>
+      <p class="standing" role="note">${STANDING_WALK}</p>
+      ${this._history()}
+    `;
+  }
+}
+
+customElements.define('site-board', SiteBoard);
+
+declare global {
+  interface HTMLElementTagNameMap {
+    'site-board': SiteBoard;
+  }
+}
