@@ -17,6 +17,7 @@ const { checkTank } = (await import(
 const { LPG_PRESETS } = (await import(
   at('rules/presets.ts')
 )) as typeof import('../thermo/rules/presets.js');
+const { closedTank } = (await import(at('api.ts'))) as typeof import('../thermo/api.js');
 const { toSI } = (await import(at('units.ts'))) as typeof import('../thermo/units.js');
 type Input = import('../thermo/check/types.js').TankCheckInput;
 
@@ -56,4 +57,18 @@ console.log(`thermo: ${root}`);
 console.log(`first check (cold): ${first.toFixed(1)} ms`);
 console.log(
   `spread of ${times.length} checks: median ${q(times, 0.5).toFixed(2)} ms, p90 ${q(times, 0.9).toFixed(2)} ms, max ${q(times, 1).toFixed(1)} ms`,
+);
+
+// The chart's heating sweep: 100 closed-tank states of one tank from 15 to 55 °C, for three
+// fillings (a new density each time, as a new reading gives).
+const sweeps: number[] = [];
+for (const rho of [300, 420, 470])
+  for (let k = 0; k < 3; k++)
+    sweeps.push(
+      time(() => {
+        for (let i = 0; i < 100; i++) closedTank(blend, 288.15 + 0.4 * i + 0.01 * k, rho + k);
+      }),
+    );
+console.log(
+  `100-point heating sweep: median ${q(sweeps, 0.5).toFixed(1)} ms, max ${q(sweeps, 1).toFixed(1)} ms`,
 );
