@@ -18,26 +18,21 @@
  * `caution` (with `data-level` and `data-code`), `results-missing`, `results-error`,
  * `results-announcer`. Each figure carries its raw SI value in `data-si`.
  */
-import { LitElement, html, css, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { LitElement, html, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { checkResultsStyles } from './check-results-styles.js';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
 import type { Caution, FullKind, TankCheckResult, TankPhase } from '../thermo/check/types.js';
-import { T_60F_K } from '../thermo/constants.js';
 import { stopPlace } from './fill-words.js';
 import { causeText, cautionText } from './messages.js';
+import { baseLabel, keyFigures } from './key-figures.js';
+import { base60, fillLimitDetail } from './results-limit.js';
 
 /** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
 export const STANDING_FALLBACK =
   'These figures come from a model and the entered readings. They support, and never replace, the site ' +
   'procedures, the applicable code and the judgement of a licensed, trained person.';
-
-/** The phase in words; a tank full of dense fluid is named as such (as hazardous as liquid-full). */
-export function phaseWords(phase: TankPhase, full: FullKind | null | undefined): string {
-  return full === 'dense-fluid'
-    ? 'Full of dense fluid (above the critical temperature): no vapour space'
-    : PHASE_WORDS[phase];
-}
 
 export const PHASE_WORDS: Record<TankPhase, string> = {
   'two-phase': 'Liquid and vapour',
@@ -45,6 +40,13 @@ export const PHASE_WORDS: Record<TankPhase, string> = {
   'vapour-only': 'Vapour only: no liquid',
   supercritical: 'Above the critical temperature: no liquid level',
 };
+
+/** The phase in words; a tank full of dense fluid is named as such (as hazardous as liquid-full). */
+export function phaseWords(phase: TankPhase, full: FullKind | null | undefined): string {
+  return full === 'dense-fluid'
+    ? 'Full of dense fluid (above the critical temperature): no vapour space'
+    : PHASE_WORDS[phase];
+}
 
 /** The engine looks for the relief temperature up to this temperature, K (see `reliefTemperature`). */
 const RELIEF_SEARCH_MAX_K = 400;
@@ -90,96 +92,7 @@ export class CheckResults extends LitElement {
     this._announce = '';
   }
 
-  static override styles = [
-    baseStyles,
-    levelStyles,
-    css`
-      .key {
-        display: grid;
-        grid-template-columns: repeat(auto-fit, minmax(14rem, 1fr));
-        gap: 0.75rem;
-        margin-bottom: 1rem;
-      }
-      .card {
-        border: var(--border-width) solid var(--ink);
-        border-radius: 0.6rem;
-        padding: 0.75rem;
-        background: var(--paper);
-        min-width: 0;
-      }
-      .card h3 {
-        font-size: 1rem;
-        margin: 0 0 0.25rem;
-      }
-      .big {
-        font-size: 1.6em;
-        font-weight: 800;
-        line-height: 1.2;
-        overflow-wrap: anywhere;
-      }
-      dl {
-        margin: 0;
-        display: grid;
-        grid-template-columns: minmax(0, 1fr) auto;
-        gap: 0.25rem 0.75rem;
-      }
-      dt {
-        min-width: 0;
-      }
-      dd {
-        margin: 0;
-        font-weight: 700;
-        text-align: right;
-        font-variant-numeric: tabular-nums;
-      }
-      .standing {
-        border: var(--border-width) solid var(--ink);
-        border-left-width: 0.6rem;
-        border-radius: 0.4rem;
-        padding: 0.6rem 0.75rem;
-        margin: 0 0 1rem;
-        background: var(--paper-2);
-      }
-      .cautions {
-        list-style: none;
-        padding: 0;
-        margin: 0 0 1rem;
-      }
-      .cautions li {
-        border: var(--border-width) solid var(--line);
-        border-radius: 0.4rem;
-        padding: 0.5rem 0.6rem;
-        margin-bottom: 0.5rem;
-        background: var(--paper);
-      }
-      .cautions li .level {
-        margin-right: 0.4rem;
-      }
-      .over {
-        color: var(--danger);
-      }
-      .note,
-      .why {
-        font-size: 0.92em;
-      }
-      section {
-        margin-bottom: 1rem;
-      }
-      .missing {
-        border: var(--border-width) dashed var(--ink);
-        border-radius: 0.5rem;
-        padding: 0.75rem;
-        margin-bottom: 1rem;
-      }
-      @media print {
-        .card,
-        .cautions li,
-        .standing {
-          break-inside: avoid;
-        }
-      }
-    `,
-  ];
+  static override styles = [baseStyles, levelStyles, checkResultsStyles];
 
   protected override updated(changed: PropertyValues<this>): void {
     if (changed.has('result') || changed.has('missing') || changed.has('error')) {
@@ -234,11 +147,16 @@ export class CheckResults extends LitElement {
     }`;
   }
 
+  /** The standing caution in short, with the whole text one tap away. */
   private _standing(): TemplateResult {
     const text = this.result?.standingCaution ?? STANDING_FALLBACK;
-    return html`<p class="standing" data-testid="standing-caution" role="note">
-      <strong>Always:</strong> ${text}
-    </p>`;
+    return html`<details class="standing" data-testid="standing-caution" role="note">
+      <summary>
+        <strong>Always:</strong> model figures only; site procedures, the code and licensed practice
+        come first. <span class="more">Read the whole caution</span>
+      </summary>
+      <p>${text}</p>
+    </details>`;
   }
 
   private _cautions(list: Caution[]): TemplateResult {
@@ -267,42 +185,44 @@ export class CheckResults extends LitElement {
     >`;
   }
 
+  /** Room left as liquid at the base temperature and as mass, or how far over the limit. */
+  private _roomLeft(r: TankCheckResult): TemplateResult {
+    const d = this.display;
+    const k = keyFigures(r, d);
+    if (k.over)
+      return html`<strong class="over"
+        >Over the limit by ${d.format('volume', -k.roomLeftVolume, 'up')} as liquid at
+        ${baseLabel(d)} (<span data-testid="room-left" data-si=${String(k.roomLeftMass)}
+          >${d.format('mass', -k.roomLeftMass, 'up')}</span
+        >)</strong
+      >`;
+    return html`Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at
+    ${baseLabel(d)} (${this._fig('room-left', 'mass', k.roomLeftMass, 'down')})`;
+  }
+
   private _body(r: TankCheckResult): TemplateResult {
     const d = this.display;
     const f = r.fillLimit;
-    const c = r.contents;
-    const p = r.peak;
     // An assumed relief setting is never shown as if read from the nameplate.
     const assumed = r.cautions.some((c) => c.code === 'relief-assumed');
-    const binding = f.limits.find((l) => l.id === f.binding);
-    const over = f.roomLeftMass < 0;
+    const c = r.contents;
+    const p = r.peak;
     return html`
       <div class="key">
         <div class="card">
           <h3>Fill limit</h3>
           <div class="big">${this._fig('fill-limit', 'mass', f.maxMass, 'down')}</div>
           <p>
-            Stop at
+            Stop at or below
             <strong
               ><span data-testid="fill-stop-percent" data-si=${String(f.stopAtGaugePercent)}
                 >${formatPercent(f.stopAtGaugePercent, 'down')}</span
               ></strong
             >
-            ${stopPlace(f)}.
+            ${stopPlace(f)}: the figure to act on.
           </p>
           ${f.bindingNote ? html`<p class="why" data-testid="fill-stop-why">${f.bindingNote}</p>` : nothing}
-          <p>
-            ${
-              over
-                ? html`<strong class="over"
-                    >Over the limit by
-                    <span data-testid="room-left" data-si=${String(f.roomLeftMass)}
-                      >${d.format('mass', -f.roomLeftMass, 'up')}</span
-                    ></strong
-                  >`
-                : html`Room left ${this._fig('room-left', 'mass', f.roomLeftMass, 'down')}`
-            }
-          </p>
+          <p>${this._roomLeft(r)}</p>
         </div>
         <div class="card">
           <h3>Peak day${this.peakEstimated ? ' (no forecast entered)' : ''}</h3>
@@ -343,7 +263,7 @@ export class CheckResults extends LitElement {
         </div>
       </div>
 
-      <section aria-labelledby="h-cautions">
+      <section aria-labelledby="h-cautions" id="cautions">
         <h3 id="h-cautions">Cautions</h3>
         ${this._cautions(r.cautions)}
       </section>
@@ -389,41 +309,7 @@ export class CheckResults extends LitElement {
         </dl>
       </section>
 
-      <section aria-labelledby="h-limit">
-        <h3 id="h-limit">Fill limit in detail</h3>
-        <dl>
-          <dt>Maximum filling density</dt>
-          <dd>${d.format('fraction', f.maxFillingDensity, 'down')}</dd>
-          <dt>Room left as liquid now</dt>
-          <dd>${this._fig('room-left-volume', 'volume', f.roomLeftVolume, 'down')}</dd>
-          <dt>Room left as liquid at ${base60(d)}</dt>
-          <dd>${this._fig('room-left-volume-60f', 'volume', f.roomLeftVolumeAt60F, 'down')}</dd>
-          ${
-            f.volumetricMaxPercent !== null
-              ? html`<dt>Rule’s lowest volume limit now</dt>
-                  <dd>${formatPercent(f.volumetricMaxPercent, 'down')}</dd>`
-              : nothing
-          }
-        </dl>
-        <p class="note" data-testid="fill-binding" data-si=${f.binding}>
-          The limit that binds:
-          ${binding ? html`${binding.description} <span class="muted">(${binding.citation})</span>` : f.binding}
-        </p>
-        ${
-          f.limits.length > 1
-            ? html`<p class="note">
-                Also considered:
-                ${f.limits
-                  .filter((l) => l.id !== f.binding)
-                  .map(
-                    (l) =>
-                      html`<br />${l.description}: ${d.format('mass', l.maxMass, 'down')}
-                        <span class="muted">(${l.citation})</span>`,
-                  )}
-              </p>`
-            : nothing
-        }
-      </section>
+      ${fillLimitDetail(r, d)}
 
       <section aria-labelledby="h-heat">
         <h3 id="h-heat">Heating</h3>
@@ -518,11 +404,6 @@ export class CheckResults extends LitElement {
       </p>
     `;
   }
-}
-
-/** The trade's base temperature, 60 °F, in the user's unit ("60 °F" or "15.6 °C"). */
-function base60(d: DisplayUnits): string {
-  return d.format('temperature', T_60F_K).replace(/\.0 /, ' ');
 }
 
 function capital(s: string): string {

@@ -9,6 +9,12 @@
  * @fires readings-change - bubbles up from <check-form> (the shell keeps it as a draft).
  * @fires check-delete - bubbles up from <check-history>.
  *
+ * The answer comes first: <key-bar> (stop-at percent, room left, peak headroom) sticks to the
+ * top of the screen above the readings, so it stays in view while they are typed with the
+ * on-screen keyboard up. Readings carry the time they were taken (`Readings.takenAt`, stamped
+ * when a measured reading changes); old readings are marked with their age in the bar, and a
+ * reopened tank with blank readings offers its last check (<last-check>) for one-tap reuse.
+ *
  * The host carries `data-check-input`: the JSON of the `checkTank` input behind the figures
  * shown (absent while a reading is missing or invalid).
  *
@@ -16,25 +22,24 @@
  * `check-status`, `tank-heading`, plus those of <check-form>, <check-results>, <check-chart>
  * and <check-history>.
  */
-import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
-import { baseStyles } from './styles.js';
-import { DisplayUnits, formatPercent } from './display.js';
+import { LitElement, html, nothing, type PropertyValues, type TemplateResult } from 'lit';
 import type { TankCheckResult } from '../thermo/check/types.js';
+import { checkScreenStyles } from './check-screen-styles.js';
+import { baseStyles } from './styles.js';
+import { DisplayUnits } from './display.js';
 import './check-form.js';
+import './key-bar.js';
+import './last-check.js';
 import './check-results.js';
 import './check-chart.js';
 import './check-history.js';
 import type { ReadingsChange } from './check-form.js';
-import {
-  errorText,
-  minTemperatureFor,
-  runCheck,
-  summarize,
-  type CheckOutcome,
-} from './check-input.js';
+import { screenErrors, type ScreenErrors } from './check-errors.js';
+import { minTemperatureFor, runCheck, summarize, type CheckOutcome } from './check-input.js';
 import { heatingCurve, type HeatingCurve } from './chart-data.js';
 import { productFor, productLabel } from './products.js';
 import { summaryText } from './summary.js';
+import { shareText } from './share.js';
 import {
   DEFAULT_SETTINGS,
   emptyReadings,
@@ -45,6 +50,15 @@ import {
   type TankRecord,
 } from './types.js';
 import { blankTank } from './tank-form.js';
+import {
+  ageText,
+  hasMeasured,
+  isOld,
+  lastReadings,
+  measuredChanged,
+  whenText,
+  type LastReadings,
+} from './reopen.js';
 
 export interface CheckSaveDetail {
   check: CheckRecord;
@@ -53,22 +67,13 @@ export interface CheckSaveDetail {
 /** Wait after the last edit before the chart is redrawn, ms. */
 const CHART_DELAY_MS = 150;
 
-/** Engine field → reading name used by <check-form>. */
-const FIELD_OF: Record<string, keyof Readings | 'peakTemperature'> = {
-  liquidTemperature: 'liquidTemperature',
-  'contents.gaugePercent': 'gaugePercent',
-  'contents.netMass': 'netMass',
-  'contents.levelHeight': 'levelHeight',
-  gaugePressure: 'gaugePressure',
-  peakTemperature: 'peakTemperature',
-};
-
 export class CheckScreen extends LitElement {
   static override properties = {
     tank: { attribute: false },
     settings: { attribute: false },
     readings: { attribute: false },
     checks: { attribute: false },
+    last: { attribute: false },
     _readings: { state: true },
     _valid: { state: true },
     _outcome: { state: true },
@@ -85,6 +90,8 @@ export class CheckScreen extends LitElement {
   declare readings: Readings;
   /** Saved checks of this tank. */
   declare checks: CheckRecord[];
+  /** Old readings of this tank kept as a draft (offered for reuse with the saved checks), or null. */
+  declare last: LastReadings | null;
   declare _readings: Readings;
   declare _valid: boolean;
   declare _outcome: CheckOutcome | null;
@@ -101,6 +108,7 @@ export class CheckScreen extends LitElement {
     this.settings = DEFAULT_SETTINGS;
     this.readings = emptyReadings(DEFAULT_SETTINGS.sunAllowance);
     this.checks = [];
+    this.last = null;
     this._readings = this.readings;
     this._valid = true;
     this._outcome = null;
@@ -109,82 +117,7 @@ export class CheckScreen extends LitElement {
     this._shareText = '';
   }
 
-  static override styles = [
-    baseStyles,
-    css`
-      .head {
-        margin-bottom: 0.75rem;
-      }
-      .head h2 {
-        overflow-wrap: anywhere;
-      }
-      .plate {
-        color: var(--muted);
-        overflow-wrap: anywhere;
-      }
-      .layout {
-        display: grid;
-        gap: 1rem;
-      }
-      @media (min-width: 60rem) {
-        .layout {
-          grid-template-columns: minmax(18rem, 26rem) minmax(0, 1fr);
-          align-items: start;
-        }
-      }
-      .actions {
-        display: flex;
-        flex-wrap: wrap;
-        gap: 0.5rem;
-        margin: 0.5rem 0 1rem;
-      }
-      .actions button {
-        flex: 1 1 8rem;
-      }
-      .status {
-        min-height: 1.5em;
-        font-weight: 700;
-      }
-      textarea {
-        min-height: 10rem;
-      }
-      .keybar {
-        position: sticky;
-        bottom: 0;
-        z-index: 5;
-        margin: 0.75rem -0.75rem 0;
-        padding: 0.4rem 0.75rem;
-        background: var(--ink);
-        color: var(--paper);
-        font-weight: 700;
-        font-size: 0.9em;
-        line-height: 1.3;
-      }
-      .print-only {
-        display: none;
-      }
-      @media print {
-        .print-only {
-          display: block;
-        }
-      }
-      .keybar .small {
-        font-weight: 400;
-        font-size: 0.85em;
-      }
-      @media print {
-        .layout {
-          display: block;
-        }
-        check-form,
-        check-history,
-        .actions,
-        .keybar {
-          display: none;
-        }
-      }
-    `,
-  ];
+  static override styles = [baseStyles, checkScreenStyles];
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('settings')) this._display = DisplayUnits.fromSettings(this.settings);
@@ -204,10 +137,33 @@ export class CheckScreen extends LitElement {
     else delete this.dataset.checkInput;
   }
 
+  override connectedCallback(): void {
+    super.connectedCallback();
+    const bar = this.renderRoot?.querySelector('.keybar');
+    if (bar) this._barObserver.observe(bar);
+  }
+
+  protected override firstUpdated(): void {
+    const bar = this.renderRoot.querySelector('.keybar');
+    if (bar) this._barObserver.observe(bar);
+  }
+
   override disconnectedCallback(): void {
     super.disconnectedCallback();
     clearTimeout(this._chartTimer);
+    this._barObserver.disconnect();
+    document.documentElement.style.removeProperty('scroll-padding-top');
   }
+
+  /**
+   * The page scrolls a focused field (and anything else brought into view) below the sticky key
+   * bar, not under it: the bar's height becomes the page's scroll padding at the top.
+   */
+  private readonly _barObserver = new ResizeObserver(() => {
+    const bar = this.renderRoot.querySelector<HTMLElement>('.keybar');
+    if (bar)
+      document.documentElement.style.setProperty('scroll-padding-top', `${bar.offsetHeight + 8}px`);
+  });
 
   /** The current result (for tests and the shell). */
   get outcome(): CheckOutcome | null {
@@ -230,7 +186,10 @@ export class CheckScreen extends LitElement {
   }
 
   private _onReadings(e: CustomEvent<ReadingsChange>): void {
-    // The event goes on bubbling to the shell, which keeps the draft.
+    // The event goes on bubbling to the shell, which keeps the draft. A changed measured
+    // reading is stamped with the time it was typed (the readings of the draft carry it).
+    if (measuredChanged(this._readings, e.detail.readings))
+      e.detail.readings = { ...e.detail.readings, takenAt: new Date().toISOString() };
     this._readings = e.detail.readings;
     this._valid = e.detail.valid;
     this._status = '';
@@ -263,25 +222,11 @@ export class CheckScreen extends LitElement {
     const o = this._outcome;
     if (!o?.result) return;
     const text = summaryText(this.tank, this._readings, o.result, this._display);
-    const title = `Tank check — ${this.tank.name}`;
     this._shareText = '';
-    try {
-      if (typeof navigator.share === 'function') {
-        await navigator.share({ title, text });
-        this._status = 'Summary shared.';
-        return;
-      }
-    } catch (e) {
-      if (e instanceof DOMException && e.name === 'AbortError') return; // the user closed the share sheet
-    }
-    try {
-      await navigator.clipboard.writeText(text);
-      this._status = 'Summary copied. Paste it into a message or a report.';
-    } catch {
-      // No share sheet and no clipboard: show the text to copy by hand.
-      this._shareText = text;
-      this._status = 'Copy the summary below.';
-    }
+    const done = await shareText(`Tank check — ${this.tank.name}`, text);
+    if (done === null) return; // the user closed the share sheet
+    this._status = done.status;
+    this._shareText = done.byHand ? text : '';
   }
 
   private _print(): void {
@@ -289,10 +234,21 @@ export class CheckScreen extends LitElement {
   }
 
   private _clearReadings(): void {
-    const cleared = emptyReadings(this.settings.sunAllowance);
+    this._replaceReadings(emptyReadings(this.settings.sunAllowance));
+    this._status = 'Readings cleared.';
+  }
+
+  /** One tap on <last-check>: its readings come back with their own (old) time. */
+  private _reuse(e: CustomEvent<{ readings: Readings }>): void {
+    e.stopPropagation();
+    this._replaceReadings(e.detail.readings);
+    this._status = '';
+  }
+
+  private _replaceReadings(next: Readings): void {
+    const cleared = next;
     this._readings = cleared;
     this.readings = cleared;
-    this._status = 'Readings cleared.';
     this.dispatchEvent(
       new CustomEvent<ReadingsChange>('readings-change', {
         detail: { readings: cleared, valid: true },
@@ -308,47 +264,80 @@ export class CheckScreen extends LitElement {
     );
   }
 
+  /** Engine refusals as per-field messages and one line for the results. */
+  private _errors(): ScreenErrors {
+    return screenErrors(this._outcome, this._valid, this._display);
+  }
+
+  /** "2 Dec 2026, 14:05, 4 days old" when the readings in use are old, else empty. */
+  private _staleText(): string {
+    const at = this._readings.takenAt;
+    if (at === undefined || !hasMeasured(this._readings) || !isOld(at, new Date())) return '';
+    return `${whenText(at)}, ${ageText(at)} old`;
+  }
+
+  private _head(): TemplateResult {
+    const t = this.tank;
+    const d = this._display;
+    const np = t.nameplate;
+    return html`<div class="head">
+      <h2 data-testid="tank-heading">${t.name}${t.demo ? ' (demo, invented)' : ''}</h2>
+      <button class="quiet no-print" @click=${this._editTank}>Edit tank</button>
+      <p class="plate">
+        ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
+        ${d.format('volume', np.waterCapacity)} · MAWP
+        ${d.format('gaugePressure', np.designPressure)} ·
+        ${
+          np.reliefSetPressure === undefined
+            ? html`<span data-testid="relief-assumed"
+                >relief not entered (assumed at the design pressure)</span
+              >`
+            : html`relief ${d.format('gaugePressure', np.reliefSetPressure)}`
+        }
+      </p>
+      <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
+    </div>`;
+  }
+
+  /** The key bar: figures, or what is missing or wrong, and the standing caution in short. */
+  private _bar(result: TankCheckResult | null, error: string, stale: string): TemplateResult {
+    const o = this._outcome;
+    const message = error
+      ? 'No figures: fix the reading marked below.'
+      : o?.missing.length
+        ? `Enter ${o.missing.join(' and ')}: the stop-at percent and the room left show here.`
+        : 'No figures yet.';
+    return html`<div class="keybar">
+      <key-bar
+        .result=${result}
+        .display=${this._display}
+        .message=${message}
+        .stale=${stale}
+      ></key-bar>
+    </div>`;
+  }
+
   override render() {
     const t = this.tank;
     const d = this._display;
     const np = t.nameplate;
     const o = this._outcome;
-    const fieldErrors: Partial<Record<keyof Readings | 'peakTemperature', string>> = {};
-    let error = '';
-    if (!this._valid)
-      error = 'A reading above is not valid: fix the marked field to see the figures.';
-    else if (o?.error) {
-      const key = FIELD_OF[o.error.field];
-      // In the user's units when the engine gave the range as numbers.
-      const message = errorText(o.error, d);
-      if (key) fieldErrors[key] = `The check cannot use this value: ${message}.`;
-      error = o.error.field.startsWith('tank')
-        ? `The tank’s nameplate has a figure the check cannot use (${message}). Edit the tank to fix it.`
-        : key
-          ? 'The check cannot use a reading: see the message next to the field.'
-          : message;
-    }
+    const { fieldErrors, error } = this._errors();
     const result = this._valid && !o?.error ? (o?.result ?? null) : null;
-    const relief = np.reliefSetPressure ?? np.designPressure;
+    const stale = this._staleText();
+    const last = hasMeasured(this._readings) ? null : lastReadings(this.last, this.checks);
     return html`
       <div data-testid="check-screen">
-        <div class="head">
-          <h2 data-testid="tank-heading">${t.name}${t.demo ? ' (demo, invented)' : ''}</h2>
-          <p class="plate">
-            ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
-            ${d.format('volume', np.waterCapacity)} · MAWP
-            ${d.format('gaugePressure', np.designPressure)} ·
-            ${
-              np.reliefSetPressure === undefined
-                ? html`<span data-testid="relief-assumed"
-                    >relief not entered (assumed at the design pressure)</span
-                  >`
-                : html`relief ${d.format('gaugePressure', relief)}`
-            }
-          </p>
-          <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
-          <button class="quiet no-print" @click=${this._editTank}>Edit tank</button>
-        </div>
+        ${this._head()} ${this._bar(result, error, stale)}
+        <last-check .last=${last} .display=${d} @readings-reuse=${this._reuse}></last-check>
+        ${
+          stale
+            ? html`<p class="stale" data-testid="readings-age" role="note">
+                These readings were taken ${stale}. The figures are for then, not now: type today’s
+                readings.
+              </p>`
+            : nothing
+        }
         <div class="layout">
           <check-form
             .readings=${this.readings}
@@ -367,68 +356,50 @@ export class CheckScreen extends LitElement {
               .thermometerTolerance=${this.settings.thermometerTolerance}
               ?peak-estimated=${o?.peakEstimated ?? false}
             ></check-results>
-            <div class="actions">
-              <button
-                class="primary"
-                data-testid="check-save"
-                ?disabled=${!result}
-                @click=${this._save}
-              >
-                Save check
-              </button>
-              <button data-testid="check-share" ?disabled=${!result} @click=${this._share}>
-                Share summary
-              </button>
-              <button data-testid="check-print" ?disabled=${!result} @click=${this._print}>
-                Print
-              </button>
-              <button class="quiet" data-testid="readings-clear" @click=${this._clearReadings}>
-                Clear readings
-              </button>
-            </div>
-            <p class="status" role="status" data-testid="check-status">${this._status}</p>
-            ${
-              this._shareText
-                ? html`<label for="share-text">Summary</label
-                    ><textarea id="share-text" readonly .value=${this._shareText}></textarea>`
-                : nothing
-            }
-            ${
-              result && this._curve
-                ? html`<h3>Heating</h3>
-                    <check-chart
-                      .curve=${this._curve}
-                      .display=${d}
-                      .designPressure=${np.designPressure}
-                      .reliefPressure=${relief}
-                      .nowTemperature=${o?.input?.liquidTemperature ?? Number.NaN}
-                      .peakTemperature=${result.peak.temperature}
-                    ></check-chart>`
-                : nothing
-            }
+            ${this._actions(result)} ${this._chart(result)}
             <h3>History</h3>
             <check-history .checks=${this.checks} .display=${d}></check-history>
           </div>
         </div>
-        <div class="keybar" data-testid="key-bar" aria-hidden="true">
-          ${
-            result
-              ? html`Stop at ${formatPercent(result.fillLimit.stopAtGaugePercent, 'down')} · limit
-                ${d.format('mass', result.fillLimit.maxMass, 'down')} · peak
-                ${d.format('gaugePressure', result.peak.p, 'up')}
-                ${topLevel(result) ? html` · ${topLevel(result)!.toUpperCase()}` : nothing}`
-              : html`No figures yet`
-          }
-          <div class="small">Model figures: site procedures and the code come first.</div>
-        </div>
       </div>
     `;
   }
-}
 
-/** The most severe caution level other than the standing caution, if any. */
-function topLevel(r: TankCheckResult): string | null {
-  return r.cautions.find((c) => c.code !== 'standing')?.level ?? null;
+  private _actions(result: TankCheckResult | null): TemplateResult {
+    return html`<div class="actions">
+        <button class="primary" data-testid="check-save" ?disabled=${!result} @click=${this._save}>
+          Save check
+        </button>
+        <button data-testid="check-share" ?disabled=${!result} @click=${this._share}>
+          Share summary
+        </button>
+        <button data-testid="check-print" ?disabled=${!result} @click=${this._print}>Print</button>
+        <button class="quiet" data-testid="readings-clear" @click=${this._clearReadings}>
+          Clear readings
+        </button>
+      </div>
+      <p class="status" role="status" data-testid="check-status">${this._status}</p>
+      ${
+        this._shareText
+          ? html`<label for="share-text">Summary</label
+              ><textarea id="share-text" readonly .value=${this._shareText}></textarea>`
+          : nothing
+      }`;
+  }
+
+  private _chart(result: TankCheckResult | null): TemplateResult | typeof nothing {
+    const np = this.tank.nameplate;
+    if (!result || !this._curve) return nothing;
+    return html`<h3>Heating</h3>
+      <check-chart
+        .curve=${this._curve}
+        .display=${this._display}
+        .designPressure=${np.designPressure}
+        .reliefPressure=${np.reliefSetPressure ?? np.designPressure}
+        .nowTemperature=${this._outcome?.input?.liquidTemperature ?? Number.NaN}
+        .peakTemperature=${result.peak.temperature}
+      ></check-chart>`;
+  }
 }
 
 customElements.define('check-screen', CheckScreen);

@@ -139,7 +139,8 @@ export class NumberField extends LitElement {
         border-bottom-right-radius: 0;
       }
       .unit {
-        flex: none;
+        /* Never shrinks below its text: "US gal" was cut off on a 320 px phone. */
+        flex: 0 0 auto;
         display: flex;
         align-items: center;
         padding: 0 0.6rem;

@@ -10,6 +10,8 @@ import { cautionText } from './messages.js';
 import { productLabel } from './products.js';
 import type { CheckRecord, Readings, TankRecord } from './types.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
+import { keyFigures, keyWords } from './key-figures.js';
+import { whenText } from './reopen.js';
 
 function readingsLines(r: Readings, d: DisplayUnits): string[] {
   const contents =
@@ -39,20 +41,24 @@ export function summaryText(
   const f = result.fillLimit;
   const p = result.peak;
   const ranked = result.cautions.filter((c) => c.code !== 'standing');
+  // The key figures first, worded as on the screen's key bar.
+  const key = keyWords(keyFigures(result, d), d);
   const lines = [
     `Tank check — ${tank.name}${tank.site ? `, ${tank.site}` : ''}${tank.demo ? ' (invented demo tank)' : ''}`,
-    `${at.toLocaleString()}`,
+    `${at.toLocaleString()}${readings.takenAt ? ` · readings taken ${whenText(readings.takenAt)}` : ''}`,
     `Product: ${result.product.label} · W.C. ${d.format('volume', tank.nameplate.waterCapacity)} · MAWP ${d.format('gaugePressure', tank.nameplate.designPressure)}`,
+    '',
+    `${key.stop}.`,
+    `${key.room}.`,
+    `${key.peak}.`,
     '',
     ...readingsLines(readings, d),
     '',
     `Phase: ${phaseWords(result.phase, result.full)}`,
     `Contents: ${d.format('mass', result.contents.totalMass)} (filling density ${d.format('fraction', result.contents.fillingDensity)})`,
-    `Fill limit: ${d.format('mass', f.maxMass, 'down')}; stop at ${formatPercent(f.stopAtGaugePercent, 'down')} ${stopPlace(f)}`,
+    `Fill limit: ${d.format('mass', f.maxMass, 'down')}`,
+    `Where the stop is read: ${stopPlace(f)}`,
     ...(f.bindingNote ? [`Why: ${f.bindingNote}`] : []),
-    f.roomLeftMass < 0
-      ? `Over the limit by ${d.format('mass', -f.roomLeftMass, 'up')}`
-      : `Room left: ${d.format('mass', f.roomLeftMass, 'down')}`,
     `Peak day (${d.format('temperature', p.temperature)}): ${d.format('gaugePressure', p.p, 'up')}; headroom to relief ${headroom(p.headroomToRelief, d)}, to design ${headroom(p.headroomToDesign, d)}`,
     `Liquid-full at: ${result.liquidFullTemperature === null ? 'not reached' : d.format('temperature', result.liquidFullTemperature, 'down')}`,
     '',
@@ -82,7 +88,10 @@ export function savedSummaryText(
     `Tank check — ${tank?.name ?? 'deleted tank'} · ${new Date(c.at).toLocaleString()}`,
     `Product: ${c.productLabel || (tank ? productLabel(tank.productId) : '')}`,
     ...readingsLines(c.readings, d),
-    `Fill limit: ${d.format('mass', s.maxMass, 'down')}; stop at ${formatPercent(s.stopAtGaugePercent, 'down')} on the float gauge`,
+    `Fill limit: ${d.format('mass', s.maxMass, 'down')}; stop at or below ${formatPercent(s.stopAtGaugePercent, 'down')} on the float gauge (at the liquid temperature of then)`,
+    s.roomLeftMass < 0
+      ? `Over the limit by ${d.format('mass', -s.roomLeftMass, 'up')}`
+      : `Room left: ${d.format('mass', s.roomLeftMass, 'down')}`,
     `Peak day: ${d.format('gaugePressure', s.peakPressure, 'up')}`,
     ...s.cautions
       .filter((x) => x.code !== 'standing')

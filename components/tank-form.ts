@@ -15,7 +15,7 @@ import { baseStyles } from './styles.js';
 import { DisplayUnits } from './display.js';
 import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
-import { productChoices, type ProductGroup } from './products.js';
+import { productChoices, productLabel, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
 import { FILL_METHOD_WORDS } from './fill-words.js';
 import { TEXT_LIMITS } from './limits.js';
@@ -345,6 +345,14 @@ export class TankForm extends LitElement {
           >
             ${this._productOptions()}
           </select>
+          ${
+            // A closed select cuts a long name off on a narrow phone: the whole name, below it.
+            productLabel(d.productId).length > 20
+              ? html`<p class="hint" data-testid="tank-product-name">
+                  ${productLabel(d.productId)}
+                </p>`
+              : nothing
+          }
         </div>
 
         <fieldset>
@@ -397,8 +405,10 @@ export class TankForm extends LitElement {
           ></number-field>
           <div class="field">
             <label for="placement">Placement</label>
+            <p class="hint" id="placement-hint">A partly buried tank counts as aboveground.</p>
             <select
               id="placement"
+              aria-describedby="placement-hint"
               data-testid="tank-placement"
               @change=${(e: Event) => this._setNameplate({ placement: (e.target as HTMLSelectElement).value as Placement })}
             >
@@ -406,7 +416,7 @@ export class TankForm extends LitElement {
                 value="aboveground"
                 ?selected=${(np.placement ?? 'aboveground') === 'aboveground'}
               >
-                Aboveground (also partly buried)
+                Aboveground
               </option>
               <option value="underground" ?selected=${np.placement === 'underground'}>
                 Underground
@@ -415,8 +425,10 @@ export class TankForm extends LitElement {
           </div>
           <div class="field">
             <label for="class">Container class (picks the filling rule)</label>
+            <p class="hint" id="class-hint">Storage: a stationary ASME container.</p>
             <select
               id="class"
+              aria-describedby="class-hint"
               data-testid="tank-class"
               @change=${(e: Event) => this._setClass((e.target as HTMLSelectElement).value as ContainerClass)}
             >
@@ -549,7 +561,7 @@ const fillMethodOf = (np: TankInput): FillMethod =>
   np.fillMethod ?? (np.fixedDipTube ? 'fixed-gauge' : 'gauge');
 
 const CLASSES: [ContainerClass, string][] = [
-  ['storage', 'Storage container (stationary, ASME)'],
+  ['storage', 'Storage (ASME)'],
   ['cylinder', 'DOT cylinder'],
   ['cargo', 'Cargo tank'],
   ['portable', 'Portable tank'],

@@ -85,7 +85,10 @@ export class TankList extends LitElement {
         padding: 0 0.5rem 0.25rem;
       }
       .actions button {
-        flex: 1 1 0;
+        /* Each button at least as wide as its word: on a narrow phone a row wraps rather than
+           cutting "Duplicate" off. */
+        flex: 1 1 auto;
+        min-width: max-content;
         padding: 0.5rem 0.4rem;
         font-size: 0.9em;
       }

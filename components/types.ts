@@ -54,6 +54,12 @@ export interface Readings {
   peakAirTemperature: number | null;
   /** Sun allowance added to the peak air temperature, K (a rule of thumb; see settings). */
   sunAllowance: number | null;
+  /**
+   * ISO 8601 time the measured readings (temperature, contents, pressure) were last typed.
+   * Optional: records from before it existed have none (their draft's `updatedAt` or the
+   * check's `at` stands in; see components/reopen.ts).
+   */
+  takenAt?: string;
 }
 
 /** The key figures of a check as the engine gave them, kept with the check for history and CSV. */

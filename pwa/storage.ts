@@ -6,6 +6,8 @@
  * once shipped, is never edited — a change is a new step):
  *   v1  stores `tanks` (key `id`, index `site`), `checks` (key `id`, index `tankId`),
  *       `drafts` (key `tankId`), `settings` (out-of-line keys: `settings`, `meta`).
+ *   (v1) `Readings.takenAt`, an optional ISO time on a draft's or a check's readings, needs no
+ *       step: records without it stay valid (components/reopen.ts uses `updatedAt` / `at`).
  *
  * Every write that must be all-or-nothing (delete a tank with its checks, import a backup,
  * clear) runs in a single transaction, so a failure leaves the stored data as it was.

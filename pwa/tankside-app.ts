@@ -26,7 +26,6 @@ import type { BackupImportDetail } from '../components/backup-panel.js';
 import type { NoticeDetail } from '../components/app-notice.js';
 import {
   DEFAULT_SETTINGS,
-  emptyReadings,
   newId,
   type CheckRecord,
   type Readings,
@@ -36,6 +35,7 @@ import {
 import { DB_NAME, Store, requestPersistentStorage, type Meta } from './storage.js';
 import { parseRoute, href, type Route } from './router.js';
 import { buildDemo } from './demo.js';
+import { openingReadings, type LastReadings } from '../components/reopen.js';
 import { BACKUP_MAX_BYTES, makeBackup, parseBackup } from './backup.js';
 import { checksToCsv } from './csv.js';
 import { claimByCheck, savedByUser } from './demo-own.js';
@@ -91,7 +91,7 @@ export class TanksideApp extends LitElement {
   declare _tanks: TankRecord[];
   declare _checks: CheckRecord[];
   /** Readings to open the current check screen with (loaded per tank). */
-  declare _draft: { tankId: string; readings: Readings } | null;
+  declare _draft: { tankId: string; readings: Readings; last: LastReadings | null } | null;
   declare _undo: Undo | null;
   declare _confirm: Confirm | null;
   declare _update: (() => void) | null;
@@ -297,11 +297,10 @@ export class TanksideApp extends LitElement {
       const id = route.id;
       const [draft] = await Promise.all([this._store.getDraft(id), this._loadCheckScreen()]);
       // A later route change may have happened meanwhile; keep only the current one.
+      // Readings typed during this visit come back as they were; older ones are offered as the
+      // last check above blank readings (components/reopen.ts).
       if (this._route === route)
-        this._draft = {
-          tankId: id,
-          readings: draft?.readings ?? emptyReadings(this._settings.sunAllowance),
-        };
+        this._draft = { tankId: id, ...openingReadings(draft, this._settings.sunAllowance) };
     }
     await this.updateComplete;
     // A new screen starts at its top, and a screen reader starts reading there.
@@ -602,6 +601,7 @@ export class TanksideApp extends LitElement {
           .tank=${t}
           .settings=${this._settings}
           .readings=${this._draft.readings}
+          .last=${this._draft.last}
           .checks=${this._checks.filter((c) => c.tankId === t.id)}
           @readings-change=${this._onReadings}
           @check-save=${this._saveCheck}

@@ -10,3 +10,6 @@ export const P_ATM_Pa = 101_325;
 
 /** 60 °F in kelvin: the trade's base temperature for filling density and specific gravity. */
 export const T_60F_K = 288.705_555_555_555_6; // (60 − 32)·5/9 + 273.15
+
+/** 15 °C in kelvin: the metric base temperature for liquid volumes (ISO 5024 standard reference conditions). */
+export const T_15C_K = 288.15;

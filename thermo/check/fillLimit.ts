@@ -200,6 +200,7 @@ function buildFillLimit(k: FillLimitContext, limits: LimitEntry[]): FillLimitRes
     roomLeftMass,
     roomLeftVolume: floorTo(roomLeftMass / rhoLiquidNow, 1e-6),
     roomLeftVolumeAt60F: floorTo(roomLeftMass / rho60, 1e-6),
+    roomLeftVolumeAt15C: floorTo(roomLeftMass / k.model.basics.rho15, 1e-6),
     stopAtGaugePercent: stop,
     volumetricMaxPercent: byVolume.length
       ? Math.min(...byVolume.map((l) => l.gaugePercent ?? 100))

@@ -13,7 +13,7 @@
 import { closedTank, describeProduct, maxDensity, saturation } from '../api.js';
 import { ConvergenceError, InputError } from '../errors.js';
 import type { Product } from '../product.js';
-import { T_60F_K } from '../constants.js';
+import { T_15C_K, T_60F_K } from '../constants.js';
 import type { TankPhase } from './types.js';
 
 export interface Sat {
@@ -53,6 +53,8 @@ export interface ProductBasics {
   Tc: number;
   /** Saturated liquid density at 60 °F, kg/m³. */
   rho60: number;
+  /** Saturated liquid density at 15 °C (the metric base temperature), kg/m³. */
+  rho15: number;
   /** Critical density of the model, kg/m³ (blend: Kay's rule on molar volumes, as the core's closed tank uses). */
   rhoc: number;
 }
@@ -79,12 +81,15 @@ export function productBasics(product: Product): ProductBasics {
     }
     throw e;
   }
+  // 15 °C lies 0.56 K below 60 °F, so a product liquid at 60 °F is liquid there too.
+  const rho15 = saturation(product, T_15C_K).rhoL;
   const b: ProductBasics = {
     label: r.label,
     pure: r.components.length === 1,
     Tmin: r.Tmin,
     Tc,
     rho60,
+    rho15,
     rhoc: r.rhoc,
   };
   if (basicsCache.size > 200) basicsCache.clear();

@@ -243,6 +243,11 @@ export interface FillLimitResult {
   /** Room left as liquid volume at 60 °F, m³ (rounded down; negative when over). */
   roomLeftVolumeAt60F: number;
   /**
+   * Room left as liquid volume at 15 °C, the metric base temperature, m³ (rounded down; negative
+   * when over): room left mass ÷ the model's saturated liquid density at 288.15 K.
+   */
+  roomLeftVolumeAt15C: number;
+  /**
    * Float-gauge percent to stop at, at the current liquid temperature: the binding limit's
    * `gaugePercent` — the lowest of every weight limit, volume limit, gauge setting and
    * not-liquid-full limit that applies to this fill method — rounded down to 0.1 (100 when even a

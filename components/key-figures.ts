@@ -1,0 +1,72 @@
+/**
+ * The figures a driver acts on, picked once for the key bar, the results and the shared summary:
+ * the float-gauge percent to stop at or below, the room left as liquid at the base temperature
+ * (60 °F, or 15 °C when temperatures are shown in °C) and as mass, and the peak-day headroom.
+ * Rounded toward safety: the stop-at percent and the room left down, an excess up.
+ */
+import type { TankCheckResult } from '../thermo/check/types.js';
+import { T_15C_K, T_60F_K } from '../thermo/constants.js';
+import { formatPercent, type DisplayUnits } from './display.js';
+
+export interface KeyFigures {
+  /** Float-gauge percent to stop at or below, 0…100 (rounded down by the engine). */
+  stopAtPercent: number;
+  /** Room left as liquid at the base temperature, m³ (negative when over the limit). */
+  roomLeftVolume: number;
+  /** Room left as mass, kg (negative when over the limit). */
+  roomLeftMass: number;
+  /** The base temperature of `roomLeftVolume`, K. */
+  baseTemperature: number;
+  /** True when the tank holds more than the limit. */
+  over: boolean;
+  /** Peak-day pressure, Pa gauge; headroom to the relief setting, Pa (negative when exceeded). */
+  peakPressure: number;
+  headroomToRelief: number;
+}
+
+/** The base temperature of liquid volumes in the user's units: 15 °C in °C, else 60 °F. */
+export function baseTemperatureFor(d: DisplayUnits): number {
+  return d.unit('temperature') === 'C' ? T_15C_K : T_60F_K;
+}
+
+/** "60 °F" or "15 °C". */
+export function baseLabel(d: DisplayUnits): string {
+  return d.unit('temperature') === 'C' ? '15 °C' : '60 °F';
+}
+
+export function keyFigures(r: TankCheckResult, d: DisplayUnits): KeyFigures {
+  const f = r.fillLimit;
+  const metric = d.unit('temperature') === 'C';
+  return {
+    stopAtPercent: f.stopAtGaugePercent,
+    roomLeftVolume: metric ? f.roomLeftVolumeAt15C : f.roomLeftVolumeAt60F,
+    roomLeftMass: f.roomLeftMass,
+    baseTemperature: baseTemperatureFor(d),
+    over: f.roomLeftMass < 0,
+    peakPressure: r.peak.p,
+    headroomToRelief: r.peak.headroomToRelief,
+  };
+}
+
+/** The key figures in words, in the user's units (for the key bar's screen-reader text and the summary). */
+export interface KeyWords {
+  /** "Stop at or below 80.1 % on the float gauge (at today’s liquid temperature)" */
+  stop: string;
+  /** "Room left 112 US gal as liquid at 60 °F (470.5 lb)" or "Over the limit by 55 US gal as liquid at 60 °F (231 lb)" */
+  room: string;
+  /** "Peak day 205 psig; headroom to relief 45 psi" or "…; relief setting exceeded by 12 psi" */
+  peak: string;
+}
+
+export function keyWords(k: KeyFigures, d: DisplayUnits): KeyWords {
+  const base = baseLabel(d);
+  const stop = `Stop at or below ${formatPercent(k.stopAtPercent, 'down')} on the float gauge (the most the rule allows at today’s liquid temperature)`;
+  const room = k.over
+    ? `Over the limit by ${d.format('volume', -k.roomLeftVolume, 'up')} as liquid at ${base} (${d.format('mass', -k.roomLeftMass, 'up')})`
+    : `Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at ${base} (${d.format('mass', k.roomLeftMass, 'down')})`;
+  const peak =
+    k.headroomToRelief < 0
+      ? `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; relief setting exceeded by ${d.format('pressureDifference', -k.headroomToRelief, 'up')}`
+      : `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; headroom to relief ${d.format('pressureDifference', k.headroomToRelief, 'down')}`;
+  return { stop, room, peak };
+}
