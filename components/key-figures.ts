@@ -19,6 +19,8 @@ export interface KeyFigures {
   baseTemperature: number;
   /** True when the tank holds more than the limit. */
   over: boolean;
+  /** True when a fixed maximum-level gauge's setting is the stop (read there, not on the float gauge). */
+  fixedGauge: boolean;
   /** Peak-day pressure, Pa gauge; headroom to the relief setting, Pa (negative when exceeded). */
   peakPressure: number;
   headroomToRelief: number;
@@ -43,6 +45,7 @@ export function keyFigures(r: TankCheckResult, d: DisplayUnits): KeyFigures {
     roomLeftMass: f.roomLeftMass,
     baseTemperature: baseTemperatureFor(d),
     over: f.roomLeftMass < 0,
+    fixedGauge: f.stopAtFixedGauge,
     peakPressure: r.peak.p,
     headroomToRelief: r.peak.headroomToRelief,
   };
@@ -60,7 +63,9 @@ export interface KeyWords {
 
 export function keyWords(k: KeyFigures, d: DisplayUnits): KeyWords {
   const base = baseLabel(d);
-  const stop = `Stop at or below ${formatPercent(k.stopAtPercent, 'down')} on the float gauge (the most the rule allows at today’s liquid temperature)`;
+  const stop = k.fixedGauge
+    ? `Stop when liquid first appears at the fixed maximum-level gauge (set at ${formatPercent(k.stopAtPercent, 'down')})`
+    : `Stop at or below ${formatPercent(k.stopAtPercent, 'down')} on the float gauge (the most the rule allows at today’s liquid temperature)`;
   const room = k.over
     ? `Over the limit by ${d.format('volume', -k.roomLeftVolume, 'up')} as liquid at ${base} (${d.format('mass', -k.roomLeftMass, 'up')})`
     : `Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at ${base} (${d.format('mass', k.roomLeftMass, 'down')})`;

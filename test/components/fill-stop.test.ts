@@ -47,7 +47,7 @@ describe('fill stop: the binding limit', () => {
 
   it('the shared summary gives the same binding stop and the reason', () => {
     const text = summaryText(tank, readings, result, new DisplayUnits(DEFAULT_SETTINGS.units));
-    expect(text).to.contain('stop at 87.5 %');
+    expect(text).to.contain('Stop at or below 87.5 % on the float gauge');
     expect(text).to.contain('Why: The rule’s volume limit at this temperature binds');
   });
 
