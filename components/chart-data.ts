@@ -22,8 +22,18 @@ export interface HeatingCurve {
   Tmax: number;
 }
 
+/** What the chart worker is asked: the product, the check's result and the liquid temperature (K). */
+export interface CurveRequest {
+  product: Product;
+  result: Pick<TankCheckResult, 'peak' | 'liquidFullTemperature' | 'contents'>;
+  Tnow: number;
+}
+
 /** Temperature span: a little below now, to past the peak and, when near, past liquid-full. K. */
-export function curveSpan(result: TankCheckResult, Tnow: number): { Tmin: number; Tmax: number } {
+export function curveSpan(
+  result: CurveRequest['result'],
+  Tnow: number,
+): { Tmin: number; Tmax: number } {
   const Tpeak = result.peak.temperature;
   const lo = Math.min(Tnow, Tpeak) - 5;
   let hi = Math.max(Tnow, Tpeak) + 15;
@@ -38,7 +48,7 @@ export function curveSpan(result: TankCheckResult, Tnow: number): { Tmin: number
  */
 export function heatingCurve(
   product: Product,
-  result: TankCheckResult,
+  result: CurveRequest['result'],
   Tnow: number,
   n = 36,
 ): HeatingCurve {

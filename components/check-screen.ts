@@ -40,7 +40,8 @@ import type { FillRecord } from './fill-types.js';
 import type { ReadingsChange } from './check-form.js';
 import { screenErrors, type ScreenErrors } from './check-errors.js';
 import { minTemperatureFor, runCheck, summarize, type CheckOutcome } from './check-input.js';
-import { heatingCurve, type HeatingCurve } from './chart-data.js';
+import type { HeatingCurve } from './chart-data.js';
+import { curveFor } from './chart-client.js';
 import { productFor, productLabel } from './products.js';
 import { summaryText } from './summary.js';
 import { shareText } from './share.js';
@@ -107,6 +108,7 @@ export class CheckScreen extends LitElement {
   declare _shareText: string;
 
   private _chartTimer: ReturnType<typeof setTimeout> | undefined;
+  private _chartTicket = 0;
   private _display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
 
   constructor() {
@@ -181,6 +183,7 @@ export class CheckScreen extends LitElement {
   private _recompute(): void {
     this._outcome = runCheck(this.tank, this._readings, this.settings);
     clearTimeout(this._chartTimer);
+    const ticket = ++this._chartTicket;
     const outcome = this._outcome;
     if (!outcome.result || !outcome.input) {
       this._curve = null;
@@ -189,7 +192,12 @@ export class CheckScreen extends LitElement {
     this._chartTimer = setTimeout(() => {
       const product = productFor(this.tank.productId);
       if (product === undefined || !outcome.result || !outcome.input) return;
-      this._curve = heatingCurve(product, outcome.result, outcome.input.liquidTemperature);
+      const { peak, liquidFullTemperature, contents } = outcome.result;
+      const req = { product, result: { peak, liquidFullTemperature, contents } };
+      // Off the main thread (chart-client.ts); an answer for an older edit is dropped.
+      void curveFor({ ...req, Tnow: outcome.input.liquidTemperature }).then((curve) => {
+        if (ticket === this._chartTicket) this._curve = curve;
+      });
     }, CHART_DELAY_MS);
   }
 

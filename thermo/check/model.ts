@@ -103,12 +103,42 @@ const topCache = new Map<string, number>();
 /** Highest temperature the check looks at, K (as search.ts T_SEARCH_MAX). */
 const T_TOP_K = 400;
 
+/**
+ * Per product (by its JSON): saturation states by temperature and the two-phase ends by
+ * density, shared by every check of that product. A live form checks the same product again
+ * at each keystroke, and the searches (the two-phase end's bisection over a fixed range above
+ * all) ask at the same temperatures each time. Exact values, not interpolations.
+ */
+interface Shared {
+  sats: Map<number, Sat | null>;
+  ends: Map<number, { T: number; p: number } | null>;
+}
+const shared = new Map<string, Shared>();
+const SHARED_SATS = 4000;
+
+function sharedFor(product: Product): Shared {
+  const key = JSON.stringify(product);
+  let s = shared.get(key);
+  if (!s) {
+    if (shared.size > 20) shared.clear();
+    s = { sats: new Map(), ends: new Map() };
+    shared.set(key, s);
+  }
+  if (s.sats.size > SHARED_SATS) s.sats.clear();
+  if (s.ends.size > 200) s.ends.clear();
+  return s;
+}
+
 export class ProductModel {
   readonly basics: ProductBasics;
-  private readonly sats = new Map<number, Sat | null>();
+  private readonly sats: Map<number, Sat | null>;
+  private readonly ends: Map<number, { T: number; p: number } | null>;
 
   constructor(readonly product: Product) {
     this.basics = productBasics(product);
+    const s = sharedFor(product);
+    this.sats = s.sats;
+    this.ends = s.ends;
   }
 
   /**
@@ -234,8 +264,6 @@ export class ProductModel {
     };
   }
 
-  private readonly ends = new Map<number, { T: number; p: number } | null>();
-
   /** Blend: two-phase under the bubble-point approximation at T (rhoV < rho < rhoL there). */
   private twoPhaseAt(T: number, rho: number): boolean {
     const s = this.sat(T);
@@ -264,7 +292,6 @@ export class ProductModel {
       else hi = mid;
     }
     const end = { T: lo, p: this.sat(lo)!.p };
-    if (this.ends.size > 50) this.ends.clear();
     this.ends.set(rho, end);
     return end;
   }
