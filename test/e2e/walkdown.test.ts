@@ -142,9 +142,17 @@ describe('site walkdown', () => {
     });
     for (const { row, t, e } of want) {
       expect(row.level, t.name).toBe(e.top);
-      expect(Number(row.relief), `${t.name}: headroom to relief`).toBe(e.res.peak.headroomToRelief);
+      // Rounded down to 100 Pa by the engine; a last-digit difference between warm starts can move
+      // it across one rounding step, never more.
+      expect(
+        Math.abs(Number(row.relief) - e.res.peak.headroomToRelief),
+        `${t.name}: headroom to relief`,
+      ).toBeLessThanOrEqual(100);
       if (e.full === null) expect(row.full).toBe('');
-      else expect(Number(row.full)).toBeCloseTo(e.full, 9);
+      // Identity within the solvers' convergence: the board's worker and this process reach the
+      // same state from different warm starts (thermo/solvers/saturationPoint.ts), so the last
+      // digits differ (seen 2.4e-7 K); 1e-4 K is far below anything shown (0.1 K).
+      else expect(Number(row.full)).toBeCloseTo(e.full, 4);
     }
     // The stated rule, applied here: level, then the smaller margin, then the name.
     const ranked = [...want].sort(

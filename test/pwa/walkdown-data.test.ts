@@ -86,6 +86,7 @@ describe('walkdowns in the backup', () => {
       settings: null,
       sites: [FORECAST],
       walkdowns: [walk('w1')],
+      fills: [],
     };
     const r = parseBackup(JSON.stringify(makeBackup(data)));
     expect(r.ok).to.equal(true);
