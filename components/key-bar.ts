@@ -114,9 +114,11 @@ export class KeyBar extends LitElement {
     const relief =
       k.headroomToRelief < 0
         ? html`<strong
-            >${d.format('pressureDifference', -k.headroomToRelief, 'up')} over relief</strong
+            >${d.format('pressureDifference', -k.headroomToRelief, 'up')} over
+            relief${k.reliefAssumed ? ' (assumed)' : ''}</strong
           >`
-        : html`${d.format('pressureDifference', k.headroomToRelief, 'down')} to relief`;
+        : html`${d.format('pressureDifference', k.headroomToRelief, 'down')} to
+          relief${k.reliefAssumed ? ' (assumed)' : ''}`;
     const round = k.over ? 'up' : 'down';
     return html`
       <div class="figs" role="group" aria-label="Key figures">

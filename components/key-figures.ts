@@ -21,6 +21,8 @@ export interface KeyFigures {
   over: boolean;
   /** True when a fixed maximum-level gauge's setting is the stop (read there, not on the float gauge). */
   fixedGauge: boolean;
+  /** True when the relief setting was not entered and the design pressure stands in for it. */
+  reliefAssumed: boolean;
   /** Peak-day pressure, Pa gauge; headroom to the relief setting, Pa (negative when exceeded). */
   peakPressure: number;
   headroomToRelief: number;
@@ -46,6 +48,7 @@ export function keyFigures(r: TankCheckResult, d: DisplayUnits): KeyFigures {
     baseTemperature: baseTemperatureFor(d),
     over: f.roomLeftMass < 0,
     fixedGauge: f.stopAtFixedGauge,
+    reliefAssumed: r.cautions.some((c) => c.code === 'relief-assumed'),
     peakPressure: r.peak.p,
     headroomToRelief: r.peak.headroomToRelief,
   };
@@ -71,7 +74,7 @@ export function keyWords(k: KeyFigures, d: DisplayUnits): KeyWords {
     : `Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at ${base} (${d.format('mass', k.roomLeftMass, 'down')})`;
   const peak =
     k.headroomToRelief < 0
-      ? `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; relief setting exceeded by ${d.format('pressureDifference', -k.headroomToRelief, 'up')}`
-      : `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; headroom to relief ${d.format('pressureDifference', k.headroomToRelief, 'down')}`;
+      ? `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; relief setting${k.reliefAssumed ? ' (assumed)' : ''} exceeded by ${d.format('pressureDifference', -k.headroomToRelief, 'up')}`
+      : `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; headroom to relief${k.reliefAssumed ? ' (assumed)' : ''} ${d.format('pressureDifference', k.headroomToRelief, 'down')}`;
   return { stop, room, peak };
 }

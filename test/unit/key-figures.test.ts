@@ -78,3 +78,16 @@ describe('key figures', () => {
     }
   });
 });
+
+describe('an assumed relief setting', () => {
+  it('is said to be assumed in the key words, and not when the nameplate gives it', () => {
+    // No relief setting entered: the check assumes the design pressure (caution `relief-assumed`).
+    const assumed = keyWords(keyFigures(checkTank(input(40)), US), US);
+    expect(assumed.peak).toMatch(/headroom to relief \(assumed\) /);
+    const entered = input(40);
+    entered.tank.reliefSetPressure = toSI('gaugePressure', 250, 'psig');
+    const read = keyWords(keyFigures(checkTank(entered), US), US);
+    expect(read.peak).not.toMatch(/assumed/);
+    expect(read.peak).toMatch(/headroom to relief \d/);
+  });
+});
