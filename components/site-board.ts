@@ -37,6 +37,7 @@ import {
 } from './walkdown-words.js';
 import { walkResult } from './walkdown-ops.js';
 import { formatDate } from './tank-list.js';
+import type { FillFlag } from './fill-flag.js';
 
 export class SiteBoard extends LitElement {
   static override properties = {
@@ -48,6 +49,7 @@ export class SiteBoard extends LitElement {
     tanks: { attribute: false },
     history: { attribute: false },
     staleDays: { attribute: false },
+    fillFlags: { attribute: false },
     _ownOpen: { state: true },
   };
 
@@ -59,6 +61,8 @@ export class SiteBoard extends LitElement {
   declare computing: { done: number; total: number } | null;
   declare display: DisplayUnits;
   declare tanks: TankRecord[];
+  /** Tanks whose last fill found the float gauge reading low (until a later check clears it). */
+  declare fillFlags: Map<string, FillFlag>;
   /** The site's walkdowns, newest first (an unfinished one can be resumed). */
   declare history: WalkdownRecord[];
   declare staleDays: number;
@@ -75,6 +79,7 @@ export class SiteBoard extends LitElement {
     this.tanks = [];
     this.history = [];
     this.staleDays = 7;
+    this.fillFlags = new Map();
     this._ownOpen = false;
   }
 
@@ -278,6 +283,18 @@ export class SiteBoard extends LitElement {
                   : nothing
               }`
             : html`<span class="line">${row.reason}: not projected</span>`
+        }
+        ${
+          this.fillFlags?.get(row.tank.id)
+            ? html`<span class="line" data-testid="walkdown-fill-flag"
+                ><strong>▲ Gauge read low at the last fill</strong> (${formatDate(
+                  this.fillFlags.get(row.tank.id)!.at,
+                )}):
+                the tank may hold more than its float gauge shows. Check the contents another way
+                (by weight, or with the fixed maximum-level gauge) as site procedures require before
+                going by that gauge.</span
+              >`
+            : nothing
         }
         <span class="line muted"
           >Readings ${row.ageMs === null ? 'none' : `${ageText(row.ageMs)} old`} (limit

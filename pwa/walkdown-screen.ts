@@ -28,6 +28,7 @@ import { latestReadingsFor, siteOf, staleDays } from './walkdown-data.js';
 import { walkdownToCsv } from './walkdown-csv.js';
 import { href } from './router.js';
 import { BoardClient } from './board-client.js';
+import { lastFillFlag, type FillFlag } from '../components/fill-flag.js';
 
 export class SiteScreen extends LitElement {
   static override properties = {
@@ -44,6 +45,7 @@ export class SiteScreen extends LitElement {
     _history: { state: true },
     _walk: { state: true },
     _lastWho: { state: true },
+    _fillFlags: { state: true },
   };
 
   declare store: Store | null;
@@ -59,6 +61,8 @@ export class SiteScreen extends LitElement {
   declare _history: WalkdownRecord[];
   declare _walk: WalkdownRecord | null | undefined;
   declare _lastWho: string;
+  /** Tanks whose last fill found the gauge reading low, until a later check (components/fill-flag.ts). */
+  declare _fillFlags: Map<string, FillFlag>;
 
   private _latest = new Map<string, LatestReadings | null>();
   private readonly _board = new BoardClient();
@@ -78,6 +82,7 @@ export class SiteScreen extends LitElement {
     this._history = [];
     this._walk = undefined;
     this._lastWho = '';
+    this._fillFlags = new Map();
   }
 
   static override styles = [baseStyles];
@@ -111,7 +116,23 @@ export class SiteScreen extends LitElement {
       enteredAt: '',
     };
     this._latest = await latestReadingsFor(store, this._siteTanks(), this.checks, all);
+    this._fillFlags = await this._flags(store);
     void this._compute();
+  }
+
+  /** The gauge-low flag of each tank of the site whose last fill read low. */
+  private async _flags(store: Store): Promise<Map<string, FillFlag>> {
+    const flags = new Map<string, FillFlag>();
+    for (const t of this._siteTanks()) {
+      const fills = await store.listFills(t.id);
+      if (!fills.length) continue;
+      const flag = lastFillFlag(
+        fills,
+        this.checks.filter((c) => c.tankId === t.id),
+      );
+      if (flag) flags.set(t.id, flag);
+    }
+    return flags;
   }
 
   /** Projects every tank off the input path; the board fills in batch by batch. */
@@ -230,6 +251,7 @@ export class SiteScreen extends LitElement {
         .tanks=${this._siteTanks()}
         .history=${this._history}
         .staleDays=${staleDays(this.settings)}
+        .fillFlags=${this._fillFlags}
         @forecast-change=${this._forecastChange}
         @board-open=${this._open}
         @walk-start=${this._start}
