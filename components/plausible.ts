@@ -26,7 +26,7 @@ export const PLAUSIBLE_WATER_CAPACITY: Record<ContainerClass, Plausible> = {
   // Common practice: the smallest stationary ASME LP-gas containers hold about 120 US gal w.c.;
   // pressurised storage spheres reach a few thousand m³ (about 1 000 000 US gal).
   storage: { min: gal(100), max: gal(1_000_000), what: 'for a storage tank' },
-  // Common practice: the smallest refillable cylinders (lecture bottles) hold about 0.4 L;
+  // Common practice: the smallest refillable cylinders (small laboratory cylinders) hold about 0.4 L;
   // DOT-4B/4BA/4BW cylinders are limited to 1 000 lb water capacity (49 CFR 178.50–178.61,
   // from memory): 1 000 lb ÷ 8.32828 lb/US gal = 120 US gal.
   cylinder: {
