@@ -8,6 +8,7 @@ import type { DisplayUnits } from './display.js';
 import type { Caution } from '../thermo/check/types.js';
 import type { FillFinding, FillParam } from '../thermo/fill/types.js';
 import { formatPercent } from './display.js';
+import { CAUSE_TEXT } from '../thermo/check/caution-text.js';
 import type {
   CautionCode,
   CauseCode,
@@ -20,34 +21,11 @@ type Entry = (f: Fmt, p: MessageParams) => string;
 
 const word = (p: MessageParams, k: string) => (typeof p[k] === 'string' ? (p[k] as string) : '');
 
-/** Diagnosis causes in the user's words (no figures, so no units). */
-export const CAUSE_WORDS: Record<CauseCode, string> = {
-  'liquid-full-high':
-    'The tank is liquid-full: with no vapour space the pressure climbs steeply with temperature.',
-  'non-condensable':
-    'Air or another gas that does not condense in the vapour space (for example a new or opened tank that was not purged).',
-  'lighter-components':
-    'Lighter components than the product entered (for example ethane or propane in butane).',
-  'different-product': 'A different product from the one entered.',
-  'liquid-warmer':
-    'The liquid is warmer than the thermometer shows (sun on the shell, or a thermometer reading the air).',
-  'gauge-error-high': 'Gauge error: a zero offset, a damaged gauge or one of the wrong range.',
-  'liquid-full-uncertain':
-    'The tank is liquid-full: its pressure then depends steeply on the exact fill and temperature, so the expected figure is uncertain.',
-  'no-liquid-left':
-    'There may be no liquid left: a tank holding vapour only shows less than the vapour pressure.',
-  'liquid-colder':
-    'The liquid is colder than the thermometer shows (a recent withdrawal or venting chills the liquid).',
-  'heavier-components':
-    'Heavier components than the product entered (for example butane in propane).',
-  'vapour-draw':
-    'Vapour being drawn off faster than the liquid boils, pulling the pressure down for a while.',
-  'gauge-error-low': 'Gauge error: a zero offset, a blocked or damaged gauge.',
-  'composition-shift-high':
-    'This blend glides between its bubble and dew points: contents richer in its volatile components than the nominal blend (recovered vapour, or product taken from another cylinder’s vapour side) read higher.',
-  'composition-shift-low':
-    'This blend glides between its bubble and dew points: a vapour-only withdrawal or a vapour leak takes more of its volatile components and leaves a liquid whose pressure is lower than the nominal blend’s.',
-};
+/**
+ * Diagnosis causes in the user's words: they carry no figures and no units, so the engine's own
+ * wording serves the app as it is (one text per cause, thermo/check/caution-text.ts).
+ */
+export const CAUSE_WORDS: Readonly<Record<CauseCode, string>> = CAUSE_TEXT;
 
 const CONTAINER_WORDS: Record<string, string> = {
   storage: 'storage',
