@@ -100,6 +100,10 @@ async function enterFill(page: Page, input: TankCheckInput, c: Case) {
 
 async function save(page: Page, count: number): Promise<void> {
   await byTestId(page, 'fill-save').click();
+  // Saving returns to the tank's check (its history lists the fills): wait for that state, not
+  // only for the count, which the fill screen's own list can reach first.
+  await byTestId(page, 'check-screen').waitFor();
+  await expect.poll(() => page.evaluate(() => location.hash.endsWith('/fill'))).toBe(false);
   await expect.poll(() => byTestId(page, 'fill-record-item').count()).toBe(count);
 }
 
