@@ -5,6 +5,7 @@
  */
 import { closedTank, type Product } from '../thermo/index.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../thermo/limits.js';
 
 export interface CurvePoint {
   /** K */
@@ -39,7 +40,7 @@ export function curveSpan(
   let hi = Math.max(Tnow, Tpeak) + 15;
   const Tfull = result.liquidFullTemperature;
   if (Tfull !== null && Tfull > hi && Tfull < hi + 20) hi = Tfull + 5;
-  return { Tmin: Math.max(150, lo), Tmax: Math.min(400, hi) };
+  return { Tmin: Math.max(T_CHECK_MIN_K, lo), Tmax: Math.min(T_CHECK_MAX_K, hi) };
 }
 
 /**

@@ -23,6 +23,7 @@ import { checkResultsStyles } from './check-results-styles.js';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
+import { T_CHECK_MAX_K } from '../thermo/limits.js';
 import type { Caution, FullKind, TankCheckResult, TankPhase } from '../thermo/check/types.js';
 import { stopPlace } from './fill-words.js';
 import { causeText, cautionText } from './messages.js';
@@ -48,8 +49,6 @@ export function phaseWords(phase: TankPhase, full: FullKind | null | undefined):
     : PHASE_WORDS[phase];
 }
 
-/** The engine looks for the relief temperature up to this temperature, K (see `reliefTemperature`). */
-const RELIEF_SEARCH_MAX_K = 400;
 
 /** Delay before the polite summary is updated, ms: long enough that typing is not read out. */
 const ANNOUNCE_DELAY_MS = 1200;
@@ -331,7 +330,7 @@ export class CheckResults extends LitElement {
                 : this._tempWithTolerance(
                     'relief-temperature',
                     r.reliefTemperature,
-                    `Not below ${d.format('temperature', RELIEF_SEARCH_MAX_K)}`,
+                    `Not below ${d.format('temperature', T_CHECK_MAX_K)}`,
                   )
             }
           </dd>

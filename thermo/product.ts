@@ -74,7 +74,7 @@ export interface ResolvedProduct {
 }
 
 /** Highest temperature accepted by the API, K. The models are fitted well below it. */
-export const T_MAX_K = 600;
+export { T_MODEL_MAX_K as T_MAX_K } from './limits.js';
 
 const KNOWN_IDS = () => [...FLUIDS, ...REFRIGERANT_BLENDS].map((f) => f.id).join(', ');
 

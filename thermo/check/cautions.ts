@@ -5,6 +5,7 @@
  * caution-text.ts; an app writes each code in its user's words and units. Messages say what the
  * figures show and which limit applies; they never give permission to fill.
  */
+import { checkMinTemperature } from '../limits.js';
 import { CO2_TRIPLE_POINT_PA, cautionMessage } from './caution-text.js';
 import { num, type CautionCode, type MessageParams } from './codes.js';
 import type { ProductModel, State } from './model.js';
@@ -110,7 +111,7 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
     add('warning', 'below-mdmt', { temperature: T(c.T), mdmt: T(c.mdmt) });
     return;
   }
-  const Tlo = Math.max(k.model.basics.Tmin + 0.01, 150);
+  const Tlo = checkMinTemperature(k.model.basics.Tmin);
   const Tb = saturationTemperature(k.model, baro, [c.T, c.Tpeak], Tlo);
   if (Tb !== null && Tb < c.mdmt)
     add('caution', 'autorefrigeration-below-mdmt', { boiling: T(Tb), mdmt: T(c.mdmt) });

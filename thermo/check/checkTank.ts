@@ -9,6 +9,7 @@
  */
 import { ConvergenceError, InputError } from '../errors.js';
 import { T_60F_K } from '../constants.js';
+import { T_CHECK_MAX_K, checkMinTemperature } from '../limits.js';
 import { fullKind, pressureAllowance } from './full.js';
 import { isLpGas } from '../rules/gases.js';
 import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
@@ -23,7 +24,7 @@ import {
 } from './search.js';
 import { STANDING_CAUTION } from './standing.js';
 import type { PeakResult, TankCheckInput, TankCheckResult } from './types.js';
-import { T_CHECK_MAX_K, validateInput, type CleanInput } from './validate.js';
+import { validateInput, type CleanInput } from './validate.js';
 
 /** x rounded down / up to a multiple of step (steps are powers of ten; dividing by 1/step keeps 0.01 steps exact). */
 const floorTo = (x: number, step: number) =>
@@ -69,8 +70,8 @@ function check(input: TankCheckInput): TankCheckResult {
   const c = validateInput(input);
   const model = new ProductModel(input.product);
   const b = model.basics;
-  const Tlo = Math.max(b.Tmin + 0.01, 150);
-  const tRange = `from ${Tlo.toFixed(2)} K (this product's lower limit) to 400 K`;
+  const Tlo = checkMinTemperature(b.Tmin);
+  const tRange = `from ${Tlo.toFixed(2)} K (this product's lower limit) to ${T_CHECK_MAX_K} K`;
   const tLimits = {
     min: Tlo,
     max: T_CHECK_MAX_K,

@@ -12,10 +12,12 @@
  * All stop at 0.005 K or better, far inside the ±1 °F the results are shown to.
  */
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
-import { bracketRoot, type ProductModel, type State } from './model.js';
+import { bracketedRoot } from '../solvers/root.js';
+import { T_CHECK_MAX_K } from '../limits.js';
+import type { ProductModel, State } from './model.js';
 
 /** Highest temperature searched, K. */
-export const T_SEARCH_MAX = 400;
+export const T_SEARCH_MAX = T_CHECK_MAX_K;
 
 /** Upper end of the saturation curve searched, K (see ProductModel.satTop). */
 export function satTop(model: ProductModel): number {
@@ -52,7 +54,12 @@ function solveIncreasing(
         const v = f(x);
         return v === null ? Math.abs(above![1]) : v;
       };
-      return bracketRoot(fx, below[0], below[1], above[0], above[1], tol);
+      return bracketedRoot(fx, below[0], above[0], {
+        name: 'check temperature search',
+        fa: below[1],
+        fb: above[1],
+        xTol: tol,
+      }).x;
     }
     if (below && above && above[0] - below[0] < tol) return below[0];
     let x: number;

@@ -4,6 +4,8 @@
  * possible-but-odd values pass and become cautions later.
  */
 import { InputError } from '../errors.js';
+import { P_ATM_Pa } from '../constants.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../limits.js';
 import type { Quantity } from '../units.js';
 import { tankHeight, validateShape } from '../tank/geometry.js';
 import { barometricPressureAtElevation } from '../units.js';
@@ -55,9 +57,6 @@ function optBool(field: string, x: unknown): boolean {
   return x;
 }
 
-/** Temperatures the check accepts, K (the product's own lower bound is checked separately). */
-export const T_CHECK_MIN_K = 150;
-export const T_CHECK_MAX_K = 400;
 
 export function validateInput(input: TankCheckInput): CleanInput {
   if (!input || typeof input !== 'object')
@@ -156,7 +155,7 @@ export function validateInput(input: TankCheckInput): CleanInput {
   } else if (input.elevation !== undefined) {
     const z = num('elevation', input.elevation, -500, 11_000, 'from −500 to 11 000 m', 'length');
     baro = barometricPressureAtElevation(z);
-  } else baro = 101_325;
+  } else baro = P_ATM_Pa;
 
   const gaugePressure =
     input.gaugePressure === undefined

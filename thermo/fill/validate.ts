@@ -7,7 +7,8 @@ import { InputError } from '../errors.js';
 import type { Quantity } from '../units.js';
 import { describeProduct } from '../api.js';
 import type { TankCheckInput } from '../check/types.js';
-import { T_CHECK_MAX_K, T_CHECK_MIN_K, validateInput } from '../check/validate.js';
+import { validateInput } from '../check/validate.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../limits.js';
 import { FILL_ACCURACY_DEFAULTS, FILL_ACCURACY_LIMITS } from './defaults.js';
 import type { FillInput, FillStart, MeterBasis } from './types.js';
 

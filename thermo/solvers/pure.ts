@@ -8,6 +8,7 @@ import { compressibilityRoots, dPdv, lnPhiPure, logTerm } from '../eos/cubic.js'
 import { correctedVolume, correctionAtT, type CorrectionAtT } from '../eos/volumeCorrection.js';
 import type { ComponentModel } from '../eos/model.js';
 import type { SolverReport } from './result.js';
+import { wilsonKOf } from './wilson.js';
 
 const R = R_J_molK;
 
@@ -95,8 +96,7 @@ export interface PureSaturation extends SolverReport {
  */
 export function pureSaturation(m: ComponentModel, T: number, pGuess?: number): PureSaturation {
   const k = pureCoefficients(m, T);
-  const Tr = T / m.Tc;
-  let lnP = Math.log(pGuess ?? m.pc * Math.exp(5.373 * (1 + m.omega) * (1 - 1 / Tr)));
+  let lnP = Math.log(pGuess ?? wilsonKOf(m, T, 1)); // Wilson's estimate of p_sat, Pa
   let lo = -Infinity;
   let hi = Math.log(m.pc * 1.5);
   if (lnP >= hi) lnP = Math.log(m.pc * 0.99);
