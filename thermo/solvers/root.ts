@@ -61,6 +61,8 @@ export function bracketedRoot(
       Math.min(Math.abs(fa), Math.abs(fb)),
     );
   }
+  let rawA = fa; // f at the ends before any Illinois halving
+  let rawB = fb;
   let side = 0; // which end was kept last: −1 the a end, +1 the b end
   let slow = 0; // steps in a row that did not halve the bracket
   let x = a;
@@ -69,18 +71,22 @@ export function bracketedRoot(
     const width = Math.abs(b - a);
     x = slow >= 4 ? 0.5 * (a + b) : (a * fb - b * fa) / (fb - fa);
     if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = 0.5 * (a + b);
+    if (x === a || x === b) {
+      // The bracket is two neighbouring floating-point numbers: as close as it gets.
+      return Math.abs(rawA) <= Math.abs(rawB) ? report(a, rawA, it - 1) : report(b, rawB, it - 1);
+    }
     fx = f(x);
     if (!Number.isFinite(fx))
       throw new ConvergenceError(name, `f(${x}) is not a finite number`, it, NaN);
     if (Math.abs(fx) <= fTol) return report(x, fx, it);
     if (Math.sign(fx) === Math.sign(fb)) {
       b = x;
-      fb = fx;
+      fb = rawB = fx;
       if (side === -1) fa /= 2;
       side = -1;
     } else {
       a = x;
-      fa = fx;
+      fa = rawA = fx;
       if (side === 1) fb /= 2;
       side = 1;
     }
