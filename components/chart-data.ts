@@ -11,7 +11,7 @@ export interface CurvePoint {
   /** K */
   T: number;
   /** Pa absolute */
-  pAbsolute: number;
+  pAbs: number;
   /** Liquid volume ÷ tank volume, fraction 0…1. */
   liquidFraction: number;
 }
@@ -65,8 +65,8 @@ export function heatingCurve(
   for (const T of [...temps].sort((a, b) => a - b)) {
     try {
       const s = closedTank(product, T, density);
-      if (Number.isFinite(s.p) && Number.isFinite(s.liquidFraction))
-        points.push({ T, pAbsolute: s.p, liquidFraction: s.liquidFraction });
+      if (Number.isFinite(s.pAbs) && Number.isFinite(s.liquidFraction))
+        points.push({ T, pAbs: s.pAbs, liquidFraction: s.liquidFraction });
     } catch {
       // Outside the core's range at this temperature: leave the point out.
     }

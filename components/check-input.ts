@@ -173,7 +173,7 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
   const ranked = result.cautions.filter((c) => c.code !== 'standing');
   return {
     phase: result.phase,
-    pressure: result.pressure,
+    pressure: result.pGauge,
     totalMass: result.contents.totalMass,
     liquidVolume: result.contents.liquidVolume,
     fillingDensity: result.contents.fillingDensity,
@@ -182,7 +182,7 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
     stopAtGaugePercent: result.fillLimit.stopAtGaugePercent,
     binding: result.fillLimit.binding,
     peakTemperature: result.peak.temperature,
-    peakPressure: result.peak.p,
+    peakPressure: result.peak.pGauge,
     peakLiquidFraction: result.peak.liquidFraction,
     headroomToDesign: result.peak.headroomToDesign,
     headroomToRelief: result.peak.headroomToRelief,

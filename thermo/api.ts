@@ -76,7 +76,7 @@ function fmt(x: number): string {
 /** Saturation state. For a blend: bubble point of that liquid. */
 export interface SaturationState {
   /** Vapour (pure) or bubble-point (blend) pressure, Pa absolute. */
-  p: number;
+  pAbs: number;
   /** Saturated (bubble) liquid density, kg/m³. */
   rhoL: number;
   /** Saturated (incipient) vapour density, kg/m³. */
@@ -117,10 +117,16 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
         },
       );
     const s = pureSaturation(m, T);
-    return { p: s.p, rhoL: m.molarMass / s.vL, rhoV: m.molarMass / s.vV, y: [1], model: r.model };
+    return {
+      pAbs: s.p,
+      rhoL: m.molarMass / s.vL,
+      rhoV: m.molarMass / s.vV,
+      y: [1],
+      model: r.model,
+    };
   }
   const b = blendPoint(r, T, 'bubble');
-  return { p: b.p, rhoL: b.rhoBulk, rhoV: b.rhoIncipient, y: b.incipient, model: r.model };
+  return { pAbs: b.p, rhoL: b.rhoBulk, rhoV: b.rhoIncipient, y: b.incipient, model: r.model };
 }
 
 /**
@@ -176,13 +182,13 @@ export function liquidDensity(
   if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9)
     throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p, P_LIMITS);
   const sat = saturation(product, T, options);
-  if (p < sat.p * (1 - 1e-9)) {
+  if (p < sat.pAbs * (1 - 1e-9)) {
     throw new InputError(
       'p',
-      `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.p)} Pa) for a liquid`,
+      `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.pAbs)} Pa) for a liquid`,
       p,
       {
-        min: sat.p,
+        min: sat.pAbs,
         max: P_LIMITS.max,
         quantity: 'pressure',
         note: `(the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this temperature) for a liquid`,
@@ -247,7 +253,7 @@ export function closedTank(
 /** Dew point of a vapour of the product's composition at T. */
 export interface DewState {
   /** Dew-point pressure, Pa absolute. */
-  p: number;
+  pAbs: number;
   /** Density of the vapour at its dew point, kg/m³. */
   rhoV: number;
   /** Density of the incipient liquid, kg/m³. */
@@ -266,10 +272,10 @@ export function dewPoint(product: Product, T: number, options?: ModelOptions): D
   checkTemperature(r, T);
   if (r.components.length === 1) {
     const s = saturation(product, T, options);
-    return { p: s.p, rhoV: s.rhoV, rhoL: s.rhoL, x: [1], model: r.model };
+    return { pAbs: s.pAbs, rhoV: s.rhoV, rhoL: s.rhoL, x: [1], model: r.model };
   }
   const d = blendPoint(r, T, 'dew');
-  return { p: d.p, rhoV: d.rhoBulk, rhoL: d.rhoIncipient, x: d.incipient, model: r.model };
+  return { pAbs: d.p, rhoV: d.rhoBulk, rhoL: d.rhoIncipient, x: d.incipient, model: r.model };
 }
 
 export interface FlashState {

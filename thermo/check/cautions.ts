@@ -85,24 +85,23 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       fillingDensity: num(r.contents.fillingDensity, 'fraction', 'up'),
     });
   // Reached now: the expected pressure, or the same raised by its allowance (relief temperature).
-  if (r.pressure >= c.reliefSetPressure || r.reliefTemperature === c.T)
-    add('danger', 'relief-now', { pressure: G(r.pressure, 'up'), relief: G(c.reliefSetPressure) });
+  if (r.pGauge >= c.reliefSetPressure || r.reliefTemperature === c.T)
+    add('danger', 'relief-now', { pressure: G(r.pGauge, 'up'), relief: G(c.reliefSetPressure) });
   if (r.phase === 'supercritical')
     add('warning', 'supercritical-now', { temperature: T(c.T), criticalTemperature: Tc });
   const readingAbs = c.gaugePressure === null ? null : c.gaugePressure + baro;
   if (
     k.input.product === 'carbon-dioxide' &&
-    ((readingAbs !== null && readingAbs < CO2_TRIPLE_POINT_PA) ||
-      r.pressureAbsolute < CO2_TRIPLE_POINT_PA)
+    ((readingAbs !== null && readingAbs < CO2_TRIPLE_POINT_PA) || r.pAbs < CO2_TRIPLE_POINT_PA)
   )
     add('danger', 'co2-below-triple-point', {
       threshold: G(CO2_TRIPLE_POINT_PA - baro),
       tripleAbsolute: num(CO2_TRIPLE_POINT_PA, 'pressure'),
     });
   const vacuumRead = c.gaugePressure !== null && c.gaugePressure < 0;
-  if (r.pressure < 0 || vacuumRead)
+  if (r.pGauge < 0 || vacuumRead)
     add('warning', 'vacuum', {
-      pressure: G(vacuumRead ? c.gaugePressure! : r.pressure),
+      pressure: G(vacuumRead ? c.gaugePressure! : r.pGauge),
       source: vacuumRead ? 'reading' : 'expected',
       temperature: T(c.T),
     });
@@ -223,8 +222,8 @@ function readingCautions(r: TankCheckResult, k: CautionContext, add: Add): void 
   if (d && d.verdict !== 'fits')
     add('caution', d.verdict === 'high' ? 'pressure-high' : 'pressure-low', {
       difference: num(d.difference, 'pressureDifference'),
-      reading: G(d.reading),
-      expected: G(d.expected),
+      reading: G(d.readingGauge),
+      expected: G(d.expectedGauge),
       temperature: T(c.T),
       tolerance: num(d.tolerance, 'pressureDifference'),
       ...(d.causeCodes[0] ? { cause: d.causeCodes[0] } : {}),
@@ -254,5 +253,5 @@ function noticeCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       model: num(k.sgModel, null),
     });
   if (c.Tpeak < c.T) add('notice', 'peak-below-now', { peak: T(c.Tpeak), temperature: T(c.T) });
-  if (!k.model.basics.pure) add('notice', 'blend-bubble-point', { pressure: G(r.pressure, 'up') });
+  if (!k.model.basics.pure) add('notice', 'blend-bubble-point', { pressure: G(r.pGauge, 'up') });
 }

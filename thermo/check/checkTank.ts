@@ -205,8 +205,8 @@ function check(input: TankCheckInput): TankCheckResult {
   const result: TankCheckResult = {
     phase: now.phase,
     full: fullKind(now, rho, b.rhoc),
-    pressure: ceilTo(now.pAbs - c.baro, P_STEP),
-    pressureAbsolute: now.pAbs,
+    pGauge: ceilTo(now.pAbs - c.baro, P_STEP),
+    pAbs: now.pAbs,
     barometricPressure: c.baro,
     product: {
       label: b.label,
@@ -255,8 +255,8 @@ function buildPeak(s: State, c: CleanInput, rho: number, rhoc: number): PeakResu
     temperature: c.Tpeak,
     phase: s.phase,
     full: fullKind(s, rho, rhoc),
-    p: ceilTo(s.pAbs - c.baro, P_STEP),
-    pAbsolute: s.pAbs,
+    pGauge: ceilTo(s.pAbs - c.baro, P_STEP),
+    pAbs: s.pAbs,
     liquidFraction: s.lf,
     headroomToDesign: floorTo(c.designPressure - raised, P_STEP),
     headroomToRelief: floorTo(c.reliefSetPressure - raised, P_STEP),

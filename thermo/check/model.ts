@@ -20,7 +20,7 @@ import type { TankPhase } from './types.js';
 
 export interface Sat {
   /** Pa absolute */
-  p: number;
+  pAbs: number;
   rhoL: number;
   rhoV: number;
 }
@@ -171,7 +171,7 @@ export class ProductModel {
     if (!(this.basics.pure && T > this.basics.Tc - 0.5)) {
       try {
         const r = saturation(this.product, T);
-        s = { p: r.p, rhoL: r.rhoL, rhoV: r.rhoV };
+        s = { pAbs: r.pAbs, rhoL: r.rhoL, rhoV: r.rhoV };
       } catch (e) {
         // No bubble point (the core says which T) or none found near a blend's critical
         // region: no saturation state here, as the core's own closed tank treats it.
@@ -211,7 +211,7 @@ export class ProductModel {
     if (s && rho < s.rhoL && rho > s.rhoV) {
       return {
         phase: 'two-phase',
-        pAbs: s.p,
+        pAbs: s.pAbs,
         lf: (rho - s.rhoV) / (s.rhoL - s.rhoV),
         rhoL: s.rhoL,
         rhoV: s.rhoV,
@@ -226,7 +226,7 @@ export class ProductModel {
       return {
         ...c,
         phase: 'liquid-full',
-        pAbs: Math.max(c.pAbs, s.p),
+        pAbs: Math.max(c.pAbs, s.pAbs),
         lf: 1,
         rhoL: rho,
         rhoV: null,
@@ -245,7 +245,7 @@ export class ProductModel {
     const c = closedTank(this.product, T, rho);
     return {
       phase: PHASE[c.phase] ?? 'supercritical',
-      pAbs: c.p,
+      pAbs: c.pAbs,
       lf: c.liquidFraction,
       rhoL: c.rhoL,
       rhoV: c.rhoV,
@@ -276,7 +276,7 @@ export class ProductModel {
     const hi = T_TOP_K;
     if (lo >= T || !this.twoPhaseAt(lo, rho) || this.twoPhaseAt(hi, rho)) return null;
     const Tend = bisectBoundary((T) => this.twoPhaseAt(T, rho), lo, hi, 0.001).x;
-    const end = { T: Tend, p: this.sat(Tend)!.p };
+    const end = { T: Tend, p: this.sat(Tend)!.pAbs };
     this.ends.set(rho, end);
     return end;
   }

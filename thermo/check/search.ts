@@ -98,18 +98,18 @@ export function saturationTemperature(
   // Increasing in −1/T: x = −1/T, y = ln(p/pAbs).
   const f = (x: number) => {
     const s = model.sat(-1 / x);
-    return s ? Math.log(s.p / pAbs) : null;
+    return s ? Math.log(s.pAbs / pAbs) : null;
   };
   const hints: [number, number][] = [];
   for (const T of hintsT) {
     if (T < Tlo || T > Thi) continue;
     const s = model.sat(T);
-    if (s) hints.push([-1 / T, Math.log(s.p / pAbs)]);
+    if (s) hints.push([-1 / T, Math.log(s.pAbs / pAbs)]);
   }
   if (hints.length === 0) {
     const s = model.sat(Tlo);
     if (!s) return null;
-    hints.push([-1 / Tlo, Math.log(s.p / pAbs)]);
+    hints.push([-1 / Tlo, Math.log(s.pAbs / pAbs)]);
   }
   const x = solveIncreasing(f, hints, -1 / Tlo, -1 / Thi, 1e-8);
   if (x === null) return null;

@@ -35,7 +35,7 @@ export type Phase = 'two-phase' | 'liquid' | 'vapour' | 'supercritical';
 export interface ClosedTankState {
   phase: Phase;
   /** Absolute pressure, Pa. */
-  p: number;
+  pAbs: number;
   /** Liquid volume ÷ tank volume (1 when liquid-full). */
   liquidFraction: number;
   /** Density of the liquid present, kg/m³ (null when there is none). */
@@ -97,7 +97,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
         const p = pressureForVolume(volumeAlong(m, T, 'liquid'), v, sat.p * 1.05, sat.p).p;
         return {
           phase: 'liquid',
-          p: onSide(p, sat.p, 'above', T),
+          pAbs: onSide(p, sat.p, 'above', T),
           liquidFraction: 1,
           rhoL: rho,
           rhoV: null,
@@ -117,7 +117,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
         ).p;
         return {
           phase: 'vapour',
-          p: onSide(p, sat.p, 'below', T),
+          pAbs: onSide(p, sat.p, 'below', T),
           liquidFraction: 0,
           rhoL: null,
           rhoV: rho,
@@ -130,7 +130,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
       const lf = (rho - rhoV) / (rhoL - rhoV);
       return {
         phase: 'two-phase',
-        p: sat.p,
+        pAbs: sat.p,
         liquidFraction: lf,
         rhoL,
         rhoV,
@@ -144,7 +144,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
   const dense = rho >= m.rhoc;
   return {
     phase: 'supercritical',
-    p: pressureForVolume(volumeAlong(m, T, 'stable'), v, (R_J_molK * T) / v).p,
+    pAbs: pressureForVolume(volumeAlong(m, T, 'stable'), v, (R_J_molK * T) / v).p,
     liquidFraction: dense ? 1 : 0,
     rhoL: dense ? rho : null,
     rhoV: dense ? null : rho,
@@ -176,7 +176,7 @@ function singlePhase(
   const liquid = phase === 'liquid' || (phase === 'supercritical' && dense);
   return {
     phase,
-    p,
+    pAbs: p,
     liquidFraction: liquid ? 1 : 0,
     rhoL: liquid ? rho : null,
     rhoV: liquid ? null : rho,
@@ -251,7 +251,7 @@ function twoPhaseBlend(
   const massV = fl.beta * molarMassOf(mx, fl.y);
   return {
     phase: 'two-phase',
-    p,
+    pAbs: p,
     liquidFraction: Math.min(1, Math.max(0, (nL * fl.vL) / v)),
     rhoL: molarMassOf(mx, fl.x) / fl.vL,
     rhoV: molarMassOf(mx, fl.y) / fl.vV,
