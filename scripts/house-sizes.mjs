@@ -34,6 +34,25 @@ function functionName(node, sf) {
   return '(anonymous)';
 }
 
+/** Line count of one source text and its functions longer than MAX_FUNCTION_LINES. */
+export function measureSource(rel, text) {
+  const lines = text.split('\n').length - (text.endsWith('\n') ? 1 : 0);
+  const functions = [];
+  const sf = ts.createSourceFile(rel, text, ts.ScriptTarget.Latest, true);
+  const visit = (node) => {
+    if (ts.isFunctionLike(node) && node.body) {
+      const start = sf.getLineAndCharacterOfPosition(node.getStart(sf)).line;
+      const end = sf.getLineAndCharacterOfPosition(node.getEnd()).line;
+      const n = end - start + 1;
+      if (n > MAX_FUNCTION_LINES)
+        functions.push({ file: rel, line: start + 1, name: functionName(node, sf), lines: n });
+    }
+    ts.forEachChild(node, visit);
+  };
+  visit(sf);
+  return { lines, functions };
+}
+
 /** Files over MAX_FILE_LINES and functions over MAX_FUNCTION_LINES under the given folders. */
 export function measure(dirs, root = process.cwd()) {
   const files = [];
@@ -42,21 +61,9 @@ export function measure(dirs, root = process.cwd()) {
     for (const path of tsFiles(join(root, dir))) {
       const rel = relative(root, path);
       if (GENERATED.test(rel)) continue;
-      const text = readFileSync(path, 'utf8');
-      const lines = text.split('\n').length - (text.endsWith('\n') ? 1 : 0);
-      if (lines > MAX_FILE_LINES) files.push({ file: rel, lines });
-      const sf = ts.createSourceFile(path, text, ts.ScriptTarget.Latest, true);
-      const visit = (node) => {
-        if (ts.isFunctionLike(node) && node.body) {
-          const start = sf.getLineAndCharacterOfPosition(node.getStart(sf)).line;
-          const end = sf.getLineAndCharacterOfPosition(node.getEnd()).line;
-          const n = end - start + 1;
-          if (n > MAX_FUNCTION_LINES)
-            functions.push({ file: rel, line: start + 1, name: functionName(node, sf), lines: n });
-        }
-        ts.forEachChild(node, visit);
-      };
-      visit(sf);
+      const m = measureSource(rel, readFileSync(path, 'utf8'));
+      if (m.lines > MAX_FILE_LINES) files.push({ file: rel, lines: m.lines });
+      functions.push(...m.functions);
     }
   }
   return { files, functions };
