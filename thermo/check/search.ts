@@ -17,7 +17,7 @@ import { T_CHECK_MAX_K } from '../limits.js';
 import type { ProductModel, State } from './model.js';
 
 /** Highest temperature searched, K. */
-export const T_SEARCH_MAX = T_CHECK_MAX_K;
+const T_SEARCH_MAX = T_CHECK_MAX_K;
 
 /** Upper end of the saturation curve searched, K (see ProductModel.satTop). */
 export function satTop(model: ProductModel): number {

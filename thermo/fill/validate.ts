@@ -147,7 +147,7 @@ const SOURCES = ['gaugePercent', 'levelHeight', 'netMass'] as const;
 const PHASES = ['two-phase', 'liquid-full', 'vapour-only', 'supercritical'] as const;
 
 /** Throws unless `x` is a well-formed `FillStart` (the shape `startFill` makes). */
-export function validateFillStart(x: unknown, field: string): asserts x is FillStart {
+function validateFillStart(x: unknown, field: string): asserts x is FillStart {
   if (!isObject(x)) throw new InputError(field, 'an object { check, before, startedAt }', x);
   if (!isObject(x.check) || !isObject(x.check.tank))
     throw new InputError(`${field}.check`, 'the tank check input the fill started from', x.check);

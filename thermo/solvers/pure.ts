@@ -33,7 +33,7 @@ export function pureCoefficients(m: ComponentModel, T: number): PureCoefficients
 }
 
 /** The model's molar volume (m³/mol) from the cubic's molar volume vCub at T. */
-export function modelVolume(
+function modelVolume(
   m: ComponentModel,
   k: PureCoefficients,
   T: number,
@@ -161,7 +161,7 @@ export function pureSaturation(m: ComponentModel, T: number, pGuess?: number): P
  * Residual molar enthalpy h − h_ig = R·T·(Z − 1) + (T·da/dT − a)/b · L, J/mol,
  * with L = ln((Z + δ1·B)/(Z + δ2·B))/(δ1 − δ2).
  */
-export function residualEnthalpy(
+function residualEnthalpy(
   m: ComponentModel,
   k: PureCoefficients,
   T: number,
