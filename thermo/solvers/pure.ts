@@ -33,12 +33,7 @@ export function pureCoefficients(m: ComponentModel, T: number): PureCoefficients
 }
 
 /** The model's molar volume (m³/mol) from the cubic's molar volume vCub at T. */
-function modelVolume(
-  m: ComponentModel,
-  k: PureCoefficients,
-  T: number,
-  vCub: number,
-): number {
+function modelVolume(m: ComponentModel, k: PureCoefficients, T: number, vCub: number): number {
   const d = -((vCub * vCub) / (R * T)) * dPdv(m.family, R, T, vCub, k.a, k.b);
   return correctedVolume(k.corr, vCub, d);
 }
