@@ -5,12 +5,13 @@
  */
 import { closedTank, type Product } from '../thermo/index.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../thermo/limits.js';
 
 export interface CurvePoint {
   /** K */
   T: number;
   /** Pa absolute */
-  pAbsolute: number;
+  pAbs: number;
   /** Liquid volume ÷ tank volume, fraction 0…1. */
   liquidFraction: number;
 }
@@ -39,7 +40,7 @@ export function curveSpan(
   let hi = Math.max(Tnow, Tpeak) + 15;
   const Tfull = result.liquidFullTemperature;
   if (Tfull !== null && Tfull > hi && Tfull < hi + 20) hi = Tfull + 5;
-  return { Tmin: Math.max(150, lo), Tmax: Math.min(400, hi) };
+  return { Tmin: Math.max(T_CHECK_MIN_K, lo), Tmax: Math.min(T_CHECK_MAX_K, hi) };
 }
 
 /**
@@ -64,8 +65,8 @@ export function heatingCurve(
   for (const T of [...temps].sort((a, b) => a - b)) {
     try {
       const s = closedTank(product, T, density);
-      if (Number.isFinite(s.p) && Number.isFinite(s.liquidFraction))
-        points.push({ T, pAbsolute: s.p, liquidFraction: s.liquidFraction });
+      if (Number.isFinite(s.pAbs) && Number.isFinite(s.liquidFraction))
+        points.push({ T, pAbs: s.pAbs, liquidFraction: s.liquidFraction });
     } catch {
       // Outside the core's range at this temperature: leave the point out.
     }

@@ -203,7 +203,7 @@ export class CheckChart extends LitElement {
     const d = this.display;
     const x = (T: number) => d.fromSI('temperature', T);
     const pg = (pAbs: number) => d.gaugeFromAbsolute(pAbs);
-    const pressurePts = c.points.map((p) => ({ x: x(p.T), y: pg(p.pAbsolute) }));
+    const pressurePts = c.points.map((p) => ({ x: x(p.T), y: pg(p.pAbs) }));
     const liquidPts = c.points.map((p) => ({
       x: x(p.T),
       y: d.fromSI('fraction', p.liquidFraction),
@@ -242,7 +242,7 @@ export class CheckChart extends LitElement {
           `Pressure (${pUnit})`,
           pressurePts,
           pLines,
-          marks((p) => pg(p.pAbsolute)),
+          marks((p) => pg(p.pAbs)),
         )}
         <figcaption>
           Pressure of this tank as the liquid warms (same contents). Dashed: design pressure;

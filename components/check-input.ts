@@ -7,15 +7,16 @@ import { checkTank, InputError, type InputErrorCode, type InputLimits } from '..
 import { cautionText, refusalWords } from './messages.js';
 import type { TankCheckInput, TankCheckResult } from '../thermo/check/types.js';
 import type { DisplayUnits } from './display.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K, checkMinTemperature } from '../thermo/limits.js';
 import { productFor, productLabel, tripleTemperatures } from './products.js';
 import type { CheckSummary, Readings, Settings, TankRecord } from './types.js';
 
-/** Temperatures the check accepts, K (thermo/check/validate.ts: 150…400 K). */
-export const T_RANGE_K = { min: 150, max: 400 } as const;
+/** Temperatures the check accepts, K (thermo/limits.ts). */
+export const T_RANGE_K = { min: T_CHECK_MIN_K, max: T_CHECK_MAX_K } as const;
 
-/** Lowest liquid temperature the check accepts for this product, K: 150 K or just above the triple point. */
+/** Lowest liquid temperature the check accepts for this product, K (the engine's own rule). */
 export function minTemperatureFor(productId: string): number {
-  return Math.max(T_RANGE_K.min, ...tripleTemperatures(productId).map((t) => t + 0.1));
+  return checkMinTemperature(Math.max(-Infinity, ...tripleTemperatures(productId)));
 }
 
 /** Human names of the readings, as the field labels say them. */
@@ -172,7 +173,7 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
   const ranked = result.cautions.filter((c) => c.code !== 'standing');
   return {
     phase: result.phase,
-    pressure: result.pressure,
+    pressure: result.pGauge,
     totalMass: result.contents.totalMass,
     liquidVolume: result.contents.liquidVolume,
     fillingDensity: result.contents.fillingDensity,
@@ -181,7 +182,7 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
     stopAtGaugePercent: result.fillLimit.stopAtGaugePercent,
     binding: result.fillLimit.binding,
     peakTemperature: result.peak.temperature,
-    peakPressure: result.peak.p,
+    peakPressure: result.peak.pGauge,
     peakLiquidFraction: result.peak.liquidFraction,
     headroomToDesign: result.peak.headroomToDesign,
     headroomToRelief: result.peak.headroomToRelief,

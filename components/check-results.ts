@@ -23,6 +23,7 @@ import { checkResultsStyles } from './check-results-styles.js';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent, type Quantity, type Rounding } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
+import { T_CHECK_MAX_K } from '../thermo/limits.js';
 import type { Caution, FullKind, TankCheckResult, TankPhase } from '../thermo/check/types.js';
 import { stopPlace } from './fill-words.js';
 import { causeText, cautionText } from './messages.js';
@@ -47,9 +48,6 @@ export function phaseWords(phase: TankPhase, full: FullKind | null | undefined):
     ? 'Full of dense fluid (above the critical temperature): no vapour space'
     : PHASE_WORDS[phase];
 }
-
-/** The engine looks for the relief temperature up to this temperature, K (see `reliefTemperature`). */
-const RELIEF_SEARCH_MAX_K = 400;
 
 /** Delay before the polite summary is updated, ms: long enough that typing is not read out. */
 const ANNOUNCE_DELAY_MS = 1200;
@@ -116,7 +114,7 @@ export class CheckResults extends LitElement {
     const top = r.cautions.find((c) => c.code !== 'standing');
     return [
       `Fill limit ${d.format('mass', r.fillLimit.maxMass, 'down')}; stop at ${formatPercent(r.fillLimit.stopAtGaugePercent, 'down')} ${stopPlace(r.fillLimit)}.`,
-      `Peak-day pressure ${d.format('gaugePressure', r.peak.p, 'up')}.`,
+      `Peak-day pressure ${d.format('gaugePressure', r.peak.pGauge, 'up')}.`,
       top ? `${capital(top.level)}: ${cautionText(top, d)}` : '',
     ]
       .filter(Boolean)
@@ -226,7 +224,7 @@ export class CheckResults extends LitElement {
         </div>
         <div class="card">
           <h3>Peak day${this.peakEstimated ? ' (no forecast entered)' : ''}</h3>
-          <div class="big">${this._fig('peak-pressure', 'gaugePressure', p.p, 'up')}</div>
+          <div class="big">${this._fig('peak-pressure', 'gaugePressure', p.pGauge, 'up')}</div>
           <p>
             at a liquid temperature of
             ${this._fig('peak-temperature', 'temperature', p.temperature)}
@@ -275,8 +273,8 @@ export class CheckResults extends LitElement {
           <dd data-testid="result-phase" data-si=${r.phase}>${phaseWords(r.phase, r.full)}</dd>
           <dt>Expected pressure</dt>
           <dd>
-            ${this._fig('result-pressure', 'gaugePressure', r.pressure, 'up')}
-            <span class="muted">(${d.format('pressure', r.pressureAbsolute, 'up')})</span>
+            ${this._fig('result-pressure', 'gaugePressure', r.pGauge, 'up')}
+            <span class="muted">(${d.format('pressure', r.pAbs, 'up')})</span>
           </dd>
           <dt>Barometric pressure used</dt>
           <dd>${d.format('pressure', r.barometricPressure)}</dd>
@@ -317,7 +315,7 @@ export class CheckResults extends LitElement {
           <dt>Phase at the peak</dt>
           <dd>${phaseWords(p.phase, p.full)}</dd>
           <dt>Peak pressure, absolute</dt>
-          <dd>${d.format('pressure', p.pAbsolute, 'up')}</dd>
+          <dd>${d.format('pressure', p.pAbs, 'up')}</dd>
           <dt>Relief setting${assumed ? ' (assumed)' : ''} reached at</dt>
           <dd>
             ${
@@ -331,7 +329,7 @@ export class CheckResults extends LitElement {
                 : this._tempWithTolerance(
                     'relief-temperature',
                     r.reliefTemperature,
-                    `Not below ${d.format('temperature', RELIEF_SEARCH_MAX_K)}`,
+                    `Not below ${d.format('temperature', T_CHECK_MAX_K)}`,
                   )
             }
           </dd>
@@ -354,8 +352,8 @@ export class CheckResults extends LitElement {
     return html`<section aria-labelledby="h-diag" data-testid="diagnosis" data-si=${g.verdict}>
       <h3 id="h-diag">Pressure gauge</h3>
       <p>
-        The gauge ${verdict}: ${d.format('gaugePressure', g.reading)} against
-        ${d.format('gaugePressure', g.expected)} expected (difference
+        The gauge ${verdict}: ${d.format('gaugePressure', g.readingGauge)} against
+        ${d.format('gaugePressure', g.expectedGauge)} expected (difference
         ${d.format('pressureDifference', g.difference)}, allowed ±
         ${d.format('pressureDifference', g.tolerance, 'up')}).
       </p>

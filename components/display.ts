@@ -19,6 +19,7 @@ import {
   type UnitIds,
 } from '../thermo/units.js';
 import type { Settings, UnitPrefs } from './types.js';
+import { P_ATM_Pa } from '../thermo/constants.js';
 import { formatDigits, resolveNumberFormat, type NumberFormat } from './number-parse.js';
 
 export type { Quantity, Rounding };
@@ -84,7 +85,7 @@ export class DisplayUnits {
 
   constructor(
     readonly units: UnitPrefs,
-    barometricPressure = 101_325,
+    barometricPressure = P_ATM_Pa,
     numberFormat?: NumberFormat,
   ) {
     this.barometricPressure = barometricPressure;
@@ -234,7 +235,7 @@ export function siteBarometricPressure(settings: Settings): number {
   } catch {
     // An out-of-range elevation was refused when typed; fall through to the standard value.
   }
-  return 101_325;
+  return P_ATM_Pa;
 }
 
 /** A plain percent (already 0…100) for display, rounded in the given direction. */

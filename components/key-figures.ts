@@ -49,7 +49,7 @@ export function keyFigures(r: TankCheckResult, d: DisplayUnits): KeyFigures {
     over: f.roomLeftMass < 0,
     fixedGauge: f.stopAtFixedGauge,
     reliefAssumed: r.cautions.some((c) => c.code === 'relief-assumed'),
-    peakPressure: r.peak.p,
+    peakPressure: r.peak.pGauge,
     headroomToRelief: r.peak.headroomToRelief,
   };
 }

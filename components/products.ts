@@ -11,6 +11,7 @@
 import { REFRIGERANT_BLENDS } from '../thermo/data/blends.js';
 import { FLUIDS } from '../thermo/data/fluids.js';
 import { LPG_PRESETS } from '../thermo/rules/presets.js';
+import { LPG_IDS } from '../thermo/rules/gases.js';
 import type { Product } from '../thermo/index.js';
 
 export type ProductGroup = 'LP-gas' | 'Ammonia' | 'Refrigerant' | 'Carbon dioxide' | 'Other';
@@ -26,7 +27,7 @@ export interface ProductChoice {
   composition?: string;
 }
 
-const LP_GAS = new Set(['propane', 'n-butane', 'isobutane', 'propylene', '1-butene', 'isobutene']);
+const LP_GAS = new Set(LPG_IDS);
 
 function groupOf(id: string): ProductGroup {
   if (LP_GAS.has(id)) return 'LP-gas';

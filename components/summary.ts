@@ -58,7 +58,7 @@ export function summaryText(
     `Fill limit: ${d.format('mass', f.maxMass, 'down')}`,
     `Where the stop is read: ${stopPlace(f)}`,
     ...(f.bindingNote ? [`Why: ${f.bindingNote}`] : []),
-    `Peak day (${d.format('temperature', p.temperature)}): ${d.format('gaugePressure', p.p, 'up')}; headroom to relief ${headroom(p.headroomToRelief, d)}, to design ${headroom(p.headroomToDesign, d)}`,
+    `Peak day (${d.format('temperature', p.temperature)}): ${d.format('gaugePressure', p.pGauge, 'up')}; headroom to relief ${headroom(p.headroomToRelief, d)}, to design ${headroom(p.headroomToDesign, d)}`,
     `Liquid-full at: ${result.liquidFullTemperature === null ? 'not reached' : d.format('temperature', result.liquidFullTemperature, 'down')}`,
     '',
     ranked.length ? 'Cautions:' : 'No further cautions from these figures.',

@@ -10,6 +10,7 @@
 import type { NumberFormatId } from './number-parse.js';
 import type { CautionLevel, TankInput, TankPhase } from '../thermo/check/types.js';
 import { FILL_ACCURACY_DEFAULTS } from '../thermo/fill/defaults.js';
+import { P_ATM_Pa } from '../thermo/constants.js';
 
 /** A tank in the register. */
 export interface TankRecord {
@@ -167,7 +168,7 @@ export interface Settings {
 
 export const DEFAULT_SETTINGS: Settings = {
   units: { pressure: 'psig', temperature: 'F', volume: 'usgal', mass: 'lb', length: 'in' },
-  barometer: { mode: 'standard', pressure: 101_325, elevation: 0 },
+  barometer: { mode: 'standard', pressure: P_ATM_Pa, elevation: 0 },
   gaugeAccuracy: 0.02,
   gaugeFullScale: null,
   thermometerTolerance: 1,

@@ -4,6 +4,7 @@
  * into the refusal message.
  */
 import { TEXT_LIMITS } from '../components/limits.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../thermo/limits.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 
 export class WalkInvalid extends Error {}
@@ -52,8 +53,8 @@ export function validateSite(f: unknown, i: number): SiteForecast {
   if (!isObj(f)) fail(where, 'is not an object');
   text(f, 'site', where, TEXT_LIMITS.site);
   list(f, 'days', where, 31).forEach((d, j) => {
-    if (typeof d !== 'number' || !Number.isFinite(d) || d < 150 || d > 400)
-      fail(where, `day ${j + 1} must be a temperature from 150 to 400 K`);
+    if (typeof d !== 'number' || !Number.isFinite(d) || d < T_CHECK_MIN_K || d > T_CHECK_MAX_K)
+      fail(where, `day ${j + 1} must be a temperature from ${T_CHECK_MIN_K} to ${T_CHECK_MAX_K} K`);
   });
   num(f, 'sunAllowance', where, 0, 40);
   list(f, 'tankAllowances', where, MAX_TANKS).forEach((a, j) => {

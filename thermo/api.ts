@@ -76,7 +76,7 @@ function fmt(x: number): string {
 /** Saturation state. For a blend: bubble point of that liquid. */
 export interface SaturationState {
   /** Vapour (pure) or bubble-point (blend) pressure, Pa absolute. */
-  p: number;
+  pAbs: number;
   /** Saturated (bubble) liquid density, kg/m³. */
   rhoL: number;
   /** Saturated (incipient) vapour density, kg/m³. */
@@ -117,10 +117,16 @@ export function saturation(product: Product, T: number, options?: ModelOptions):
         },
       );
     const s = pureSaturation(m, T);
-    return { p: s.p, rhoL: m.molarMass / s.vL, rhoV: m.molarMass / s.vV, y: [1], model: r.model };
+    return {
+      pAbs: s.p,
+      rhoL: m.molarMass / s.vL,
+      rhoV: m.molarMass / s.vV,
+      y: [1],
+      model: r.model,
+    };
   }
   const b = blendPoint(r, T, 'bubble');
-  return { p: b.p, rhoL: b.rhoBulk, rhoV: b.rhoIncipient, y: b.incipient, model: r.model };
+  return { pAbs: b.p, rhoL: b.rhoBulk, rhoV: b.rhoIncipient, y: b.incipient, model: r.model };
 }
 
 /**
@@ -162,27 +168,27 @@ function blendPoint(r: ResolvedProduct, T: number, kind: 'bubble' | 'dew') {
 }
 
 /**
- * Density of the liquid at T and p, kg/m³. p must be at or above the saturation (bubble)
+ * Density of the liquid at T and absolute pressure pAbs, kg/m³. pAbs must be at or above the saturation (bubble)
  * pressure at T, and T below the critical temperature (pure) or the blend's critical region.
  */
 export function liquidDensity(
   product: Product,
   T: number,
-  p: number,
+  pAbs: number,
   options?: ModelOptions,
 ): number {
   const r = resolveProduct(product, options);
   checkTemperature(r, T);
-  if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9)
-    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p, P_LIMITS);
+  if (typeof pAbs !== 'number' || !Number.isFinite(pAbs) || pAbs <= 0 || pAbs > 1e9)
+    throw new InputError('pAbs', 'a pressure above 0 and at most 1e9 Pa absolute', pAbs, P_LIMITS);
   const sat = saturation(product, T, options);
-  if (p < sat.p * (1 - 1e-9)) {
+  if (pAbs < sat.pAbs * (1 - 1e-9)) {
     throw new InputError(
-      'p',
-      `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.p)} Pa) for a liquid`,
-      p,
+      'pAbs',
+      `at or above the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this T (${fmt(sat.pAbs)} Pa) for a liquid`,
+      pAbs,
       {
-        min: sat.p,
+        min: sat.pAbs,
         max: P_LIMITS.max,
         quantity: 'pressure',
         note: `(the ${r.components.length > 1 ? 'bubble' : 'saturation'} pressure at this temperature) for a liquid`,
@@ -191,10 +197,10 @@ export function liquidDensity(
   }
   if (r.components.length === 1) {
     const m = r.components[0]!;
-    return m.molarMass / pureVolume(m, T, p, 'liquid');
+    return m.molarMass / pureVolume(m, T, pAbs, 'liquid');
   }
   const mx = mixtureAtT(r, T);
-  return r.molarMass / phaseAt(mx, p, r.z, 'liquid').v;
+  return r.molarMass / phaseAt(mx, pAbs, r.z, 'liquid').v;
 }
 
 /** The closed-tank state as the API returns it (see solvers/closedTank.ts for each field). */
@@ -247,7 +253,7 @@ export function closedTank(
 /** Dew point of a vapour of the product's composition at T. */
 export interface DewState {
   /** Dew-point pressure, Pa absolute. */
-  p: number;
+  pAbs: number;
   /** Density of the vapour at its dew point, kg/m³. */
   rhoV: number;
   /** Density of the incipient liquid, kg/m³. */
@@ -266,10 +272,10 @@ export function dewPoint(product: Product, T: number, options?: ModelOptions): D
   checkTemperature(r, T);
   if (r.components.length === 1) {
     const s = saturation(product, T, options);
-    return { p: s.p, rhoV: s.rhoV, rhoL: s.rhoL, x: [1], model: r.model };
+    return { pAbs: s.pAbs, rhoV: s.rhoV, rhoL: s.rhoL, x: [1], model: r.model };
   }
   const d = blendPoint(r, T, 'dew');
-  return { p: d.p, rhoV: d.rhoBulk, rhoL: d.rhoIncipient, x: d.incipient, model: r.model };
+  return { pAbs: d.p, rhoV: d.rhoBulk, rhoL: d.rhoIncipient, x: d.incipient, model: r.model };
 }
 
 export interface FlashState {
@@ -286,19 +292,24 @@ export interface FlashState {
 }
 
 /**
- * Isothermal flash at (T, p): Michelsen's stability test, then successive substitution with
+ * Isothermal flash at (T, pAbs), pAbs absolute: Michelsen's stability test, then successive substitution with
  * Rachford–Rice when the feed splits. A pure fluid is liquid above its vapour pressure and
  * vapour below it.
  */
-export function flash(product: Product, T: number, p: number, options?: ModelOptions): FlashState {
+export function flash(
+  product: Product,
+  T: number,
+  pAbs: number,
+  options?: ModelOptions,
+): FlashState {
   const r = resolveProduct(product, options);
   checkTemperature(r, T);
-  if (typeof p !== 'number' || !Number.isFinite(p) || p <= 0 || p > 1e9)
-    throw new InputError('p', 'a pressure above 0 and at most 1e9 Pa', p, P_LIMITS);
+  if (typeof pAbs !== 'number' || !Number.isFinite(pAbs) || pAbs <= 0 || pAbs > 1e9)
+    throw new InputError('pAbs', 'a pressure above 0 and at most 1e9 Pa absolute', pAbs, P_LIMITS);
   const mx = mixtureAtT(r, T);
   const z = r.z;
   const single = (): FlashState => {
-    const ph = phaseAt(mx, p, z, 'stable');
+    const ph = phaseAt(mx, pAbs, z, 'stable');
     const M = r.molarMass;
     const liquidLike =
       ph.nRoots > 1
@@ -316,9 +327,9 @@ export function flash(product: Product, T: number, p: number, options?: ModelOpt
     };
   };
   if (r.components.length === 1) return single();
-  const st = stabilityTest(mx, z, p);
+  const st = stabilityTest(mx, z, pAbs);
   if (st.stable) return single();
-  const f = flashPT(mx, z, p, st.K);
+  const f = flashPT(mx, z, pAbs, st.K);
   if (f.beta <= 0 || f.beta >= 1) return single();
   const Mx = f.x.reduce((s, x, i) => s + x * mx.M[i]!, 0);
   const My = f.y.reduce((s, y, i) => s + y * mx.M[i]!, 0);

@@ -74,11 +74,11 @@ export interface ResolvedProduct {
 }
 
 /** Highest temperature accepted by the API, K. The models are fitted well below it. */
-export const T_MAX_K = 600;
+export { T_MODEL_MAX_K as T_MAX_K } from './limits.js';
 
 const KNOWN_IDS = () => [...FLUIDS, ...REFRIGERANT_BLENDS].map((f) => f.id).join(', ');
 
-export function resolveModel(options: ModelOptions | undefined): ModelId {
+function resolveModel(options: ModelOptions | undefined): ModelId {
   const model = options?.model ?? 'tuned';
   if (!MODEL_IDS.includes(model))
     throw new InputError(
@@ -158,7 +158,7 @@ export function resolveProduct(product: Product, options?: ModelOptions): Resolv
 }
 
 /** Mole fractions from mass fractions: x_i = (w_i/M_i)/Σ(w_j/M_j). */
-export function blendComponents(
+function blendComponents(
   massFractions: readonly { readonly id: string; readonly w: number }[],
 ): BlendComponent[] {
   const n = massFractions.map((c) => c.w / fluidById(c.id)!.molarMass);

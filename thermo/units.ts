@@ -13,6 +13,7 @@
  *   1 bar = 100 000 Pa; 1 atm = 101 325 Pa; T(K) = (T(°F) − 32)·5/9 + 273.15.
  * Sources: NIST SP 811 (2008), Appendix B; ISO 80000-1.
  */
+import { P_ATM_Pa } from './constants.js';
 import { InputError } from './errors.js';
 
 export const LB_KG = 0.45359237;
@@ -22,7 +23,6 @@ export const US_GAL_M3 = 3.785411784e-3;
 export const IMP_GAL_M3 = 4.54609e-3;
 export const STANDARD_GRAVITY = 9.80665;
 export const PSI_PA = (LB_KG * STANDARD_GRAVITY) / (IN_M * IN_M);
-export const STANDARD_ATMOSPHERE_PA = 101_325;
 
 /** Unit ids accepted for each quantity. */
 export interface UnitIds {
@@ -167,7 +167,7 @@ const LINEAR: {
 };
 
 function baro(options: ConvertOptions | undefined): number {
-  const pb = options?.barometricPressure ?? STANDARD_ATMOSPHERE_PA;
+  const pb = options?.barometricPressure ?? P_ATM_Pa;
   if (typeof pb !== 'number' || !Number.isFinite(pb) || pb < 20_000 || pb > 120_000) {
     throw new InputError('barometricPressure', 'from 20 000 to 120 000 Pa absolute', pb);
   }
@@ -336,5 +336,5 @@ export function barometricPressureAtElevation(elevation_m: number): number {
   const T0 = 288.15;
   const L = 0.0065;
   const exponent = (STANDARD_GRAVITY * 0.0289644) / (8.3144598 * L);
-  return STANDARD_ATMOSPHERE_PA * (1 - (L * elevation_m) / T0) ** exponent;
+  return P_ATM_Pa * (1 - (L * elevation_m) / T0) ** exponent;
 }

@@ -84,7 +84,7 @@ describe('check-screen', () => {
     expect(Number(byTestId(el, 'fill-stop-percent').dataset.si)).to.equal(
       expected.fillLimit.stopAtGaugePercent,
     );
-    expect(Number(byTestId(el, 'peak-pressure').dataset.si)).to.equal(expected.peak.p);
+    expect(Number(byTestId(el, 'peak-pressure').dataset.si)).to.equal(expected.peak.pGauge);
     expect(byTestId(el, 'standing-caution').textContent).to.contain(expected.standingCaution);
     expect(el.shadowRoot!.textContent).not.to.contain('NaN');
     // The host says which engine input the figures come from.

@@ -81,7 +81,7 @@ export function measureAccuracy(): AccuracyRow[] {
       const T = +r.T_K!;
       if (!inRange(T)) continue;
       const s = saturation(id, T);
-      psat = Math.max(psat, rel(s.p, +r.p_Pa!));
+      psat = Math.max(psat, rel(s.pAbs, +r.p_Pa!));
       rhoL = Math.max(rhoL, rel(s.rhoL, +r.rhoL_kg_m3!));
       rhoV = Math.max(rhoV, rel(s.rhoV, +r.rhoV_kg_m3!));
       points += 3;
@@ -134,7 +134,7 @@ export function measureBlends(): BlendAccuracyRow[] {
       rhoV: 0,
       points: 0,
     };
-    row.bubble = Math.max(row.bubble, rel(s.p, +r.p_bubble_Pa!));
+    row.bubble = Math.max(row.bubble, rel(s.pAbs, +r.p_bubble_Pa!));
     row.rhoL = Math.max(row.rhoL, rel(s.rhoL, +r.rhoL_kg_m3!));
     row.rhoV = Math.max(row.rhoV, rel(s.rhoV, +r.rhoV_incipient_kg_m3!));
     row.points++;
@@ -186,8 +186,8 @@ export function measureRefrigerantBlends(
       if (!inRange(T)) continue;
       const b = saturation(id, T);
       const d = dewPoint(id, T);
-      row.bubble = Math.max(row.bubble, rel(b.p, +r.p_bubble_Pa!));
-      row.dew = Math.max(row.dew, rel(d.p, +r.p_dew_Pa!));
+      row.bubble = Math.max(row.bubble, rel(b.pAbs, +r.p_bubble_Pa!));
+      row.dew = Math.max(row.dew, rel(d.pAbs, +r.p_dew_Pa!));
       row.rhoL = Math.max(row.rhoL, rel(b.rhoL, +r.rhoL_bubble_kg_m3!));
       row.rhoV = Math.max(row.rhoV, rel(d.rhoV, +r.rhoV_dew_kg_m3!));
       row.points += 4;

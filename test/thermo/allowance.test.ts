@@ -5,7 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { checkTank, type TankCheckInput } from '../../thermo/index.js';
-import { PSI_PA as PSI, STANDARD_ATMOSPHERE_PA, toSI } from '../../thermo/units.js';
+import { PSI_PA as PSI, toSI } from '../../thermo/units.js';
+import { P_ATM_Pa } from '../../thermo/constants.js';
 
 const F = (f: number) => toSI('temperature', f, 'F');
 // The allowances as the README states them (accuracy targets: p_sat 0.5 %; limits of validity: a
@@ -32,7 +33,7 @@ describe('checkTank peak headroom', () => {
   it('takes the headroom from the peak pressure raised by 0.5 % while two-phase', () => {
     const r = checkTank(input(60, 100));
     expect(r.peak.phase).toBe('two-phase');
-    const raised = r.peak.pAbsolute * (1 + VAPOUR_PRESSURE_ALLOWANCE) - STANDARD_ATMOSPHERE_PA;
+    const raised = r.peak.pAbs * (1 + VAPOUR_PRESSURE_ALLOWANCE) - P_ATM_Pa;
     // floored to the engine's pressure step (at most 100 Pa here): identity within that step.
     expect(Math.abs(250 * PSI - raised - r.peak.headroomToDesign)).toBeLessThan(100);
     expect(r.peak.headroomToDesign).toBeLessThanOrEqual(250 * PSI - raised);
@@ -41,7 +42,7 @@ describe('checkTank peak headroom', () => {
   it('raises a liquid-full peak pressure by 10 %, the model’s accuracy past liquid-full', () => {
     const r = checkTank(input(95, 110));
     expect(r.peak.phase).toBe('liquid-full');
-    const raised = r.peak.pAbsolute * (1 + LIQUID_FULL_ALLOWANCE) - STANDARD_ATMOSPHERE_PA;
+    const raised = r.peak.pAbs * (1 + LIQUID_FULL_ALLOWANCE) - P_ATM_Pa;
     expect(r.peak.headroomToDesign).toBeLessThanOrEqual(250 * PSI - raised);
     expect(r.peak.headroomToDesign).toBeLessThan(0);
     const caution = r.cautions.find((c) => c.code === 'design-at-peak');

@@ -76,8 +76,8 @@ describe('input validation', () => {
     expectInputError(() => saturation('propane', Number.NaN), 'T');
     expectInputError(() => saturation('propane', 50), 'T'); // below the triple point (85.5 K)
     expectInputError(() => saturation('propane', 369.6), 'T'); // within 0.5 K of Tc
-    expectInputError(() => liquidDensity('propane', 300, 0), 'p');
-    expectInputError(() => liquidDensity('propane', 300, 1e5), 'p'); // below p_sat
+    expectInputError(() => liquidDensity('propane', 300, 0), 'pAbs');
+    expectInputError(() => liquidDensity('propane', 300, 1e5), 'pAbs'); // below p_sat
     expectInputError(() => closedTank('propane', 300, 0), 'density');
     expectInputError(() => closedTank('propane', 300, -1), 'density');
     expectInputError(() => closedTank('propane', 300, 5000), 'density');
@@ -125,7 +125,7 @@ describe('input validation', () => {
       },
       300,
     );
-    expect(Number.isFinite(s.p)).toBe(true);
+    expect(Number.isFinite(s.pAbs)).toBe(true);
   });
 
   it('custom fluids use the textbook Peng–Robinson model under the default', () => {
@@ -142,7 +142,7 @@ describe('input validation', () => {
       300,
     );
     expect(s.model).toBe('PR');
-    expect(s.p).toBeCloseTo(saturation('propane', 300, { model: 'PR' }).p, 6);
+    expect(s.pAbs).toBeCloseTo(saturation('propane', 300, { model: 'PR' }).pAbs, 6);
   });
 });
 
@@ -158,7 +158,10 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
         const T = f.Ttriple + u * (f.Tc - 0.5 - f.Ttriple);
         const s = saturation(f.id, T, { model });
         return (
-          [s.p, s.rhoL, s.rhoV].every(Number.isFinite) && s.p > 0 && s.rhoL > s.rhoV && s.rhoV > 0
+          [s.pAbs, s.rhoL, s.rhoV].every(Number.isFinite) &&
+          s.pAbs > 0 &&
+          s.rhoL > s.rhoV &&
+          s.rhoV > 0
         );
       }),
       { numRuns: 400 },
@@ -177,8 +180,8 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
           const rho = w * maxDensity(f.id, T, { model });
           const c = closedTank(f.id, T, rho, { model });
           return (
-            Number.isFinite(c.p) &&
-            c.p > 0 &&
+            Number.isFinite(c.pAbs) &&
+            c.pAbs > 0 &&
             c.liquidFraction >= 0 &&
             c.liquidFraction <= 1 &&
             finite(c.rhoL) &&
@@ -199,7 +202,7 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
         fc.double({ min: 1, max: 1000, noNaN: true }),
         (f, u, ratio) => {
           const T = f.Ttriple + u * (f.Tc - 0.5 - f.Ttriple);
-          const p = Math.min(1e9, saturation(f.id, T).p * ratio);
+          const p = Math.min(1e9, saturation(f.id, T).pAbs * ratio);
           return Number.isFinite(liquidDensity(f.id, T, p));
         },
       ),
@@ -239,8 +242,8 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
           const s = saturation(blend, T);
           const c = closedTank(blend, T, w * s.rhoL);
           return (
-            Number.isFinite(s.p) &&
-            Number.isFinite(c.p) &&
+            Number.isFinite(s.pAbs) &&
+            Number.isFinite(c.pAbs) &&
             c.liquidFraction >= 0 &&
             c.liquidFraction <= 1
           );

@@ -60,7 +60,7 @@ describe('checkTank states and refusals (fast-check)', () => {
               liquidTemperature: T,
               contents: { gaugePercent: gauge },
               peakTemperature: peak,
-            }).peak.p;
+            }).peak.pGauge;
           let last = -Infinity;
           for (let peak = T; peak <= T + 40; peak += 5) {
             let p: number;

@@ -100,7 +100,7 @@ describe('checkTank: contents and room left (FACTS case 7)', () => {
     // identity: the stop-at gauge percent counts the vapour's mass, so it sits below the regulation formula
     expect(r.fillLimit.stopAtGaugePercent).toBeLessThan(r.fillLimit.volumetricMaxPercent!);
     // derived [EOS]: 129.3 psig ± 1 (0.5 % of 144 psia = 0.7 psi)
-    expectWithin(toPsig(r.pressure), 129.3, 1, {
+    expectWithin(toPsig(r.pGauge), 129.3, 1, {
       input,
       source: FACTS(7) + '; saturation_properties.csv',
       kind: 'published',
@@ -120,7 +120,7 @@ describe('checkTank: peak pressure and headroom (FACTS cases 8, 9)', () => {
   it('checkTank gives the propane peak pressure and headroom to a 220 psig relief (case 8)', () => {
     const r110 = propane(110);
     // derived [EOS]: 199.6 psig at 110 °F; ±1.5 psi (FACTS; covers 0.5 % of 214 psia)
-    expectWithin(toPsig(r110.peak.p), 199.6, 1.5, {
+    expectWithin(toPsig(r110.peak.pGauge), 199.6, 1.5, {
       input: 'propane, 110 °F',
       source: FACTS(8),
       kind: 'published',
@@ -133,13 +133,13 @@ describe('checkTank: peak pressure and headroom (FACTS cases 8, 9)', () => {
       why: 'FACTS ±1.5 psi plus the 0.5 % allowance',
     });
     expect(r110.peak.headroomToRelief).toBeLessThan(psig(20.4) + psig(1.5) - psig(0));
-    expectWithin(toPsig(propane(115).peak.p), 213.4, 1.5, {
+    expectWithin(toPsig(propane(115).peak.pGauge), 213.4, 1.5, {
       input: 'propane, 115 °F',
       source: FACTS(8),
       kind: 'published',
     });
     const r120 = propane(120);
-    expectWithin(toPsig(r120.peak.p), 227.9, 1.5, {
+    expectWithin(toPsig(r120.peak.pGauge), 227.9, 1.5, {
       input: 'propane, 120 °F',
       source: FACTS(8),
       kind: 'published',
@@ -163,7 +163,7 @@ describe('checkTank: peak pressure and headroom (FACTS cases 8, 9)', () => {
         }),
       );
     const r110 = nh3(110);
-    expectWithin(toPsig(r110.peak.p), 232.5, 1.5, {
+    expectWithin(toPsig(r110.peak.pGauge), 232.5, 1.5, {
       input: 'ammonia, 110 °F',
       source: FACTS(9),
       kind: 'published',
@@ -175,7 +175,7 @@ describe('checkTank: peak pressure and headroom (FACTS cases 8, 9)', () => {
       why: 'FACTS ±1.5 psi plus the 0.5 % allowance',
     });
     const r115 = nh3(115);
-    expectWithin(toPsig(r115.peak.p), 251.7, 1.5, {
+    expectWithin(toPsig(r115.peak.pGauge), 251.7, 1.5, {
       input: 'ammonia, 115 °F',
       source: FACTS(9),
       kind: 'published',
@@ -314,7 +314,7 @@ describe('checkTank: CO2 (FACTS cases 12, 13)', () => {
     const r = co2({ liquidTemperature: F(70), peakTemperature: F(70) });
     expect(r.phase).toBe('two-phase');
     // derived [EOS]: 838 psig ± 5 (0.5 % of 853 psia = 4.3 psi); liquid density ± 1 %
-    expectWithin(toPsig(r.pressure), 838, 5, {
+    expectWithin(toPsig(r.pGauge), 838, 5, {
       input: 'CO2 70 °F',
       source: FACTS(13),
       kind: 'published',
@@ -338,7 +338,7 @@ describe('checkTank: butane vacuum (FACTS case 14)', () => {
   ] as const) {
     it(`checkTank gives ${product} at ${TF} °F ${p} psig${vac ? ' and a vacuum warning' : ''}`, () => {
       const r = checkTank(base({ product, liquidTemperature: F(TF), peakTemperature: F(TF) }));
-      expectWithin(toPsig(r.pressure), p, 0.1, {
+      expectWithin(toPsig(r.pGauge), p, 0.1, {
         input: `${product} ${TF} °F`,
         source: FACTS(14),
         kind: 'published',
@@ -371,7 +371,7 @@ describe('checkTank: refrigerant cylinder (FACTS case 20)', () => {
     // The 131 °F rule for every DOT cylinder (173.304(b)) is a shade stricter and binds.
     expect(r.fillLimit.binding).toBe('dot-131F');
     // derived [EOS]: vapour pressure at 130 °F = 198.7 psig < 240 psig; ± 1.5 psi (0.5 % of 213 psia)
-    expectWithin(fromSI('pressure', saturation('r134a', F(130)).p, 'psig'), 198.7, 1.5, {
+    expectWithin(fromSI('pressure', saturation('r134a', F(130)).pAbs, 'psig'), 198.7, 1.5, {
       input: 'R-134a 130 °F',
       source: FACTS(20),
       kind: 'published',
@@ -424,9 +424,9 @@ describe('checkTank identities', () => {
       for (const dT of [0, 1, 5, 15, 30]) {
         const r = checkTank({ ...i, peakTemperature: i.liquidTemperature + dT });
         expect(
-          r.peak.pAbsolute + 1e-6,
+          r.peak.pAbs + 1e-6,
           `input ${JSON.stringify(i.product)} dT ${dT}`,
-        ).toBeGreaterThanOrEqual(r.pressureAbsolute);
+        ).toBeGreaterThanOrEqual(r.pAbs);
       }
     }
   });
@@ -448,7 +448,7 @@ describe('checkTank identities', () => {
     for (const i of inputs.slice(0, 4)) {
       const r = checkTank(i);
       if (r.reliefTemperature === null) continue;
-      const p = closedTank(i.product, r.reliefTemperature, r.contents.overallDensity).p * 1.005;
+      const p = closedTank(i.product, r.reliefTemperature, r.contents.overallDensity).pAbs * 1.005;
       // identity: search tolerance 0.002 K → pressure within 0.1 %
       expectRel(
         p,
@@ -510,9 +510,9 @@ describe('checkTank identities', () => {
     const i = inputs[4]!;
     const r = checkTank(i);
     const ct = closedTank(i.product, i.liquidTemperature, r.contents.overallDensity);
-    expect(r.pressureAbsolute).toBeGreaterThanOrEqual(ct.p);
+    expect(r.pAbs).toBeGreaterThanOrEqual(ct.pAbs);
     // regression: bubble-point approximation vs flash, 70/30 propane/n-butane at 70 % and 80 °F
-    expectRel(r.pressureAbsolute, ct.p, 0.02, {
+    expectRel(r.pAbs, ct.pAbs, 0.02, {
       input: '70/30 blend',
       source: 'core closedTank',
       kind: 'regression',

@@ -49,7 +49,7 @@ describe('checkTank diagnosis', () => {
     expect(r.diagnosis!.verdict).toBe('fits');
     expect(r.diagnosis!.causes).toEqual([]);
     // identity: default band = 2 % of full scale (the design pressure) + 0.5 % of the absolute pressure
-    expectWithin(r.diagnosis!.tolerance, 0.02 * psig(250) + 0.005 * r.pressureAbsolute, 1e-6, {
+    expectWithin(r.diagnosis!.tolerance, 0.02 * psig(250) + 0.005 * r.pAbs, 1e-6, {
       input: 'defaults',
       source: 'checkTank doc',
       kind: 'identity',

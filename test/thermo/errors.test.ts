@@ -282,14 +282,14 @@ describe('core API limits', () => {
   });
 
   it('liquidDensity gives p limits: above 0, then at or above the saturation pressure', () => {
-    expect(limitsOf(() => liquidDensity('propane', 300, 0), 'p')).toEqual({
+    expect(limitsOf(() => liquidDensity('propane', 300, 0), 'pAbs')).toEqual({
       min: 0,
       minExclusive: true,
       max: 1e9,
       quantity: 'pressure',
     });
-    const l = limitsOf(() => liquidDensity('propane', 300, 1e5), 'p');
-    expect(l.min).toBe(saturation('propane', 300).p);
+    const l = limitsOf(() => liquidDensity('propane', 300, 1e5), 'pAbs');
+    expect(l.min).toBe(saturation('propane', 300).pAbs);
     expect(l.quantity).toBe('pressure');
     expect(() => liquidDensity('propane', 300, l.min!)).not.toThrow();
   });

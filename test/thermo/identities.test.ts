@@ -70,12 +70,13 @@ describe('pureSaturation', () => {
     '%s: p_sat rises and ρ_L falls monotonically from the triple point to Tc − 0.5 K',
     (id) => {
       const f = fluidById(id)!;
-      let prev = { p: 0, rhoL: Infinity, rhoV: 0 };
+      let prev = { pAbs: 0, rhoL: Infinity, rhoV: 0 };
       for (let T = f.Ttriple; T <= f.Tc - 0.5; T += (f.Tc - 0.5 - f.Ttriple) / 200) {
         const s = saturation(id, T);
-        expect(s.p > prev.p && s.rhoL < prev.rhoL && s.rhoV > prev.rhoV, `${id} at ${T} K`).toBe(
-          true,
-        );
+        expect(
+          s.pAbs > prev.pAbs && s.rhoL < prev.rhoL && s.rhoV > prev.rhoV,
+          `${id} at ${T} K`,
+        ).toBe(true);
         prev = s;
       }
     },
@@ -96,8 +97,8 @@ describe('closedTank', () => {
         expect(c.phase).toBe('two-phase');
         // Independent of the tank solver: the liquid density at (T, p) from `liquidDensity`
         // and the vapour root of the model at the same (T, p).
-        const rhoL = liquidDensity(id, T, c.p);
-        const rhoV = f.molarMass / pureVolume(m, T, c.p, 'vapour');
+        const rhoL = liquidDensity(id, T, c.pAbs);
+        const rhoV = f.molarMass / pureVolume(m, T, c.pAbs, 'vapour');
         const input = { id, T, rho };
         const why = 'p converged to |Δ ln φ| < 1e-10; the roots move little with p';
         checkClose({
@@ -131,8 +132,8 @@ describe('closedTank', () => {
         });
         // The pressure is the vapour pressure: liquid and vapour fugacities equal there.
         const k = pureCoefficients(m, T);
-        const A = (k.a * c.p) / (R * R * T * T);
-        const B = (k.b * c.p) / (R * T);
+        const A = (k.a * c.pAbs) / (R * R * T * T);
+        const B = (k.b * c.pAbs) / (R * T);
         const roots = compressibilityRoots(m.family, A, B);
         const d = lnPhiPure(m.family, roots[0]!, A, B) - lnPhiPure(m.family, roots.at(-1)!, A, B);
         expect(Math.abs(d), `${id} Δ ln φ at the tank pressure`).toBeLessThan(1e-8);
@@ -149,8 +150,8 @@ describe('closedTank', () => {
         const top = Math.min(2.6 * f.rhoc, maxDensity(id, T));
         for (let rho = 0.05 * f.rhoc; rho < top; rho += 0.02 * f.rhoc) {
           const c = closedTank(id, T, rho);
-          expect(c.p, `${id} T=${T} rho=${rho}`).toBeGreaterThanOrEqual(prev * (1 - 1e-12));
-          prev = c.p;
+          expect(c.pAbs, `${id} T=${T} rho=${rho}`).toBeGreaterThanOrEqual(prev * (1 - 1e-12));
+          prev = c.pAbs;
         }
       }
     },
@@ -167,8 +168,8 @@ describe('closedTank', () => {
     checkClose({
       what: 'p across liquid-full',
       input: { id, T },
-      actual: above.p,
-      expected: below.p,
+      actual: above.pAbs,
+      expected: below.pAbs,
       rtol: 1e-3,
       kind: 'identity',
       source: 'continuity',

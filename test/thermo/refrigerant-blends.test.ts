@@ -64,8 +64,8 @@ describe.each(REFRIGERANT_BLENDS.map((b) => [b.id] as const))(
         const input = { blend: id, T, row: rowKind };
         const t = BLEND_TARGETS;
         const cases = [
-          ['bubble pressure', b.p, +r.p_bubble_Pa!, t.bubble],
-          ['dew pressure', d.p, +r.p_dew_Pa!, t.dew],
+          ['bubble pressure', b.pAbs, +r.p_bubble_Pa!, t.bubble],
+          ['dew pressure', d.pAbs, +r.p_dew_Pa!, t.dew],
           ['bubble liquid density', b.rhoL, +r.rhoL_bubble_kg_m3!, t.rhoL],
           ['dew vapour density', d.rhoV, +r.rhoV_dew_kg_m3!, t.rhoV],
         ] as const;
@@ -180,8 +180,8 @@ describe('blend products by id', () => {
       expect(e.limits?.max).toBe(b.Tmax);
       expect(e.message).toMatch(/dew curve/);
       // and the last offered temperature still solves, with bubble ≥ dew pressure
-      expect(saturation(b.id, b.Tmax).p).toBeGreaterThanOrEqual(
-        dewPoint(b.id, b.Tmax).p * (1 - 1e-6),
+      expect(saturation(b.id, b.Tmax).pAbs).toBeGreaterThanOrEqual(
+        dewPoint(b.id, b.Tmax).pAbs * (1 - 1e-6),
       );
     }
   });

@@ -44,9 +44,9 @@ function computeGlide(product: Product, T: number): Glide | null {
   if (d.components.length < 2) return null;
   try {
     const bubble = saturation(product, T);
-    const pb = bubble.p;
-    const pd = dewPoint(product, T).p;
-    const pb1 = saturation(product, T - 1).p;
+    const pb = bubble.pAbs;
+    const pd = dewPoint(product, T).pAbs;
+    const pb1 = saturation(product, T - 1).pAbs;
     const slope = Math.log(pb / pb1);
     const kelvin = slope > 0 ? Math.log(pb / pd) / slope : 0;
     // Volatile: richer in the incipient vapour than in the liquid (K_i = y_i/x_i > 1).

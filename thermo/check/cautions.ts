@@ -5,6 +5,7 @@
  * caution-text.ts; an app writes each code in its user's words and units. Messages say what the
  * figures show and which limit applies; they never give permission to fill.
  */
+import { checkMinTemperature } from '../limits.js';
 import { CO2_TRIPLE_POINT_PA, cautionMessage } from './caution-text.js';
 import { num, type CautionCode, type MessageParams } from './codes.js';
 import type { ProductModel, State } from './model.js';
@@ -84,24 +85,23 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       fillingDensity: num(r.contents.fillingDensity, 'fraction', 'up'),
     });
   // Reached now: the expected pressure, or the same raised by its allowance (relief temperature).
-  if (r.pressure >= c.reliefSetPressure || r.reliefTemperature === c.T)
-    add('danger', 'relief-now', { pressure: G(r.pressure, 'up'), relief: G(c.reliefSetPressure) });
+  if (r.pGauge >= c.reliefSetPressure || r.reliefTemperature === c.T)
+    add('danger', 'relief-now', { pressure: G(r.pGauge, 'up'), relief: G(c.reliefSetPressure) });
   if (r.phase === 'supercritical')
     add('warning', 'supercritical-now', { temperature: T(c.T), criticalTemperature: Tc });
   const readingAbs = c.gaugePressure === null ? null : c.gaugePressure + baro;
   if (
     k.input.product === 'carbon-dioxide' &&
-    ((readingAbs !== null && readingAbs < CO2_TRIPLE_POINT_PA) ||
-      r.pressureAbsolute < CO2_TRIPLE_POINT_PA)
+    ((readingAbs !== null && readingAbs < CO2_TRIPLE_POINT_PA) || r.pAbs < CO2_TRIPLE_POINT_PA)
   )
     add('danger', 'co2-below-triple-point', {
       threshold: G(CO2_TRIPLE_POINT_PA - baro),
       tripleAbsolute: num(CO2_TRIPLE_POINT_PA, 'pressure'),
     });
   const vacuumRead = c.gaugePressure !== null && c.gaugePressure < 0;
-  if (r.pressure < 0 || vacuumRead)
+  if (r.pGauge < 0 || vacuumRead)
     add('warning', 'vacuum', {
-      pressure: G(vacuumRead ? c.gaugePressure! : r.pressure),
+      pressure: G(vacuumRead ? c.gaugePressure! : r.pGauge),
       source: vacuumRead ? 'reading' : 'expected',
       temperature: T(c.T),
     });
@@ -110,7 +110,7 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
     add('warning', 'below-mdmt', { temperature: T(c.T), mdmt: T(c.mdmt) });
     return;
   }
-  const Tlo = Math.max(k.model.basics.Tmin + 0.01, 150);
+  const Tlo = checkMinTemperature(k.model.basics.Tmin);
   const Tb = saturationTemperature(k.model, baro, [c.T, c.Tpeak], Tlo);
   if (Tb !== null && Tb < c.mdmt)
     add('caution', 'autorefrigeration-below-mdmt', { boiling: T(Tb), mdmt: T(c.mdmt) });
@@ -222,8 +222,8 @@ function readingCautions(r: TankCheckResult, k: CautionContext, add: Add): void 
   if (d && d.verdict !== 'fits')
     add('caution', d.verdict === 'high' ? 'pressure-high' : 'pressure-low', {
       difference: num(d.difference, 'pressureDifference'),
-      reading: G(d.reading),
-      expected: G(d.expected),
+      reading: G(d.readingGauge),
+      expected: G(d.expectedGauge),
       temperature: T(c.T),
       tolerance: num(d.tolerance, 'pressureDifference'),
       ...(d.causeCodes[0] ? { cause: d.causeCodes[0] } : {}),
@@ -253,5 +253,5 @@ function noticeCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       model: num(k.sgModel, null),
     });
   if (c.Tpeak < c.T) add('notice', 'peak-below-now', { peak: T(c.Tpeak), temperature: T(c.T) });
-  if (!k.model.basics.pure) add('notice', 'blend-bubble-point', { pressure: G(r.pressure, 'up') });
+  if (!k.model.basics.pure) add('notice', 'blend-bubble-point', { pressure: G(r.pGauge, 'up') });
 }

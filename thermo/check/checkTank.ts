@@ -9,6 +9,7 @@
  */
 import { ConvergenceError, InputError } from '../errors.js';
 import { T_60F_K } from '../constants.js';
+import { T_CHECK_MAX_K, checkMinTemperature } from '../limits.js';
 import { fullKind, pressureAllowance } from './full.js';
 import { isLpGas } from '../rules/gases.js';
 import { WATER_FD_KG_M3, WATER_SG_KG_M3 } from '../rules/water.js';
@@ -23,7 +24,7 @@ import {
 } from './search.js';
 import { STANDING_CAUTION } from './standing.js';
 import type { PeakResult, TankCheckInput, TankCheckResult } from './types.js';
-import { T_CHECK_MAX_K, validateInput, type CleanInput } from './validate.js';
+import { validateInput, type CleanInput } from './validate.js';
 
 /** x rounded down / up to a multiple of step (steps are powers of ten; dividing by 1/step keeps 0.01 steps exact). */
 const floorTo = (x: number, step: number) =>
@@ -33,11 +34,11 @@ const ceilTo = (x: number, step: number) =>
 /** Pressures are rounded to 100 Pa (0.015 psi): up for pressures, down for headroom. */
 const P_STEP = 100;
 
-/** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
 /** The fields of `TankCheckInput` an `InputError` may name (dotted, as in the input). */
 const INPUT_FIELD =
   /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature)$/;
 
+/** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
 export function checkTank(input: TankCheckInput): TankCheckResult {
   try {
     return check(input);
@@ -69,8 +70,114 @@ function check(input: TankCheckInput): TankCheckResult {
   const c = validateInput(input);
   const model = new ProductModel(input.product);
   const b = model.basics;
-  const Tlo = Math.max(b.Tmin + 0.01, 150);
-  const tRange = `from ${Tlo.toFixed(2)} K (this product's lower limit) to 400 K`;
+  const Tlo = productFloor(model, c);
+  const lpGas = isLpGas(input.product);
+  const sgModel = b.rho60 / WATER_SG_KG_M3;
+  const sg = c.specificGravity ?? sgModel;
+
+  // --- Contents now: overall density ρ = m / V. ---
+  const satNow = model.sat(c.T);
+  const shape = input.tank.shape;
+  const rho = overallDensity(model, c, input, Tlo);
+  const shapeVolume = shape ? totalVolume(shape) : null;
+
+  const now = model.state(c.T, rho);
+  const totalMass = rho * c.V;
+  const waterWeight = c.V * WATER_FD_KG_M3;
+
+  // --- Fill limit (fillLimit.ts). ---
+  const { fillLimit, ruleFound, skippedRefs } = computeFillLimit({
+    model,
+    product: input.product,
+    c,
+    sg,
+    satNow,
+    totalMass,
+    waterWeight,
+    recovery: input.tank.recovery,
+  });
+
+  // --- Peak. ---
+  const peakState = c.Tpeak === c.T ? now : peakStateOf(model, c, rho);
+  const peak = buildPeak(peakState, c, rho, b.rhoc);
+
+  // --- Liquid-full and relief temperatures. ---
+  const { liquidFullTemperature, reliefTemperature } = searchTemperatures(model, c, rho, Tlo);
+
+  // --- Diagnosis. ---
+  const diagnosis = c.gaugePressure === null ? null : diagnose(model, c, now, lpGas, Tlo);
+
+  const result: TankCheckResult = {
+    phase: now.phase,
+    full: fullKind(now, rho, b.rhoc),
+    pGauge: ceilTo(now.pAbs - c.baro, P_STEP),
+    pAbs: now.pAbs,
+    barometricPressure: c.baro,
+    product: productSummary(b, lpGas, sg, c.specificGravity === null),
+    contents: contentsOf(now, c, rho, shape, b.rho60),
+    fillLimit,
+    peak,
+    liquidFullTemperature,
+    reliefTemperature,
+    diagnosis,
+    cautions: [],
+    standingCaution: STANDING_CAUTION,
+  };
+  const peakAllowance = pressureAllowance(peakState, rho, b.rhoc);
+  const peakRaised = peakState.pAbs * (1 + peakAllowance) - c.baro;
+  result.cautions = buildCautions(result, {
+    input,
+    clean: c,
+    now,
+    model,
+    rule: ruleFound,
+    sgModel,
+    skippedRefs,
+    shapeVolume,
+    T60: T_60F_K,
+    peakAllowance,
+    peakRaised,
+  });
+  return result;
+}
+
+/** The liquid-full temperature and the relief temperature of this fill, K (or null). */
+function searchTemperatures(model: ProductModel, c: CleanInput, rho: number, Tlo: number) {
+  const hints = [c.T, c.Tpeak];
+  const rhoc = model.basics.rhoc;
+  const liquidFullTemperature = findLiquidFullTemperature(model, rho, hints, Tlo);
+  const reliefTemperature = findReliefTemperature(
+    model,
+    rho,
+    c.reliefSetPressure + c.baro,
+    (s) => pressureAllowance(s, rho, rhoc),
+    c.T,
+    liquidFullTemperature,
+    hints,
+  );
+  return { liquidFullTemperature, reliefTemperature };
+}
+
+function productSummary(
+  b: ProductModel['basics'],
+  lpGas: boolean,
+  sg: number,
+  sgFromModel: boolean,
+): TankCheckResult['product'] {
+  return {
+    label: b.label,
+    lpGas,
+    specificGravity: sg,
+    specificGravitySource: sgFromModel ? 'model' : 'entered',
+    liquidDensityAt60F: b.rho60,
+    criticalTemperature: b.Tc,
+  };
+}
+
+/** This product's lowest check temperature, K; refuses liquid or peak temperatures below it. */
+function productFloor(model: ProductModel, c: CleanInput): number {
+  const Tlo = checkMinTemperature(model.basics.Tmin);
+  const tRange = `from ${Tlo.toFixed(2)} K (this product's lower limit) to ${T_CHECK_MAX_K} K`;
   const tLimits = {
     min: Tlo,
     max: T_CHECK_MAX_K,
@@ -80,15 +187,18 @@ function check(input: TankCheckInput): TankCheckResult {
   if (c.T < Tlo) throw new InputError('liquidTemperature', tRange, c.T, tLimits);
   if (c.Tpeak < Tlo) throw new InputError('peakTemperature', tRange, c.Tpeak, tLimits);
 
-  const lpGas = isLpGas(input.product);
-  const sgModel = b.rho60 / WATER_SG_KG_M3;
-  const sg = c.specificGravity ?? sgModel;
+  return Tlo;
+}
 
-  // --- Contents now: overall density ρ = m / V. ---
+/** Overall density of the contents now, kg/m³ (mass ÷ tank volume), from the contents read. */
+function overallDensity(
+  model: ProductModel,
+  c: CleanInput,
+  input: TankCheckInput,
+  Tlo: number,
+): number {
   const satNow = model.sat(c.T);
   const shape = input.tank.shape;
-  let rho: number;
-  let shapeVolume: number | null = null;
   const contents = input.contents;
   if ('netMass' in contents) {
     const cap = netMassCap(model, c);
@@ -106,7 +216,7 @@ function check(input: TankCheckInput): TankCheckResult {
       );
     }
     // An empty tank still holds a trace of vapour; 1e-6 kg/m³ keeps the state defined.
-    rho = Math.max(contents.netMass / c.V, 1e-6);
+    return Math.max(contents.netMass / c.V, 1e-6);
   } else {
     if (!satNow) {
       // The level reading is fine; the liquid temperature is past where a liquid surface
@@ -134,30 +244,13 @@ function check(input: TankCheckInput): TankCheckResult {
         );
       f = fractionAtLevel(shape!, contents.levelHeight);
     }
-    rho = f * satNow.rhoL + (1 - f) * satNow.rhoV;
+    return f * satNow.rhoL + (1 - f) * satNow.rhoV;
   }
-  if (shape) shapeVolume = totalVolume(shape);
+}
 
-  const now = model.state(c.T, rho);
-  const totalMass = rho * c.V;
-  const liquidMass = now.rhoL !== null ? now.lf * c.V * now.rhoL : 0;
-  const vapourMass = Math.max(0, totalMass - liquidMass);
-  const waterWeight = c.V * WATER_FD_KG_M3;
-
-  // --- Fill limit (fillLimit.ts). ---
-  const { fillLimit, ruleFound, skippedRefs } = computeFillLimit({
-    model,
-    product: input.product,
-    c,
-    sg,
-    satNow,
-    totalMass,
-    waterWeight,
-    recovery: input.tank.recovery,
-  });
-
-  // --- Peak. ---
-  const peakState = c.Tpeak === c.T ? now : model.stateOrNull(c.Tpeak, rho);
+/** The closed-tank state at the peak temperature; refuses a peak the model cannot hold the fill at. */
+function peakStateOf(model: ProductModel, c: CleanInput, rho: number): State {
+  const peakState = model.stateOrNull(c.Tpeak, rho);
   if (!peakState) {
     const Tmax = model.maxTemperatureFor(rho, c.T, c.Tpeak);
     throw new InputError(
@@ -171,25 +264,22 @@ function check(input: TankCheckInput): TankCheckResult {
       },
     );
   }
-  const peak = buildPeak(peakState, c, rho, b.rhoc);
+  return peakState;
+}
 
-  // --- Liquid-full and relief temperatures. ---
-  const hints = [c.T, c.Tpeak];
-  const liquidFullTemperature = findLiquidFullTemperature(model, rho, hints, Tlo);
-  const reliefTemperature = findReliefTemperature(
-    model,
-    rho,
-    c.reliefSetPressure + c.baro,
-    (s) => pressureAllowance(s, rho, b.rhoc),
-    c.T,
-    liquidFullTemperature,
-    hints,
-  );
-
-  // --- Diagnosis. ---
-  const diagnosis = c.gaugePressure === null ? null : diagnose(model, c, now, lpGas, Tlo);
-
-  const contentsResult = {
+/** The contents now: volumes, masses, filling density. */
+function contentsOf(
+  now: State,
+  c: CleanInput,
+  rho: number,
+  shape: TankCheckInput['tank']['shape'],
+  rho60: number,
+): TankCheckResult['contents'] {
+  const totalMass = rho * c.V;
+  const liquidMass = now.rhoL !== null ? now.lf * c.V * now.rhoL : 0;
+  const vapourMass = Math.max(0, totalMass - liquidMass);
+  const waterWeight = c.V * WATER_FD_KG_M3;
+  return {
     liquidVolume: now.lf * c.V,
     liquidPercent: now.lf * 100,
     levelHeight: shape && now.phase !== 'supercritical' ? levelAtFraction(shape, now.lf) : null,
@@ -197,47 +287,9 @@ function check(input: TankCheckInput): TankCheckResult {
     vapourMass,
     totalMass,
     fillingDensity: totalMass / waterWeight,
-    liquidVolumeAt60F: liquidMass / b.rho60,
+    liquidVolumeAt60F: liquidMass / rho60,
     overallDensity: rho,
   };
-
-  const result: TankCheckResult = {
-    phase: now.phase,
-    full: fullKind(now, rho, b.rhoc),
-    pressure: ceilTo(now.pAbs - c.baro, P_STEP),
-    pressureAbsolute: now.pAbs,
-    barometricPressure: c.baro,
-    product: {
-      label: b.label,
-      lpGas,
-      specificGravity: sg,
-      specificGravitySource: c.specificGravity === null ? 'model' : 'entered',
-      liquidDensityAt60F: b.rho60,
-      criticalTemperature: b.Tc,
-    },
-    contents: contentsResult,
-    fillLimit,
-    peak,
-    liquidFullTemperature,
-    reliefTemperature,
-    diagnosis,
-    cautions: [],
-    standingCaution: STANDING_CAUTION,
-  };
-  result.cautions = buildCautions(result, {
-    input,
-    clean: c,
-    now,
-    model,
-    rule: ruleFound,
-    sgModel,
-    skippedRefs,
-    shapeVolume,
-    T60: T_60F_K,
-    peakAllowance: pressureAllowance(peakState, rho, b.rhoc),
-    peakRaised: peakState.pAbs * (1 + pressureAllowance(peakState, rho, b.rhoc)) - c.baro,
-  });
-  return result;
 }
 
 function netMassCap(model: ProductModel, c: CleanInput): number {
@@ -254,8 +306,8 @@ function buildPeak(s: State, c: CleanInput, rho: number, rhoc: number): PeakResu
     temperature: c.Tpeak,
     phase: s.phase,
     full: fullKind(s, rho, rhoc),
-    p: ceilTo(s.pAbs - c.baro, P_STEP),
-    pAbsolute: s.pAbs,
+    pGauge: ceilTo(s.pAbs - c.baro, P_STEP),
+    pAbs: s.pAbs,
     liquidFraction: s.lf,
     headroomToDesign: floorTo(c.designPressure - raised, P_STEP),
     headroomToRelief: floorTo(c.reliefSetPressure - raised, P_STEP),

@@ -29,7 +29,7 @@ export function propaneSplit(T: number, pAbs: number): number | null {
   const s3 = propane.sat(T);
   const s4 = butane.sat(T);
   if (!s3 || !s4) return null;
-  const x = (pAbs - s4.p) / (s3.p - s4.p);
+  const x = (pAbs - s4.pAbs) / (s3.pAbs - s4.pAbs);
   // Within 2 points of an end the reading fits the pure fluid at that end (gauge and model error).
   if (x > 1 && x <= 1.02) return 1;
   if (x < 0 && x >= -0.02) return 0;
@@ -68,8 +68,8 @@ export function diagnose(
   const temperatureForReading =
     readingAbs > 0 ? saturationTemperature(model, readingAbs, [c.T, c.Tpeak], Tlo) : null;
   return {
-    reading,
-    expected,
+    readingGauge: reading,
+    expectedGauge: expected,
     difference,
     tolerance,
     verdict,

@@ -14,11 +14,13 @@ import { closedTank, describeProduct, maxDensity, saturation } from '../api.js';
 import { ConvergenceError, InputError } from '../errors.js';
 import type { Product } from '../product.js';
 import { T_15C_K, T_60F_K } from '../constants.js';
+import { bisectBoundary } from '../solvers/root.js';
+import { T_CHECK_MAX_K, checkMinTemperature } from '../limits.js';
 import type { TankPhase } from './types.js';
 
 export interface Sat {
   /** Pa absolute */
-  p: number;
+  pAbs: number;
   rhoL: number;
   rhoV: number;
 }
@@ -100,8 +102,8 @@ export function productBasics(product: Product): ProductBasics {
 /** Top of each product's saturation curve, K (memoised by the product's JSON). */
 const topCache = new Map<string, number>();
 
-/** Highest temperature the check looks at, K (as search.ts T_SEARCH_MAX). */
-const T_TOP_K = 400;
+/** Highest temperature the check looks at, K. */
+const T_TOP_K = T_CHECK_MAX_K;
 
 /**
  * Per product (by its JSON): saturation states by temperature and the two-phase ends by
@@ -148,20 +150,14 @@ export class ProductModel {
    */
   satTop(): number {
     const b = this.basics;
-    if (b.pure) return Math.min(400, b.Tc - 0.5);
+    if (b.pure) return Math.min(T_TOP_K, b.Tc - 0.5);
     const key = JSON.stringify(this.product);
     const hit = topCache.get(key);
     if (hit !== undefined) return hit;
-    let lo = T_60F_K; // a liquefied gas has a bubble point at 60 °F (productBasics checked it)
-    let hi = 400;
-    if (this.sat(hi)) lo = hi;
-    else {
-      while (hi - lo > 0.01) {
-        const mid = 0.5 * (lo + hi);
-        if (this.sat(mid)) lo = mid;
-        else hi = mid;
-      }
-    }
+    // A liquefied gas has a bubble point at 60 °F (productBasics checked it).
+    const lo = this.sat(T_TOP_K)
+      ? T_TOP_K
+      : bisectBoundary((T) => this.sat(T) !== null, T_60F_K, T_TOP_K, 0.01).x;
     if (topCache.size > 200) topCache.clear();
     topCache.set(key, lo);
     return lo;
@@ -175,7 +171,7 @@ export class ProductModel {
     if (!(this.basics.pure && T > this.basics.Tc - 0.5)) {
       try {
         const r = saturation(this.product, T);
-        s = { p: r.p, rhoL: r.rhoL, rhoV: r.rhoV };
+        s = { pAbs: r.pAbs, rhoL: r.rhoL, rhoV: r.rhoV };
       } catch (e) {
         // No bubble point (the core says which T) or none found near a blend's critical
         // region: no saturation state here, as the core's own closed tank treats it.
@@ -204,15 +200,8 @@ export class ProductModel {
 
   /** Highest temperature in [Tlo, Thi] at which the model can hold overall density rho, K (bisection on the core's limit). */
   maxTemperatureFor(rho: number, Tlo: number, Thi: number): number {
-    let lo = Tlo;
-    let hi = Thi;
-    if (rho <= maxDensity(this.product, hi)) return hi;
-    for (let i = 0; i < 50 && hi - lo > 1e-3; i++) {
-      const mid = 0.5 * (lo + hi);
-      if (rho <= maxDensity(this.product, mid)) lo = mid;
-      else hi = mid;
-    }
-    return lo;
+    if (rho <= maxDensity(this.product, Thi)) return Thi;
+    return bisectBoundary((T) => rho <= maxDensity(this.product, T), Tlo, Thi, 1e-3).x;
   }
 
   /** Closed-tank state at T for overall density rho (kg/m³). */
@@ -222,7 +211,7 @@ export class ProductModel {
     if (s && rho < s.rhoL && rho > s.rhoV) {
       return {
         phase: 'two-phase',
-        pAbs: s.p,
+        pAbs: s.pAbs,
         lf: (rho - s.rhoV) / (s.rhoL - s.rhoV),
         rhoL: s.rhoL,
         rhoV: s.rhoV,
@@ -237,7 +226,7 @@ export class ProductModel {
       return {
         ...c,
         phase: 'liquid-full',
-        pAbs: Math.max(c.pAbs, s.p),
+        pAbs: Math.max(c.pAbs, s.pAbs),
         lf: 1,
         rhoL: rho,
         rhoV: null,
@@ -256,7 +245,7 @@ export class ProductModel {
     const c = closedTank(this.product, T, rho);
     return {
       phase: PHASE[c.phase] ?? 'supercritical',
-      pAbs: c.p,
+      pAbs: c.pAbs,
       lf: c.liquidFraction,
       rhoL: c.rhoL,
       rhoV: c.rhoV,
@@ -283,50 +272,12 @@ export class ProductModel {
     }
     // Bisection over the whole range searched (not up to T), so every call for this density
     // finds the same end and the floor cannot wobble with T.
-    let lo = Math.max(this.basics.Tmin + 0.01, 150);
-    let hi = T_TOP_K;
+    const lo = checkMinTemperature(this.basics.Tmin);
+    const hi = T_TOP_K;
     if (lo >= T || !this.twoPhaseAt(lo, rho) || this.twoPhaseAt(hi, rho)) return null;
-    while (hi - lo > 0.001) {
-      const mid = 0.5 * (lo + hi);
-      if (this.twoPhaseAt(mid, rho)) lo = mid;
-      else hi = mid;
-    }
-    const end = { T: lo, p: this.sat(lo)!.p };
+    const Tend = bisectBoundary((T) => this.twoPhaseAt(T, rho), lo, hi, 0.001).x;
+    const end = { T: Tend, p: this.sat(Tend)!.pAbs };
     this.ends.set(rho, end);
     return end;
   }
-}
-
-/**
- * Root of an increasing-or-decreasing function on [a, b] with f(a), f(b) of opposite signs:
- * Illinois regula falsi, stopping when the bracket is narrower than tol.
- */
-export function bracketRoot(
-  f: (x: number) => number,
-  a: number,
-  fa: number,
-  b: number,
-  fb: number,
-  tol: number,
-): number {
-  let side = 0;
-  for (let i = 0; i < 60; i++) {
-    if (Math.abs(b - a) < tol) break;
-    let x = (a * fb - b * fa) / (fb - fa);
-    if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = 0.5 * (a + b);
-    const fx = f(x);
-    if (fx === 0) return x;
-    if (Math.sign(fx) === Math.sign(fb)) {
-      b = x;
-      fb = fx;
-      if (side === -1) fa /= 2;
-      side = -1;
-    } else {
-      a = x;
-      fa = fx;
-      if (side === 1) fb /= 2;
-      side = 1;
-    }
-  }
-  return Math.abs(fa) < Math.abs(fb) ? a : b;
 }

@@ -12,10 +12,12 @@
  * All stop at 0.005 K or better, far inside the ±1 °F the results are shown to.
  */
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
-import { bracketRoot, type ProductModel, type State } from './model.js';
+import { bracketedRoot } from '../solvers/root.js';
+import { T_CHECK_MAX_K } from '../limits.js';
+import type { ProductModel, State } from './model.js';
 
 /** Highest temperature searched, K. */
-export const T_SEARCH_MAX = 400;
+const T_SEARCH_MAX = T_CHECK_MAX_K;
 
 /** Upper end of the saturation curve searched, K (see ProductModel.satTop). */
 export function satTop(model: ProductModel): number {
@@ -52,7 +54,12 @@ function solveIncreasing(
         const v = f(x);
         return v === null ? Math.abs(above![1]) : v;
       };
-      return bracketRoot(fx, below[0], below[1], above[0], above[1], tol);
+      return bracketedRoot(fx, below[0], above[0], {
+        name: 'check temperature search',
+        fa: below[1],
+        fb: above[1],
+        xTol: tol,
+      }).x;
     }
     if (below && above && above[0] - below[0] < tol) return below[0];
     let x: number;
@@ -91,18 +98,18 @@ export function saturationTemperature(
   // Increasing in −1/T: x = −1/T, y = ln(p/pAbs).
   const f = (x: number) => {
     const s = model.sat(-1 / x);
-    return s ? Math.log(s.p / pAbs) : null;
+    return s ? Math.log(s.pAbs / pAbs) : null;
   };
   const hints: [number, number][] = [];
   for (const T of hintsT) {
     if (T < Tlo || T > Thi) continue;
     const s = model.sat(T);
-    if (s) hints.push([-1 / T, Math.log(s.p / pAbs)]);
+    if (s) hints.push([-1 / T, Math.log(s.pAbs / pAbs)]);
   }
   if (hints.length === 0) {
     const s = model.sat(Tlo);
     if (!s) return null;
-    hints.push([-1 / Tlo, Math.log(s.p / pAbs)]);
+    hints.push([-1 / Tlo, Math.log(s.pAbs / pAbs)]);
   }
   const x = solveIncreasing(f, hints, -1 / Tlo, -1 / Thi, 1e-8);
   if (x === null) return null;

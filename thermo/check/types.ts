@@ -2,8 +2,11 @@
  * Input and result of `checkTank`: from a tank's nameplate and today's readings to its
  * contents, fill limit, peak-day pressure, a gauge diagnosis and ranked cautions.
  *
- * Units: SI everywhere — K, Pa, kg, m³, m, kg/m³. Pressures named `…Pressure` or `p` are
- * **gauge** (Pa above the site barometric pressure) unless the name ends in `Absolute`.
+ * Units: SI everywhere — K, Pa, kg, m³, m, kg/m³. Every pressure of the result says its
+ * reference in its name: `pGauge`, `readingGauge`, `expectedGauge` (Pa above the site barometric
+ * pressure) or `pAbs` (Pa absolute). Input fields keep the names stored records carry: the
+ * tank's `designPressure` and `reliefSetPressure` and the reading `gaugePressure` are gauge,
+ * `barometricPressure` is absolute, as each field's comment says.
  * Convert user units with `thermo/units.ts` only.
  */
 import type { Product } from '../product.js';
@@ -281,9 +284,9 @@ export interface PeakResult {
   /** `liquid` when liquid-full at the peak, `dense-fluid` when above the critical temperature with contents denser than the critical density (as hazardous as liquid-full), else null. */
   full: FullKind | null;
   /** Expected pressure at the peak, Pa gauge (rounded up to 100 Pa). */
-  p: number;
+  pGauge: number;
   /** Same, Pa absolute. */
-  pAbsolute: number;
+  pAbs: number;
   /** Liquid volume ÷ tank volume at the peak, fraction 0…1. */
   liquidFraction: number;
   /** Design pressure − peak pressure raised by the model's vapour-pressure allowance, Pa (rounded down; negative when exceeded). */
@@ -294,9 +297,9 @@ export interface PeakResult {
 
 export interface DiagnosisResult {
   /** The entered reading, Pa gauge. */
-  reading: number;
+  readingGauge: number;
   /** Expected pressure at the entered liquid temperature, Pa gauge. */
-  expected: number;
+  expectedGauge: number;
   /** reading − expected, Pa. */
   difference: number;
   /** Allowed band, ± Pa (gauge accuracy × full scale plus the model's vapour-pressure allowance). */
@@ -322,9 +325,9 @@ export interface TankCheckResult {
   /** `liquid` when liquid-full now, `dense-fluid` when full of dense fluid now (see `PeakResult.full`), else null. */
   full: FullKind | null;
   /** Expected pressure now, Pa gauge (model, at the entered liquid temperature; rounded up to 100 Pa). */
-  pressure: number;
+  pGauge: number;
   /** Expected pressure now, Pa absolute. */
-  pressureAbsolute: number;
+  pAbs: number;
   /** The barometric pressure used, Pa absolute. */
   barometricPressure: number;
   product: ProductSummary;

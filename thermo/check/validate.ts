@@ -4,6 +4,8 @@
  * possible-but-odd values pass and become cautions later.
  */
 import { InputError } from '../errors.js';
+import { P_ATM_Pa } from '../constants.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../limits.js';
 import type { Quantity } from '../units.js';
 import { tankHeight, validateShape } from '../tank/geometry.js';
 import { barometricPressureAtElevation } from '../units.js';
@@ -55,10 +57,6 @@ function optBool(field: string, x: unknown): boolean {
   return x;
 }
 
-/** Temperatures the check accepts, K (the product's own lower bound is checked separately). */
-export const T_CHECK_MIN_K = 150;
-export const T_CHECK_MAX_K = 400;
-
 export function validateInput(input: TankCheckInput): CleanInput {
   if (!input || typeof input !== 'object')
     throw new InputError(
@@ -66,7 +64,41 @@ export function validateInput(input: TankCheckInput): CleanInput {
       'an object { tank, product, liquidTemperature, contents, peakTemperature }',
       input,
     );
-  const tank = input.tank;
+  const tank = validateTank(input.tank);
+  const site = validateConditions(input);
+  const gauge = validateGauge(input, site.baro, tank.designPressure);
+  const specificGravity =
+    input.specificGravity === undefined
+      ? null
+      : num(
+          'specificGravity',
+          input.specificGravity,
+          0.2,
+          2,
+          'from 0.2 to 2 (liquid, 60/60 °F)',
+          undefined,
+        );
+
+  validateContents(input.contents, input.tank.shape);
+  return { ...tank, ...site, ...gauge, specificGravity };
+}
+
+type TankPart = Pick<
+  CleanInput,
+  | 'V'
+  | 'designPressure'
+  | 'reliefSetPressure'
+  | 'reliefGiven'
+  | 'placement'
+  | 'insulated'
+  | 'containerClass'
+  | 'fixedDipTube'
+  | 'fillMethod'
+  | 'mdmt'
+>;
+
+/** The tank's nameplate and how it is filled. */
+function validateTank(tank: TankCheckInput['tank']): TankPart {
   if (!tank || typeof tank !== 'object')
     throw new InputError('tank', 'an object { waterCapacity, designPressure, … }', tank);
   const V = num(
@@ -125,6 +157,22 @@ export function validateInput(input: TankCheckInput): CleanInput {
           'temperature',
         );
 
+  return {
+    V,
+    designPressure,
+    reliefSetPressure,
+    reliefGiven,
+    placement,
+    insulated,
+    containerClass,
+    fixedDipTube,
+    fillMethod,
+    mdmt,
+  };
+}
+
+/** Liquid and peak temperatures and the site's barometric pressure (absolute). */
+function validateConditions(input: TankCheckInput): Pick<CleanInput, 'T' | 'Tpeak' | 'baro'> {
   const range = `from ${T_CHECK_MIN_K} to ${T_CHECK_MAX_K} K`;
   const T = num(
     'liquidTemperature',
@@ -156,8 +204,17 @@ export function validateInput(input: TankCheckInput): CleanInput {
   } else if (input.elevation !== undefined) {
     const z = num('elevation', input.elevation, -500, 11_000, 'from −500 to 11 000 m', 'length');
     baro = barometricPressureAtElevation(z);
-  } else baro = 101_325;
+  } else baro = P_ATM_Pa;
 
+  return { T, Tpeak, baro };
+}
+
+/** The pressure reading (gauge) and the gauge that gave it. */
+function validateGauge(
+  input: TankCheckInput,
+  baro: number,
+  designPressure: number,
+): Pick<CleanInput, 'gaugePressure' | 'fullScale' | 'accuracy'> {
   const gaugePressure =
     input.gaugePressure === undefined
       ? null
@@ -194,19 +251,11 @@ export function validateInput(input: TankCheckInput): CleanInput {
           'a fraction of full scale from 0 to 0.2',
           'fraction',
         );
-  const specificGravity =
-    input.specificGravity === undefined
-      ? null
-      : num(
-          'specificGravity',
-          input.specificGravity,
-          0.2,
-          2,
-          'from 0.2 to 2 (liquid, 60/60 °F)',
-          undefined,
-        );
+  return { gaugePressure, fullScale, accuracy };
+}
 
-  const c = input.contents;
+/** Exactly one way of reading the contents, in its range. */
+function validateContents(c: TankCheckInput['contents'], shape: TankCheckInput['tank']['shape']) {
   if (!c || typeof c !== 'object')
     throw new InputError('contents', 'one of { gaugePercent }, { netMass }, { levelHeight }', c);
   const keys = ['gaugePercent', 'netMass', 'levelHeight'].filter((k) => k in c);
@@ -221,7 +270,7 @@ export function validateInput(input: TankCheckInput): CleanInput {
   if ('netMass' in c)
     num('contents.netMass', c.netMass, 0, 1e8, 'from 0 to 100 000 000 kg', 'mass');
   if ('levelHeight' in c) {
-    if (tank.shape === undefined)
+    if (shape === undefined)
       throw new InputError(
         'tank.shape',
         'given when contents.levelHeight is used (the level needs the tank shape)',
@@ -233,28 +282,9 @@ export function validateInput(input: TankCheckInput): CleanInput {
       // (checkTank refuses a level above it), as the words say.
       throw new InputError('contents.levelHeight', 'from 0 m to the inside height of the tank', h, {
         min: 0,
-        max: tankHeight(tank.shape),
+        max: tankHeight(shape),
         quantity: 'length',
       });
     }
   }
-  return {
-    V,
-    designPressure,
-    reliefSetPressure,
-    reliefGiven,
-    placement,
-    insulated,
-    containerClass,
-    fixedDipTube,
-    fillMethod,
-    mdmt,
-    T,
-    Tpeak,
-    baro,
-    gaugePressure,
-    fullScale,
-    accuracy,
-    specificGravity,
-  };
 }

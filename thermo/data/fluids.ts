@@ -31,7 +31,7 @@ export interface FluidConstants {
   readonly Tb: number | null;
   /** Rackett compressibility Z_RA (Hankinson & Thomson 1979 table), null where none. */
   readonly zRA: number | null;
-  /** Key into `SOURCES` for the reference equation of state these constants belong to. */
+  /** Key into `SOURCES` (data/sources.ts) for the reference equation of state these constants belong to. */
   readonly source: string;
 }
 

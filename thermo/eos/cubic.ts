@@ -12,6 +12,7 @@
  * Ωa and Ωb are not the rounded textbook figures: they are solved here from the critical
  * conditions (the cubic in Z has a triple root at the critical point), to machine precision.
  */
+import { bracketedRoot } from '../solvers/root.js';
 
 export interface CubicFamily {
   readonly name: 'PR' | 'SRK';
@@ -28,7 +29,7 @@ export interface CubicFamily {
 /**
  * Critical constants of a cubic family from the triple-root condition:
  *   −3Zc = (u − 1)·B − 1,  3Zc² = A + w·B² − u·B·(B + 1),  Zc³ = A·B + w·B²·(B + 1).
- * Eliminating Zc and A leaves one equation in B = Ωb, solved by bisection on (0, 1/3).
+ * Eliminating Zc and A leaves one equation in B = Ωb, solved by `bracketedRoot` on (0, 1/3).
  */
 export function criticalConstants(
   delta1: number,
@@ -41,25 +42,10 @@ export function criticalConstants(
     const A = 3 * Zc * Zc - w * B * B + u * B * (B + 1);
     return { Zc, A, residual: A * B + w * B * B * (B + 1) - Zc * Zc * Zc };
   };
-  let lo = 1e-6;
-  let hi = 1 / 3;
-  let fLo = parts(lo).residual;
-  for (let i = 0; i < 200; i++) {
-    const mid = 0.5 * (lo + hi);
-    const fMid = parts(mid).residual;
-    if (fMid === 0) {
-      lo = hi = mid;
-      break;
-    }
-    if (fMid > 0 === fLo > 0) {
-      lo = mid;
-      fLo = fMid;
-    } else {
-      hi = mid;
-    }
-    if (hi - lo < 1e-17) break;
-  }
-  const B = 0.5 * (lo + hi);
+  const B = bracketedRoot((x) => parts(x).residual, 1e-6, 1 / 3, {
+    name: 'cubic critical constants',
+    xTol: 1e-16,
+  }).x;
   const { Zc, A } = parts(B);
   return { omegaA: A, omegaB: B, Zc };
 }

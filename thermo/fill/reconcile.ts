@@ -103,8 +103,8 @@ function reconcile(c: CleanFill): FillReconciliation {
     overVolume: overMass > 0 ? ceilTo(overMass / satAfter.rhoL, 1e-6) : 0,
     pressure: d
       ? {
-          reading: d.reading,
-          expected: d.expected,
+          reading: d.readingGauge,
+          expected: d.expectedGauge,
           difference: d.difference,
           tolerance: d.tolerance,
           verdict: d.verdict,

@@ -7,7 +7,8 @@ import { InputError } from '../errors.js';
 import type { Quantity } from '../units.js';
 import { describeProduct } from '../api.js';
 import type { TankCheckInput } from '../check/types.js';
-import { T_CHECK_MAX_K, T_CHECK_MIN_K, validateInput } from '../check/validate.js';
+import { validateInput } from '../check/validate.js';
+import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../limits.js';
 import { FILL_ACCURACY_DEFAULTS, FILL_ACCURACY_LIMITS } from './defaults.js';
 import type { FillInput, FillStart, MeterBasis } from './types.js';
 
@@ -146,7 +147,7 @@ const SOURCES = ['gaugePercent', 'levelHeight', 'netMass'] as const;
 const PHASES = ['two-phase', 'liquid-full', 'vapour-only', 'supercritical'] as const;
 
 /** Throws unless `x` is a well-formed `FillStart` (the shape `startFill` makes). */
-export function validateFillStart(x: unknown, field: string): asserts x is FillStart {
+function validateFillStart(x: unknown, field: string): asserts x is FillStart {
   if (!isObject(x)) throw new InputError(field, 'an object { check, before, startedAt }', x);
   if (!isObject(x.check) || !isObject(x.check.tank))
     throw new InputError(`${field}.check`, 'the tank check input the fill started from', x.check);

@@ -18,15 +18,24 @@ import { ConvergenceError } from '../errors.js';
 import type { ResolvedProduct } from '../product.js';
 import { R_J_molK } from '../constants.js';
 import { pressureForVolume } from './inverse.js';
-import { flashPT, mixtureAtT, phaseAt, saturationPointAt, type MixtureAtT } from './mixture.js';
+import {
+  flashPT,
+  mixtureAtT,
+  phaseAt,
+  saturationPointAt,
+  type FlashResult,
+  type MixtureAtT,
+  type SaturationPoint,
+} from './mixture.js';
 import { pureSaturation, volumeAlong } from './pure.js';
+import { bracketedRoot } from './root.js';
 
 export type Phase = 'two-phase' | 'liquid' | 'vapour' | 'supercritical';
 
 export interface ClosedTankState {
   phase: Phase;
   /** Absolute pressure, Pa. */
-  p: number;
+  pAbs: number;
   /** Liquid volume ÷ tank volume (1 when liquid-full). */
   liquidFraction: number;
   /** Density of the liquid present, kg/m³ (null when there is none). */
@@ -88,7 +97,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
         const p = pressureForVolume(volumeAlong(m, T, 'liquid'), v, sat.p * 1.05, sat.p).p;
         return {
           phase: 'liquid',
-          p: onSide(p, sat.p, 'above', T),
+          pAbs: onSide(p, sat.p, 'above', T),
           liquidFraction: 1,
           rhoL: rho,
           rhoV: null,
@@ -108,7 +117,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
         ).p;
         return {
           phase: 'vapour',
-          p: onSide(p, sat.p, 'below', T),
+          pAbs: onSide(p, sat.p, 'below', T),
           liquidFraction: 0,
           rhoL: null,
           rhoV: rho,
@@ -121,7 +130,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
       const lf = (rho - rhoV) / (rhoL - rhoV);
       return {
         phase: 'two-phase',
-        p: sat.p,
+        pAbs: sat.p,
         liquidFraction: lf,
         rhoL,
         rhoV,
@@ -135,7 +144,7 @@ function closedTankPure(product: ResolvedProduct, T: number, rho: number): Close
   const dense = rho >= m.rhoc;
   return {
     phase: 'supercritical',
-    p: pressureForVolume(volumeAlong(m, T, 'stable'), v, (R_J_molK * T) / v).p,
+    pAbs: pressureForVolume(volumeAlong(m, T, 'stable'), v, (R_J_molK * T) / v).p,
     liquidFraction: dense ? 1 : 0,
     rhoL: dense ? rho : null,
     rhoV: dense ? null : rho,
@@ -167,7 +176,7 @@ function singlePhase(
   const liquid = phase === 'liquid' || (phase === 'supercritical' && dense);
   return {
     phase,
-    p,
+    pAbs: p,
     liquidFraction: liquid ? 1 : 0,
     rhoL: liquid ? rho : null,
     rhoV: liquid ? null : rho,
@@ -202,59 +211,53 @@ function closedTankBlend(product: ResolvedProduct, T: number, rho: number): Clos
   if (!dew) return singlePhase(mx, z, rho, v, 'supercritical', rho >= rhoPc);
   if (v >= dew.vBulk) return singlePhase(mx, z, rho, v, 'vapour', false, { pHi: dew.p });
 
-  // Two-phase: find ln p in (ln p_dew, ln p_bubble) with v_flash(p) = v. v_flash falls with p.
-  let lo = Math.log(dew.p);
-  let hi = Math.log(bubble.p);
-  let fLo = Math.log(dew.vBulk / v); // > 0
-  let fHi = Math.log(bubble.vBulk / v); // < 0
-  // Start K from the bubble point (K = y/x there), then warm-start each flash from the last.
+  return twoPhaseBlend(mx, z, v, dew, bubble);
+}
+
+/**
+ * Two-phase blend: ln p in (ln p_dew, ln p_bubble) with v_flash(p) = v (v_flash falls with p),
+ * by `bracketedRoot`. K starts from the bubble point (K = y/x there); each flash is warm-started
+ * from the last one.
+ */
+function twoPhaseBlend(
+  mx: MixtureAtT,
+  z: readonly number[],
+  v: number,
+  dew: SaturationPoint,
+  bubble: SaturationPoint,
+): ClosedTankState {
   let K: Float64Array<ArrayBufferLike> = Float64Array.from(bubble.incipient, (yi, i) => yi / z[i]!);
-  let best: { p: number; f: ReturnType<typeof flashPT>; g: number } | undefined;
-  let side = 0;
-  for (let it = 1; it <= 100; it++) {
-    // Illinois variant of regula falsi in ln p.
-    let lnP = (lo * fHi - hi * fLo) / (fHi - fLo);
-    if (!(lnP > lo && lnP < hi)) lnP = 0.5 * (lo + hi);
-    const p = Math.exp(lnP);
-    const fl = flashPT(mx, z, p, K);
+  let last: { lnP: number; fl: FlashResult } | undefined;
+  const g = (lnP: number) => {
+    const fl = flashPT(mx, z, Math.exp(lnP), K);
     K = fl.K;
-    const vFlash = (1 - fl.beta) * fl.vL + fl.beta * fl.vV;
-    const g = Math.log(vFlash / v);
-    best = { p, f: fl, g };
-    // 1e-7 in ln v moves p by ~1e-8 relative: far below any figure shown; tighter only chases
-    // the warm-started flash's own tolerance.
-    if (Math.abs(g) < 1e-7 || hi - lo < 1e-12) {
-      const nL = 1 - fl.beta;
-      const massL = nL * molarMassOf(mx, fl.x);
-      const massV = fl.beta * molarMassOf(mx, fl.y);
-      return {
-        phase: 'two-phase',
-        p,
-        liquidFraction: Math.min(1, Math.max(0, (nL * fl.vL) / v)),
-        rhoL: molarMassOf(mx, fl.x) / fl.vL,
-        rhoV: molarMassOf(mx, fl.y) / fl.vV,
-        vapourMassFraction: massV / (massL + massV),
-        x: Array.from(fl.x),
-        y: Array.from(fl.y),
-        iterations: it,
-      };
-    }
-    if (g > 0) {
-      lo = lnP;
-      fLo = g;
-      if (side === -1) fHi /= 2;
-      side = -1;
-    } else {
-      hi = lnP;
-      fHi = g;
-      if (side === 1) fLo /= 2;
-      side = 1;
-    }
-  }
-  throw new ConvergenceError(
-    'closed-tank blend',
-    `no pressure reproduces the overall density at T = ${T} K`,
-    100,
-    Math.abs(best?.g ?? NaN),
-  );
+    last = { lnP, fl };
+    return Math.log(((1 - fl.beta) * fl.vL + fl.beta * fl.vV) / v);
+  };
+  // 1e-7 in ln v moves p by ~1e-8 relative: far below any figure shown; tighter only chases
+  // the warm-started flash's own tolerance.
+  const root = bracketedRoot(g, Math.log(dew.p), Math.log(bubble.p), {
+    name: 'closed-tank blend',
+    fa: Math.log(dew.vBulk / v), // > 0
+    fb: Math.log(bubble.vBulk / v), // < 0
+    fTol: 1e-7,
+    xTol: 1e-12,
+    maxIterations: 100,
+  });
+  const p = Math.exp(root.x);
+  const fl = last?.lnP === root.x ? last.fl : flashPT(mx, z, p, K);
+  const nL = 1 - fl.beta;
+  const massL = nL * molarMassOf(mx, fl.x);
+  const massV = fl.beta * molarMassOf(mx, fl.y);
+  return {
+    phase: 'two-phase',
+    pAbs: p,
+    liquidFraction: Math.min(1, Math.max(0, (nL * fl.vL) / v)),
+    rhoL: molarMassOf(mx, fl.x) / fl.vL,
+    rhoV: molarMassOf(mx, fl.y) / fl.vV,
+    vapourMassFraction: massV / (massL + massV),
+    x: Array.from(fl.x),
+    y: Array.from(fl.y),
+    iterations: root.iterations,
+  };
 }

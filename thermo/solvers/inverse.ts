@@ -3,12 +3,13 @@
  * cubic's root at (T, p), so p(T, v) is found by root-finding along one branch.
  */
 import { ConvergenceError } from '../errors.js';
+import { bracketedRoot } from './root.js';
 
 /**
  * Finds p with vOf(p) = vTarget, where vOf falls monotonically with p along one branch.
  * `pLo`/`pHi` are optional known bounds (vOf(pLo) ≥ vTarget ≥ vOf(pHi)); missing ones are found
- * by expanding geometrically from `pGuess`. Illinois regula falsi in ln p; residual
- * |ln(vOf(p)/vTarget)| < 1e-12.
+ * by expanding geometrically from `pGuess`. Root in ln p by `bracketedRoot`; residual
+ * |ln(vOf(p)/vTarget)| ≤ 1e-12.
  */
 export function pressureForVolume(
   vOf: (p: number) => number,
@@ -45,9 +46,7 @@ export function pressureForVolume(
       fHi = f(hi);
     }
   }
-  if (Math.abs(fLo) < 1e-12) return { p: Math.exp(lo), iterations: evals };
-  if (Math.abs(fHi) < 1e-12) return { p: Math.exp(hi), iterations: evals };
-  if (!(fLo >= 0 && fHi <= 0)) {
+  if (!(fLo >= -1e-12 && fHi <= 1e-12)) {
     throw new ConvergenceError(
       'pressure from volume',
       'could not bracket the pressure',
@@ -55,23 +54,12 @@ export function pressureForVolume(
       Math.min(Math.abs(fLo), Math.abs(fHi)),
     );
   }
-  let side = 0;
-  for (let it = 1; it <= 200; it++) {
-    let x = (lo * fHi - hi * fLo) / (fHi - fLo);
-    if (!(x > lo && x < hi)) x = 0.5 * (lo + hi);
-    const fx = f(x);
-    if (Math.abs(fx) < 1e-12 || hi - lo < 1e-14) return { p: Math.exp(x), iterations: it };
-    if (fx > 0) {
-      lo = x;
-      fLo = fx;
-      if (side === -1) fHi /= 2;
-      side = -1;
-    } else {
-      hi = x;
-      fHi = fx;
-      if (side === 1) fLo /= 2;
-      side = 1;
-    }
-  }
-  throw new ConvergenceError('pressure from volume', 'regula falsi did not close', 200, NaN);
+  const root = bracketedRoot(f, lo, hi, {
+    name: 'pressure from volume',
+    fa: fLo,
+    fb: fHi,
+    fTol: 1e-12,
+    xTol: 1e-14,
+  });
+  return { p: Math.exp(root.x), iterations: evals + root.iterations };
 }

@@ -8,6 +8,7 @@ import { compressibilityRoots, dPdv, lnPhiPure, logTerm } from '../eos/cubic.js'
 import { correctedVolume, correctionAtT, type CorrectionAtT } from '../eos/volumeCorrection.js';
 import type { ComponentModel } from '../eos/model.js';
 import type { SolverReport } from './result.js';
+import { wilsonKOf } from './wilson.js';
 
 const R = R_J_molK;
 
@@ -32,12 +33,7 @@ export function pureCoefficients(m: ComponentModel, T: number): PureCoefficients
 }
 
 /** The model's molar volume (m³/mol) from the cubic's molar volume vCub at T. */
-export function modelVolume(
-  m: ComponentModel,
-  k: PureCoefficients,
-  T: number,
-  vCub: number,
-): number {
+function modelVolume(m: ComponentModel, k: PureCoefficients, T: number, vCub: number): number {
   const d = -((vCub * vCub) / (R * T)) * dPdv(m.family, R, T, vCub, k.a, k.b);
   return correctedVolume(k.corr, vCub, d);
 }
@@ -95,8 +91,7 @@ export interface PureSaturation extends SolverReport {
  */
 export function pureSaturation(m: ComponentModel, T: number, pGuess?: number): PureSaturation {
   const k = pureCoefficients(m, T);
-  const Tr = T / m.Tc;
-  let lnP = Math.log(pGuess ?? m.pc * Math.exp(5.373 * (1 + m.omega) * (1 - 1 / Tr)));
+  let lnP = Math.log(pGuess ?? wilsonKOf(m, T, 1)); // Wilson's estimate of p_sat, Pa
   let lo = -Infinity;
   let hi = Math.log(m.pc * 1.5);
   if (lnP >= hi) lnP = Math.log(m.pc * 0.99);
@@ -161,7 +156,7 @@ export function pureSaturation(m: ComponentModel, T: number, pGuess?: number): P
  * Residual molar enthalpy h − h_ig = R·T·(Z − 1) + (T·da/dT − a)/b · L, J/mol,
  * with L = ln((Z + δ1·B)/(Z + δ2·B))/(δ1 − δ2).
  */
-export function residualEnthalpy(
+function residualEnthalpy(
   m: ComponentModel,
   k: PureCoefficients,
   T: number,

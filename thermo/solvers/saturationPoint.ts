@@ -12,7 +12,8 @@
  */
 import { ConvergenceError } from '../errors.js';
 import type { ResolvedProduct } from '../product.js';
-import { mixtureAtT, saturationPressure, type SaturationPoint } from './mixture.js';
+import { mixtureAtT } from './mixtureModel.js';
+import { saturationPressure, type SaturationPoint } from './bubbleDew.js';
 
 type Start = { p: number; K: Float64Array };
 interface Known {
