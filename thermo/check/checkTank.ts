@@ -16,6 +16,7 @@ import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../ta
 import { buildCautions } from './cautions.js';
 import { diagnose } from './diagnosis.js';
 import { computeFillLimit } from './fillLimit.js';
+import { resolveRules } from './rulesInput.js';
 import { ProductModel, type State } from './model.js';
 import {
   liquidFullTemperature as findLiquidFullTemperature,
@@ -36,7 +37,7 @@ const P_STEP = 100;
 /** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
 /** The fields of `TankCheckInput` an `InputError` may name (dotted, as in the input). */
 const INPUT_FIELD =
-  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature)$/;
+  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature|ruleSet|siteRule(\.(maxFillPercent|maxFillingDensity))?)$/;
 
 export function checkTank(input: TankCheckInput): TankCheckResult {
   try {
@@ -67,6 +68,7 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
 
 function check(input: TankCheckInput): TankCheckResult {
   const c = validateInput(input);
+  const rules = resolveRules(input);
   const model = new ProductModel(input.product);
   const b = model.basics;
   const Tlo = Math.max(b.Tmin + 0.01, 150);
@@ -154,6 +156,7 @@ function check(input: TankCheckInput): TankCheckResult {
     totalMass,
     waterWeight,
     recovery: input.tank.recovery,
+    ...rules,
   });
 
   // --- Peak. ---
