@@ -12,7 +12,13 @@ import { readFileSync, readdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { join } from 'node:path';
 import { SOURCES } from '../../../thermo/data/sources.js';
-import { RULE_SETS, ruleSetById, DEFAULT_RULE_SET } from '../../../thermo/rules/sets/index.js';
+import {
+  RULE_SETS,
+  RULE_SET_IDS,
+  ruleSetById,
+  DEFAULT_RULE_SET,
+  DEFAULT_RULE_SET_ID,
+} from '../../../thermo/rules/sets/index.js';
 import type { RuleSet, SgBand } from '../../../thermo/rules/ruleset.js';
 
 const ROOT = fileURLToPath(new URL('../../../', import.meta.url));
@@ -79,6 +85,9 @@ describe('every registered rule set conforms', () => {
     const ids = RULE_SETS.map((s) => s.id);
     expect(new Set(ids).size).toBe(ids.length);
     expect(RULE_SETS).toContain(DEFAULT_RULE_SET);
+    // The light list of ids the app shell checks stored choices against is the registry's.
+    expect([...RULE_SET_IDS]).toEqual(ids);
+    expect(DEFAULT_RULE_SET_ID).toBe(DEFAULT_RULE_SET.id);
     // Lookups are by Map: an Object built-in is never a rule set.
     expect(ruleSetById('constructor')).toBeUndefined();
     expect(ruleSetById('__proto__')).toBeUndefined();

@@ -11,7 +11,7 @@ export const RULE_SETS: readonly RuleSet[] = [US_FEDERAL];
 
 /** The set a site or tank without a choice uses. */
 export const DEFAULT_RULE_SET: RuleSet = US_FEDERAL;
-export const DEFAULT_RULE_SET_ID = US_FEDERAL.id;
+export { DEFAULT_RULE_SET_ID, RULE_SET_IDS } from './ids.js';
 
 const BY_ID = new Map(RULE_SETS.map((s) => [s.id, s]));
 
