@@ -19,9 +19,9 @@ import type { NumberFieldChange } from './number-field.js';
 import { SITE_RULE_RANGES, type SiteRule, type SiteRules } from './site-rules.js';
 import { RULE_SETS } from '../thermo/rules/sets/index.js';
 
-/** The rule sets a site can choose, for the picker: id and words. */
-function ruleSetChoices(): { id: string; text: string }[] {
-  return RULE_SETS.map((s) => ({ id: s.id, text: `${s.title}, ${s.edition}` }));
+/** The rule sets a site can choose, for the picker: id, title and which text of the rules. */
+function ruleSetChoices(): { id: string; text: string; edition: string }[] {
+  return RULE_SETS.map((s) => ({ id: s.id, text: s.title, edition: s.edition }));
 }
 
 export class SiteRulesForm extends LitElement {
@@ -79,24 +79,31 @@ export class SiteRulesForm extends LitElement {
     const own = this.rules.siteRule ?? {};
     const choices = ruleSetChoices();
     const current = this.rules.ruleSet ?? choices[0]?.id;
+    const edition = choices.find((c) => c.id === current)?.edition ?? '';
     const p = SITE_RULE_RANGES.maxFillPercent;
     const fd = SITE_RULE_RANGES.maxFillingDensity;
     return html`<fieldset>
       <legend>Fill rules at this site</legend>
       <div class="field">
         <label for="rule-set">Rule set</label>
-        <select id="rule-set" data-testid="site-rule-set" @change=${this._set}>
+        <select
+          id="rule-set"
+          data-testid="site-rule-set"
+          aria-describedby="rule-set-edition"
+          @change=${this._set}
+        >
           ${choices.map(
             (c) => html`<option value=${c.id} ?selected=${c.id === current}>${c.text}</option>`,
           )}
         </select>
+        <p class="muted" id="rule-set-edition">Figures as in the ${edition} text.</p>
       </div>
       <number-field
-        label="Company maximum fill, by volume (optional)"
+        label="Company maximum fill by volume"
         name="maxFillPercent"
         unit-text="%"
         testid="site-max-fill-percent"
-        hint="Liquid percent on the float gauge at the liquid temperature; empty: none"
+        hint="Optional: liquid percent on the float gauge at the liquid temperature"
         .decimals=${1}
         .display=${this.display}
         .value=${own.maxFillPercent ?? null}
@@ -105,11 +112,11 @@ export class SiteRulesForm extends LitElement {
         @value-change=${this._figure('maxFillPercent')}
       ></number-field>
       <number-field
-        label="Company maximum filling density (optional)"
+        label="Company maximum filling density"
         name="maxFillingDensity"
         quantity="fraction"
         testid="site-max-filling-density"
-        hint="Share of the water weight capacity; empty: none"
+        hint="Optional: share of the water weight capacity"
         .display=${this.display}
         .value=${own.maxFillingDensity ?? null}
         .min=${fd.min}

@@ -87,7 +87,7 @@ export type ReliefRuleHook = (
 export interface RuleSet {
   /** Registry key, e.g. `us-federal`; stored with sites and tanks. */
   id: string;
-  /** Short title for a picker. */
+  /** Short title for a picker (fits a 320 px wide phone: about 24 characters). */
   title: string;
   /** Which text of the rules, e.g. `CFR 2015 annual edition`. */
   edition: string;

@@ -14,7 +14,7 @@ import { US_RELIEF_RANGES } from './relief.js';
 
 export const US_FEDERAL: RuleSet = {
   id: 'us-federal',
-  title: 'US federal (OSHA 29 CFR, DOT 49 CFR)',
+  title: 'US federal (OSHA, DOT)',
   edition: 'CFR 2015 annual edition',
   sources: ['CFR-29-1910.110', 'CFR-29-1910.111', 'CFR-49-173'],
   sizeSplitM3: GAL_1200_M3,
