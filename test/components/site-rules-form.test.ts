@@ -8,6 +8,7 @@ import { expect, fixture, html, oneEvent } from '@open-wc/testing';
 import '../../components/site-rules-form.js';
 import type { SiteRulesForm } from '../../components/site-rules-form.js';
 import type { SiteRules } from '../../components/site-rules.js';
+import type { SiteForecast } from '../../components/walkdown-board.js';
 import { siteRulesOf, siteRulesProblem } from '../../components/site-rules.js';
 import { byTestId, deep, settleAll, typeText, FIELD_ERROR } from './dom.js';
 
@@ -69,9 +70,15 @@ describe('site-rules-form', () => {
 
 describe('site rules with the site record', () => {
   it('a record without them (an older backup) has none and is valid', () => {
-    const old = { site: 'Yard', days: [], sunAllowance: 0, tankAllowances: [], enteredAt: '' };
+    const old: SiteForecast = {
+      site: 'Yard',
+      days: [],
+      sunAllowance: 0,
+      tankAllowances: [],
+      enteredAt: '',
+    };
     expect(siteRulesOf(old)).to.deep.equal({});
-    expect(siteRulesProblem(old)).to.equal(null);
+    expect(siteRulesProblem({ ...old })).to.equal(null);
   });
   it('a bad stored rule is named', () => {
     expect(siteRulesProblem({ ruleSet: 'nowhere' })).to.match(/rule set/);
