@@ -6,6 +6,7 @@
 import { checkTank, InputError, type InputErrorCode, type InputLimits } from '../thermo/index.js';
 import { cautionText, refusalWords } from './messages.js';
 import type { TankCheckInput, TankCheckResult } from '../thermo/check/types.js';
+import type { SiteRules } from './site-rules.js';
 import type { DisplayUnits } from './display.js';
 import { T_CHECK_MAX_K, T_CHECK_MIN_K, checkMinTemperature } from '../thermo/limits.js';
 import { productFor, productLabel, tripleTemperatures } from './products.js';
@@ -36,7 +37,12 @@ export interface BuiltInput {
   peakEstimated: boolean;
 }
 
-export function buildCheckInput(tank: TankRecord, r: Readings, settings: Settings): BuiltInput {
+export function buildCheckInput(
+  tank: TankRecord,
+  r: Readings,
+  settings: Settings,
+  rules: SiteRules = {},
+): BuiltInput {
   const missing: string[] = [];
   if (r.liquidTemperature === null) missing.push(READING_NAMES.liquidTemperature);
   const reading = r[r.contentsMode];
@@ -74,6 +80,8 @@ export function buildCheckInput(tank: TankRecord, r: Readings, settings: Setting
     },
   };
   if (r.gaugePressure !== null) input.gaugePressure = r.gaugePressure;
+  if (rules.ruleSet !== undefined) input.ruleSet = rules.ruleSet;
+  if (rules.siteRule !== undefined) input.siteRule = rules.siteRule;
   if (settings.barometer.mode === 'pressure')
     input.barometricPressure = settings.barometer.pressure;
   else if (settings.barometer.mode === 'elevation') input.elevation = settings.barometer.elevation;
@@ -145,9 +153,17 @@ export function errorText(error: CheckError, display: DisplayUnits): string {
   }
 }
 
-/** Builds the input and runs the check. Never throws: an engine refusal comes back as `error`. */
-export function runCheck(tank: TankRecord, readings: Readings, settings: Settings): CheckOutcome {
-  const built = buildCheckInput(tank, readings, settings);
+/**
+ * Builds the input and runs the check, with the site's rule set and own rule when given. Never
+ * throws: an engine refusal comes back as `error`.
+ */
+export function runCheck(
+  tank: TankRecord,
+  readings: Readings,
+  settings: Settings,
+  rules: SiteRules = {},
+): CheckOutcome {
+  const built = buildCheckInput(tank, readings, settings, rules);
   if (!built.input) return { ...built, result: null, error: null };
   try {
     return { ...built, result: checkTank(built.input), error: null };

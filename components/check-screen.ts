@@ -40,6 +40,7 @@ import type { FillRecord } from './fill-types.js';
 import type { ReadingsChange } from './check-form.js';
 import { screenErrors, type ScreenErrors } from './check-errors.js';
 import { minTemperatureFor, runCheck, summarize, type CheckOutcome } from './check-input.js';
+import type { SiteRules } from './site-rules.js';
 import type { HeatingCurve } from './chart-data.js';
 import { curveFor } from './chart-client.js';
 import { productFor, productLabel } from './products.js';
@@ -80,6 +81,7 @@ export class CheckScreen extends LitElement {
     checks: { attribute: false },
     fills: { attribute: false },
     last: { attribute: false },
+    siteRules: { attribute: false },
     _readings: { state: true },
     _valid: { state: true },
     _outcome: { state: true },
@@ -100,6 +102,8 @@ export class CheckScreen extends LitElement {
   declare fills: FillRecord[];
   /** Old readings of this tank kept as a draft (offered for reuse with the saved checks), or null. */
   declare last: LastReadings | null;
+  /** The rule set and own stricter rule of the tank's site (components/site-rules.ts). */
+  declare siteRules: SiteRules;
   declare _readings: Readings;
   declare _valid: boolean;
   declare _outcome: CheckOutcome | null;
@@ -119,6 +123,7 @@ export class CheckScreen extends LitElement {
     this.checks = [];
     this.fills = [];
     this.last = null;
+    this.siteRules = {};
     this._readings = this.readings;
     this._valid = true;
     this._outcome = null;
@@ -135,7 +140,12 @@ export class CheckScreen extends LitElement {
       this._readings = this.readings;
       this._valid = true;
     }
-    if (changed.has('readings') || changed.has('tank') || changed.has('settings'))
+    if (
+      changed.has('readings') ||
+      changed.has('tank') ||
+      changed.has('settings') ||
+      changed.has('siteRules')
+    )
       this._recompute();
   }
 
@@ -181,7 +191,7 @@ export class CheckScreen extends LitElement {
   }
 
   private _recompute(): void {
-    this._outcome = runCheck(this.tank, this._readings, this.settings);
+    this._outcome = runCheck(this.tank, this._readings, this.settings, this.siteRules);
     clearTimeout(this._chartTimer);
     const ticket = ++this._chartTicket;
     const outcome = this._outcome;

@@ -5,7 +5,7 @@
  * and as mass, and the peak-day pressure with its headroom to the relief setting. Old readings
  * are marked with their age; an over-full tank reads "over the limit by …".
  *
- * data-testid: `key-bar`, `key-stop-percent`, `key-room-left-volume`, `key-room-left-mass`,
+ * data-testid: `key-bar`, `key-stop-percent`, `key-site-rule` (when the site's own rule sets the stop), `key-room-left-volume`, `key-room-left-mass`,
  * `key-peak`, `key-level`, `key-stale`, `key-empty`. Figures carry their SI value in `data-si`
  * (the room left is negative when over the limit).
  */
@@ -127,7 +127,10 @@ export class KeyBar extends LitElement {
           <span class="big" data-testid="key-stop-percent" data-si=${String(k.stopAtPercent)}
             >${formatPercent(k.stopAtPercent, 'down')}</span
           >
-          <div class="sub">float gauge</div>
+          <div class="sub">
+            float
+            gauge${k.siteRule ? html`, <span data-testid="key-site-rule">site’s own rule</span>` : nothing}
+          </div>
         </div>
         <div>
           <div class="label">${k.over ? 'Over the limit by' : 'Room left'}</div>

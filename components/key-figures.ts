@@ -21,6 +21,8 @@ export interface KeyFigures {
   over: boolean;
   /** True when a fixed maximum-level gauge's setting is the stop (read there, not on the float gauge). */
   fixedGauge: boolean;
+  /** True when the site's own stricter rule sets the stop (components/site-rules.ts). */
+  siteRule: boolean;
   /** True when the relief setting was not entered and the design pressure stands in for it. */
   reliefAssumed: boolean;
   /** Peak-day pressure, Pa gauge; headroom to the relief setting, Pa (negative when exceeded). */
@@ -48,6 +50,7 @@ export function keyFigures(r: TankCheckResult, d: DisplayUnits): KeyFigures {
     baseTemperature: baseTemperatureFor(d),
     over: f.roomLeftMass < 0,
     fixedGauge: f.stopAtFixedGauge,
+    siteRule: f.boundBy === 'site-rule',
     reliefAssumed: r.cautions.some((c) => c.code === 'relief-assumed'),
     peakPressure: r.peak.pGauge,
     headroomToRelief: r.peak.headroomToRelief,
@@ -68,7 +71,7 @@ export function keyWords(k: KeyFigures, d: DisplayUnits): KeyWords {
   const base = baseLabel(d);
   const stop = k.fixedGauge
     ? `Stop when liquid first appears at the fixed maximum-level gauge (set at ${formatPercent(k.stopAtPercent, 'down')})`
-    : `Stop at or below ${formatPercent(k.stopAtPercent, 'down')} on the float gauge (the most the rule allows at today’s liquid temperature)`;
+    : `Stop at or below ${formatPercent(k.stopAtPercent, 'down')} on the float gauge (the most ${k.siteRule ? 'this site’s own rule' : 'the rule'} allows at today’s liquid temperature)`;
   const room = k.over
     ? `Over the limit by ${d.format('volume', -k.roomLeftVolume, 'up')} as liquid at ${base} (${d.format('mass', -k.roomLeftMass, 'up')})`
     : `Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at ${base} (${d.format('mass', k.roomLeftMass, 'down')})`;

@@ -93,6 +93,8 @@ export const CAUTION_WORDS: Record<CautionCode, Entry> = {
     `The forecast peak ${f('peak')} is colder than the liquid now (${f('temperature')}): the peak figures describe a cooler tank.`,
   'blend-bubble-point': (f) =>
     `For a blend the pressure with liquid and vapour present is taken as the bubble-point pressure of the whole contents (${f('pressure')} now), slightly above the real pressure.`,
+  'site-rule-binds': (f, p) =>
+    `Limited by this site’s own rule: ${f('figure')} ${word(p, 'form') === 'percent' ? 'by volume' : 'of the water weight capacity'}, below the rule set’s limits. Stop at or below ${f('stop')} on the float gauge (${f('limit')}).`,
   standing: () => '',
 };
 

@@ -1,6 +1,6 @@
 /**
  * The site board: the site's forecast (one or more days, the sun allowance, per-tank allowances
- * for shaded or insulated tanks) and every tank of the site projected to it, worst first by the
+ * for shaded or insulated tanks), the site's fill rules (<site-rules-form>) and every tank of the site projected to it, worst first by the
  * rule in `RANK_RULE`, with the walk's start and the site's past walkdowns.
  *
  * Takes ranked rows from its host (which computes them off the input path) and shows how far the
@@ -36,6 +36,8 @@ import {
   resultLines,
 } from './walkdown-words.js';
 import { walkResult } from './walkdown-ops.js';
+import './site-rules-form.js';
+import { siteRulesOf, type SiteRules } from './site-rules.js';
 import { formatDate } from './tank-list.js';
 import type { FillFlag } from './fill-flag.js';
 
@@ -154,6 +156,13 @@ export class SiteBoard extends LitElement {
   private _change(next: Partial<SiteForecast>): void {
     const forecast = { ...this.forecast, ...next, enteredAt: new Date().toISOString() };
     this._fire('forecast-change', { forecast });
+  }
+
+  /** The site's rule set and own rule changed: stored with the forecast (its date unchanged). */
+  private _rules(e: CustomEvent<SiteRules>): void {
+    e.stopPropagation();
+    const { ruleSet: _set, siteRule: _own, ...rest } = this.forecast;
+    this._fire('forecast-change', { forecast: { ...rest, ...e.detail } });
   }
 
   private _day(i: number) {
@@ -334,6 +343,11 @@ export class SiteBoard extends LitElement {
     return html`
       <h2>Site board: ${this.site}</h2>
       ${this._forecastForm()}
+      <site-rules-form
+        .rules=${siteRulesOf(this.forecast)}
+        .display=${this.display}
+        @site-rules-change=${this._rules}
+      ></site-rules-form>
       <div class="actions">
         ${
           active

@@ -14,6 +14,7 @@
  * are known to be bad) and above the lesser levels (an unread tank could be anywhere).
  */
 import { runCheck, summarize } from './check-input.js';
+import { siteRulesOf, type SiteRule } from './site-rules.js';
 import type { CheckRecord, CheckSummary, Readings, Settings, TankRecord } from './types.js';
 import type { CautionLevel, TankCheckResult } from '../thermo/check/types.js';
 
@@ -49,6 +50,10 @@ export interface SiteForecast {
   enteredAt: string;
   /** Optional walk order: tank ids in the order of the site's route. */
   route?: string[];
+  /** The site's rule set id (components/site-rules.ts); absent: US federal. Optional. */
+  ruleSet?: string;
+  /** The site's own stricter rule; absent: none. Optional. */
+  siteRule?: SiteRule;
 }
 
 /** A tank's latest readings and when they were taken. */
@@ -165,7 +170,7 @@ export function projectTank(
   if (!(ageMs <= staleDays * 86_400_000))
     return needsReading(tank, `Readings older than ${staleDays} days`, latest, ageMs, sun);
   const readings = withForecast(latest.readings, forecast, tank.id);
-  const out = runCheck(tank, readings, settings);
+  const out = runCheck(tank, readings, settings, siteRulesOf(forecast));
   if (!out.result) {
     const why = out.error
       ? 'The check refused these readings'

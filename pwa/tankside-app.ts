@@ -44,6 +44,7 @@ import '../components/confirm-bar.js';
 import { FillController } from './fill-route.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { fillsToCsv } from './fill-csv.js';
+import type { SiteRules } from '../components/site-rules.js';
 
 /** How long an undo offer stays, ms. */
 const UNDO_MS = 12_000;
@@ -95,7 +96,12 @@ export class TanksideApp extends LitElement {
   declare _tanks: TankRecord[];
   declare _checks: CheckRecord[];
   /** Readings to open the current check screen with (loaded per tank). */
-  declare _draft: { tankId: string; readings: Readings; last: LastReadings | null } | null;
+  declare _draft: {
+    tankId: string;
+    readings: Readings;
+    last: LastReadings | null;
+    rules: SiteRules;
+  } | null;
   declare _undo: Undo | null;
   declare _confirm: Confirm | null;
   declare _update: (() => void) | null;
@@ -308,12 +314,25 @@ export class TanksideApp extends LitElement {
     if (route.name === 'fill' && this._store) await this._fill.open(this._store, route.id);
     if (route.name === 'check' && this._store) {
       const id = route.id;
-      const [draft] = await Promise.all([this._store.getDraft(id), this._loadCheckScreen()]);
+      const site = this._tank(id)?.site;
+      const [draft, , siteRecord] = await Promise.all([
+        this._store.getDraft(id),
+        this._loadCheckScreen(),
+        site !== undefined ? this._store.getSite(site) : undefined,
+      ]);
       // A later route change may have happened meanwhile; keep only the current one.
       // Readings typed during this visit come back as they were; older ones are offered as the
       // last check above blank readings (components/reopen.ts).
       if (this._route === route)
-        this._draft = { tankId: id, ...openingReadings(draft, this._settings.sunAllowance) };
+        this._draft = {
+          tankId: id,
+          ...openingReadings(draft, this._settings.sunAllowance),
+          // The site's rule set and own rule, as stored (the engine chunk checks them).
+          rules: {
+            ...(siteRecord?.ruleSet !== undefined ? { ruleSet: siteRecord.ruleSet } : {}),
+            ...(siteRecord?.siteRule !== undefined ? { siteRule: siteRecord.siteRule } : {}),
+          },
+        };
     }
     if (route.name === 'site' || route.name === 'walk' || route.name === 'walkdown')
       await this._loadSiteScreen();
@@ -675,6 +694,7 @@ export class TanksideApp extends LitElement {
           .settings=${this._settings}
           .readings=${this._draft.readings}
           .last=${this._draft.last}
+          .siteRules=${this._draft.rules}
           .checks=${this._checks.filter((c) => c.tankId === t.id)}
           .fills=${this._fill.fillsOf(t.id)}
           @fill-start=${this._startFill}

@@ -6,6 +6,7 @@
 import { TEXT_LIMITS } from '../components/limits.js';
 import { T_CHECK_MAX_K, T_CHECK_MIN_K } from '../thermo/limits.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
+import { siteRulesProblem } from '../components/site-rules.js';
 
 export class WalkInvalid extends Error {}
 
@@ -68,6 +69,9 @@ export function validateSite(f: unknown, i: number): SiteForecast {
       if (typeof id !== 'string' || id.length > TEXT_LIMITS.id)
         fail(where, `route stop ${j + 1} must be a tank id`);
     });
+  // The site's rules are optional: a backup from before them has none.
+  const rules = siteRulesProblem(f);
+  if (rules) fail(where, rules);
   return f as unknown as SiteForecast;
 }
 

@@ -100,6 +100,8 @@ const TEXT: Record<CautionCode, (f: Fmt, p: MessageParams) => string> = {
     `The forecast peak ${f('peak')} is colder than the liquid now ${f('temperature')}: the peak figures describe a cooler tank.`,
   'blend-bubble-point': (f) =>
     `For a blend the two-phase pressure is taken as the bubble-point pressure of the whole contents (${f('pressure')} now), slightly above the real pressure.`,
+  'site-rule-binds': (f, p) =>
+    `Limited by this site's own rule: ${f('figure')} ${p['form'] === 'percent' ? 'by volume' : 'of the water weight capacity'}, below the rule set's limits. Stop at or below ${f('stop')} on the float gauge (${f('limit')}).`,
   standing: () => STANDING_CAUTION,
 };
 

@@ -9,6 +9,7 @@ import { checkMinTemperature } from '../limits.js';
 import { CO2_TRIPLE_POINT_PA, cautionMessage } from './caution-text.js';
 import { num, type CautionCode, type MessageParams } from './codes.js';
 import type { ProductModel, State } from './model.js';
+import { siteRuleParams } from './siteRuleNotice.js';
 import { saturationTemperature } from './search.js';
 import type { Caution, CautionLevel, TankCheckInput, TankCheckResult } from './types.js';
 import type { CleanInput } from './validate.js';
@@ -254,4 +255,5 @@ function noticeCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
     });
   if (c.Tpeak < c.T) add('notice', 'peak-below-now', { peak: T(c.Tpeak), temperature: T(c.T) });
   if (!k.model.basics.pure) add('notice', 'blend-bubble-point', { pressure: G(r.pGauge, 'up') });
+  if (r.fillLimit.boundBy === 'site-rule') add('notice', 'site-rule-binds', siteRuleParams(r));
 }

@@ -17,6 +17,7 @@ import { fractionAtLevel, levelAtFraction, tankHeight, totalVolume } from '../ta
 import { buildCautions } from './cautions.js';
 import { diagnose } from './diagnosis.js';
 import { computeFillLimit } from './fillLimit.js';
+import { resolveRules } from './rulesInput.js';
 import { ProductModel, type State } from './model.js';
 import {
   liquidFullTemperature as findLiquidFullTemperature,
@@ -36,7 +37,7 @@ const P_STEP = 100;
 
 /** The fields of `TankCheckInput` an `InputError` may name (dotted, as in the input). */
 const INPUT_FIELD =
-  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature)$/;
+  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature|ruleSet|siteRule(\.(maxFillPercent|maxFillingDensity))?)$/;
 
 /** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
 export function checkTank(input: TankCheckInput): TankCheckResult {
@@ -68,6 +69,7 @@ export function checkTank(input: TankCheckInput): TankCheckResult {
 
 function check(input: TankCheckInput): TankCheckResult {
   const c = validateInput(input);
+  const rules = resolveRules(input);
   const model = new ProductModel(input.product);
   const b = model.basics;
   const Tlo = productFloor(model, c);
@@ -95,6 +97,7 @@ function check(input: TankCheckInput): TankCheckResult {
     totalMass,
     waterWeight,
     recovery: input.tank.recovery,
+    ...rules,
   });
 
   // --- Peak. ---

@@ -37,6 +37,7 @@ export const CAUTION_CODES = [
   'sg-differs',
   'peak-below-now',
   'blend-bubble-point',
+  'site-rule-binds',
   'standing',
 ] as const;
 export type CautionCode = (typeof CAUTION_CODES)[number];

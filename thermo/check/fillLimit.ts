@@ -7,23 +7,28 @@
  *   rest of the tank, at the current liquid temperature, rounded down (no model allowance: the
  *   driver reads the printed percent itself on the gauge; see DECISIONS.md);
  * - never liquid-full up to each reference temperature (the forecast peak, and 130/131 °F for
- *   DOT cylinders), from the model's liquid density lowered by its allowance.
+ *   DOT cylinders), from the model's liquid density lowered by its allowance;
+ * - the site's own stricter rule, when one is set (siteLimits.ts): it can only lower the limit.
+ *
+ * The weight, volume and reference-temperature rules come from the rule set chosen for the site
+ * or tank (rules/sets/, default US federal).
  *
  * At a fixed liquid temperature the mass in the tank rises with the liquid percent, so the
  * lowest mass is also the lowest gauge percent: one limit binds both.
  */
 import type { Product } from '../product.js';
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
-import { fillingRule, referenceRules } from '../rules/gases.js';
+import { fillingRule, referenceRules } from '../rules/apply.js';
 import { recoveryLimit, type RecoveryInput } from '../rules/recovery.js';
-import { dot4lRule } from '../rules/refrigerated.js';
-import { volumeRules } from '../rules/volumeLimits.js';
+import type { RuleSet } from '../rules/ruleset.js';
+import type { SiteRule } from '../rules/siteRule.js';
 import type { ProductModel, Sat } from './model.js';
+import { siteLimits } from './siteLimits.js';
 import type { FillLimitResult, LimitEntry } from './types.js';
 import type { CleanInput } from './validate.js';
 
 /** x rounded down to a multiple of step (a power of ten). */
-const floorTo = (x: number, step: number) =>
+export const floorTo = (x: number, step: number) =>
   step < 1 ? Math.floor(x * (1 / step) + 1e-9) / (1 / step) : Math.floor(x / step + 1e-9) * step;
 
 export interface FillLimitContext {
@@ -40,6 +45,10 @@ export interface FillLimitContext {
   waterWeight: number;
   /** A refrigerant recovery cylinder's own limit (tank.recovery), when it is one. */
   recovery?: RecoveryInput;
+  /** The rule set that applies (site's or tank's choice). */
+  ruleSet: RuleSet;
+  /** The site's own stricter rule, or null. */
+  siteRule: SiteRule | null;
 }
 
 export interface FillLimitOutcome {
@@ -51,7 +60,7 @@ export interface FillLimitOutcome {
 }
 
 /** Liquid percent at which the tank holds `mass` now (unclamped), or null with no liquid level. */
-function percentForMass(k: FillLimitContext, mass: number): number | null {
+export function percentForMass(k: FillLimitContext, mass: number): number | null {
   const s = k.satNow;
   if (!s) return null;
   return ((mass / k.c.V - s.rhoV) / (s.rhoL - s.rhoV)) * 100;
@@ -61,21 +70,25 @@ export function computeFillLimit(k: FillLimitContext): FillLimitOutcome {
   const { c, model } = k;
   const limits: LimitEntry[] = [];
   // An insulated DOT cylinder with a low relief setting is read as a DOT-4L (refrigerated) cylinder.
+  const byRelief = k.ruleSet.relief.insulatedCylinderRule;
   const rule4l =
-    c.containerClass === 'cylinder' && c.insulated
-      ? dot4lRule(k.product, c.reliefSetPressure)
+    c.containerClass === 'cylinder' && c.insulated && byRelief
+      ? byRelief(k.product, c.reliefSetPressure)
       : null;
   const rule =
     rule4l ??
-    fillingRule({
-      product: k.product,
-      containerClass: c.containerClass,
-      placement: c.placement,
-      insulated: c.insulated,
-      fixedDipTube: c.fillMethod === 'fixed-gauge',
-      waterCapacity: c.V,
-      specificGravity: k.sg,
-    });
+    fillingRule(
+      {
+        product: k.product,
+        containerClass: c.containerClass,
+        placement: c.placement,
+        insulated: c.insulated,
+        fixedDipTube: c.fillMethod === 'fixed-gauge',
+        waterCapacity: c.V,
+        specificGravity: k.sg,
+      },
+      k.ruleSet,
+    );
   if (rule) {
     const maxMass = floorTo(rule.fillingDensity * k.waterWeight, 0.01);
     limits.push({
@@ -90,7 +103,7 @@ export function computeFillLimit(k: FillLimitContext): FillLimitOutcome {
       gaugePercent: percentForMass(k, maxMass),
     });
   }
-  const vol = volumeRules({
+  const vol = k.ruleSet.volumeRules({
     product: k.product,
     containerClass: c.containerClass,
     placement: c.placement,
@@ -124,6 +137,7 @@ export function computeFillLimit(k: FillLimitContext): FillLimitOutcome {
     }
   }
   const skippedRefs = physicalLimits(k, limits);
+  limits.push(...siteLimits(k));
   // Lowest mass first; on a tie the printed percent (volume or gauge setting) is named.
   limits.sort((p, q) => p.maxMass - q.maxMass || rank(p) - rank(q));
   return {
@@ -133,16 +147,22 @@ export function computeFillLimit(k: FillLimitContext): FillLimitOutcome {
   };
 }
 
+// On a tie the rule set's own entry is named before the site's rule (which then does not lower it).
 const rank = (l: LimitEntry) =>
-  l.kind === 'gauge-setting' ? 0 : l.kind === 'volume' ? 1 : l.kind === 'rule' ? 2 : 3;
+  l.kind === 'gauge-setting'
+    ? 0
+    : l.kind === 'volume'
+      ? 1
+      : l.kind === 'rule'
+        ? 2
+        : l.kind === 'physical'
+          ? 3
+          : 4;
 
 /** Never liquid-full up to each reference temperature; returns the ones above the critical point. */
 function physicalLimits(k: FillLimitContext, limits: LimitEntry[]): number[] {
   const { c, model } = k;
-  const refs = referenceRules(k.product, c.containerClass).map((r) => ({
-    ...r,
-    kind: r.id === 'refrigerant-130F' ? ('rule' as const) : ('physical' as const),
-  }));
+  const refs = referenceRules(k.product, c.containerClass, k.ruleSet);
   refs.push({
     id: 'not-liquid-full-at-peak',
     kind: 'physical',
@@ -188,6 +208,13 @@ function buildFillLimit(k: FillLimitContext, limits: LimitEntry[]): FillLimitRes
   const gp = binding ? binding.gaugePercent : percentForMass(k, maxMass);
   const stop = gp === null ? 0 : Math.min(100, Math.max(0, floorTo(gp, 0.1)));
   const byVolume = limits.filter((l) => l.kind === 'volume' || l.kind === 'gauge-setting');
+  const boundBy = !binding
+    ? 'none'
+    : binding.kind === 'site'
+      ? 'site-rule'
+      : binding.kind === 'physical'
+        ? 'not-liquid-full'
+        : 'rule-set';
   return {
     maxMass,
     // The binding limit's own figure (a table's 42 % stays 42 %, not 41.999 % from the mass
@@ -196,6 +223,8 @@ function buildFillLimit(k: FillLimitContext, limits: LimitEntry[]): FillLimitRes
       ? Math.min(binding.fillingDensity, maxMass / k.waterWeight + 1e-12)
       : floorTo(maxMass / k.waterWeight, 1e-5),
     binding: binding ? binding.id : 'none',
+    boundBy,
+    ruleSet: k.ruleSet.id,
     limits,
     roomLeftMass,
     roomLeftVolume: floorTo(roomLeftMass / rhoLiquidNow, 1e-6),
@@ -227,6 +256,8 @@ function bindingNote(
     ? `its weight limit of ${+(weight.fillingDensity * 100).toFixed(2)} % of the water weight${weight.gaugePercent !== null ? ` (${pct(Math.min(100, weight.gaugePercent))} on the gauge now)` : ''}`
     : null;
   const cite = b.citation.replace(' (CFR 2015 ed.)', '');
+  if (b.kind === 'site')
+    return `This site’s own rule binds, below the rule set’s limits: ${b.description}.`;
   if (b.kind === 'gauge-setting')
     return `Filled by the fixed maximum-level gauge: the fill stops when liquid first appears at the gauge, set at ${pct(b.gaugePercent ?? stop)}; ${cite}.`;
   const lead =
@@ -237,7 +268,7 @@ function bindingNote(
         : '';
   if (b.kind === 'volume')
     return `${lead}The rule’s volume limit at this temperature binds: ${pct(b.gaugePercent ?? stop)} by volume${weightWords ? `, below ${weightWords}` : ''}; ${cite}.`;
-  const ruled = limits.some((l) => l.kind !== 'physical');
+  const ruled = limits.some((l) => l.kind !== 'physical' && l.kind !== 'site');
   if (b.kind === 'physical' && ruled)
     return `${lead}The not-liquid-full limit binds below the rule’s limits: ${b.description.charAt(0).toLowerCase()}${b.description.slice(1)}.`;
   return lead ? lead.trim() : null;

@@ -14,46 +14,11 @@ import type { FillMethod } from '../rules/volumeLimits.js';
 
 export type { FillMethod };
 import type { RecoveryInput } from '../rules/recovery.js';
+import type { SiteRule } from '../rules/siteRule.js';
 import type { CautionCode, CauseCode, MessageParams } from './codes.js';
 
-/** Where the container sits. A partly buried container counts as aboveground (29 CFR 1910.110(d)(7)(iv)(e)). */
-export type Placement = 'aboveground' | 'underground';
-
-/**
- * The class of container, which picks the filling-density rule:
- * - `storage`: a stationary (ASME) storage container, 29 CFR 1910.110 / 1910.111;
- * - `cylinder`: a DOT specification cylinder, 49 CFR 173.304a;
- * - `cargo`: a DOT cargo tank, 49 CFR 173.315;
- * - `portable`: a DOT portable tank, 49 CFR 173.315 (same tables as cargo tanks).
- */
-export type ContainerClass = 'storage' | 'cylinder' | 'cargo' | 'portable';
-
-/** Head shape of a cylindrical tank. `ellipsoidal` is the 2:1 semi-ellipsoidal head (depth = D/4). */
-export type HeadKind = 'hemispherical' | 'ellipsoidal' | 'flat';
-
-/** Inside dimensions, needed only to turn a level height into a volume. */
-export type TankShape =
-  | {
-      kind: 'horizontal-cylinder';
-      heads: HeadKind;
-      /** Inside diameter, m. */
-      diameter: number;
-      /** Straight shell length between the head tangent lines, m (0 for a hemispherical-headed tank means a sphere). */
-      shellLength: number;
-    }
-  | {
-      kind: 'vertical-cylinder';
-      heads: HeadKind;
-      /** Inside diameter, m. */
-      diameter: number;
-      /** Straight shell height between the head tangent lines, m. */
-      shellLength: number;
-    }
-  | {
-      kind: 'sphere';
-      /** Inside diameter, m. */
-      diameter: number;
-    };
+export type { ContainerClass, HeadKind, Placement, TankShape } from '../types.js';
+import type { ContainerClass, Placement, TankShape } from '../types.js';
 
 /** The tank's nameplate and fittings. */
 export interface TankInput {
@@ -89,6 +54,8 @@ export interface TankInput {
   recovery?: RecoveryInput;
   /** Minimum design metal temperature from the nameplate, K. Optional. */
   minDesignMetalTemperature?: number;
+  /** Id of a rule set for this tank, overriding the site's (`TankCheckInput.ruleSet`). Optional. */
+  ruleSet?: string;
 }
 
 /** One contents reading. */
@@ -128,6 +95,10 @@ export interface TankCheckInput {
   elevation?: number;
   /** Forecast peak liquid temperature, K (the app adds a sun allowance to the peak air temperature). */
   peakTemperature: number;
+  /** Id of the site's rule set (rules/sets/); `tank.ruleSet` overrides it. Default `us-federal`. */
+  ruleSet?: string;
+  /** The site's own stricter rule (a company's maximum fill percent and/or filling density). Optional. */
+  siteRule?: SiteRule;
 }
 
 /** How a tank is full: with liquid, or (above the critical temperature) with dense fluid. */
@@ -207,9 +178,9 @@ export interface LimitEntry {
   /**
    * `rule`: a filling-density (weight) rule; `volume`: a rule's printed percent by volume;
    * `gauge-setting`: a fixed maximum-level gauge's setting; `physical`: never liquid-full up to a
-   * reference temperature.
+   * reference temperature; `site`: the site's own stricter rule (never raises the limit).
    */
-  kind: 'rule' | 'volume' | 'gauge-setting' | 'physical';
+  kind: 'rule' | 'volume' | 'gauge-setting' | 'physical' | 'site';
   /** What the limit is, in words. */
   description: string;
   /** Where it comes from (regulation, table, edition) or "common practice". */
@@ -237,6 +208,13 @@ export interface FillLimitResult {
   maxFillingDensity: number;
   /** The id of the limit that binds (one of `limits`). */
   binding: string;
+  /**
+   * Which rule bound: an entry of the rule set (weight, volume or gauge setting), the site's own
+   * stricter rule, the not-liquid-full limit, or none at all.
+   */
+  boundBy: 'rule-set' | 'site-rule' | 'not-liquid-full' | 'none';
+  /** Id of the rule set the check applied (rules/sets/). */
+  ruleSet: string;
   /** Every limit considered, lowest first. */
   limits: LimitEntry[];
   /** maxMass − totalMass, kg (rounded down; negative when over the limit). */

@@ -5,14 +5,25 @@ export {
   TABLE_173_315B,
   TABLE_173_304A_D1,
   lpgFillingDensity,
+  sgBandPercent,
   sgForTable,
   maxLiquidVolumePercent,
   DOT_DIP_TUBE_FACTOR,
 } from './lpgas.js';
 export type { LpgColumn, LpgFillingDensity } from './lpgas.js';
+export { fillingRule, referenceRules, inGroup } from './apply.js';
+export type {
+  RuleSet,
+  FillingDensityEntry,
+  ReferenceTemperatureEntry,
+  ReliefRangeEntry,
+  ProductGroup,
+  SgBand,
+} from './ruleset.js';
+export { RULE_SETS, DEFAULT_RULE_SET, DEFAULT_RULE_SET_ID, ruleSetById } from './sets/index.js';
+export { validateSiteRule, SITE_RULE_RANGES } from './siteRule.js';
+export type { SiteRule } from './siteRule.js';
 export {
-  fillingRule,
-  referenceRules,
   isLpGas,
   isRefrigerantNos,
   LPG_IDS,

@@ -124,16 +124,29 @@ export function sgForTable(sg: number): number {
  * gravity `sg` (60/60 °F), or null when the table has no band for it.
  */
 export function lpgFillingDensity(sg: number, column: LpgColumn): LpgFillingDensity | null {
+  const [table, col, citation] = pick(column);
+  const fd = sgBandPercent(table, col, sg);
+  return fd ? { ...fd, citation } : null;
+}
+
+/**
+ * The percent in column `col` of a band table by specific gravity (rounded down to 3 decimals
+ * first), with the band's printed limits; null outside the table or for a non-finite `sg`.
+ */
+export function sgBandPercent(
+  table: readonly Band[],
+  col: number,
+  sg: number,
+): { percent: number; band: readonly [number, number | null] } | null {
   if (!Number.isFinite(sg)) return null;
   const s = sgForTable(sg);
-  const [table, col, citation] = pick(column);
   for (const b of table) {
     const lo = b[0];
     const hi = b[1];
     if (s >= lo - 1e-9 && (hi === null || s <= hi + 1e-9)) {
       const pct = b[2 + col];
       if (typeof pct !== 'number') return null;
-      return { percent: pct, band: [lo, hi], citation };
+      return { percent: pct, band: [lo, hi] };
     }
   }
   return null;

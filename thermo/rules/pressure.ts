@@ -3,12 +3,14 @@
  * them (convert with units.ts). CFR 2015 annual edition text unless stated; check the current
  * eCFR before release.
  */
+import { US_RELIEF_RANGES } from './sets/us-federal/relief.js';
 
 /** Era of the container's construction code, which sets the relief range (Table H-26) and the design pressure for a container type (Table H-31). */
 export type CodeEra = 'asme-1949-and-earlier' | 'asme-1950-and-later';
 
 /**
- * Relief-valve start-to-discharge range as fractions of the design pressure:
+ * Relief-valve start-to-discharge range as fractions of the design pressure (the US federal
+ * set's data, sets/us-federal/relief.ts):
  * LP-gas, 29 CFR 1910.110(b)(10)(iv) Table H-26: U-68/U-69 (1949 and earlier) 110–125 %;
  * U-200/U-201, ASME 1950–1968, API-ASME 88–100 %.
  * Ammonia, 29 CFR 1910.111(b)(9)(ii): U-68/U-69 110–125 %; U-200/U-201, ASME 1952–1962,
@@ -18,19 +20,8 @@ export function reliefRange(
   service: 'lp-gas' | 'ammonia',
   era: CodeEra,
 ): { min: number; max: number; citation: string } {
-  if (era === 'asme-1949-and-earlier') {
-    return {
-      min: 1.1,
-      max: 1.25,
-      citation:
-        service === 'lp-gas'
-          ? '29 CFR 1910.110(b)(10)(iv) Table H-26'
-          : '29 CFR 1910.111(b)(9)(ii)',
-    };
-  }
-  return service === 'lp-gas'
-    ? { min: 0.88, max: 1.0, citation: '29 CFR 1910.110(b)(10)(iv) Table H-26' }
-    : { min: 0.95, max: 1.0, citation: '29 CFR 1910.111(b)(9)(ii)' };
+  const r = US_RELIEF_RANGES.find((x) => x.service === service && x.era === era)!;
+  return { min: r.min, max: r.max, citation: r.citation };
 }
 
 /**

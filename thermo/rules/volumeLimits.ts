@@ -14,7 +14,7 @@
  *   weight figure for that container (refrigerated CO2 and N2O in cargo tanks).
  */
 import type { Product } from '../product.js';
-import type { ContainerClass, Placement } from '../check/types.js';
+import type { ContainerClass, Placement } from '../types.js';
 import { isLpGas, productIds, type RuleChoice } from './gases.js';
 import { WATER_FD_KG_M3 } from './water.js';
 

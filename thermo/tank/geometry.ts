@@ -15,7 +15,7 @@
  * - Sphere: V = π·h²·(3R − h)/3.
  * Valid for 0 ≤ h ≤ total inside height.
  */
-import type { HeadKind, TankShape } from '../check/types.js';
+import type { HeadKind, TankShape } from '../types.js';
 import { InputError } from '../errors.js';
 
 /** Depth of one head, m. */
