@@ -36,7 +36,7 @@ import {
   resultLines,
 } from './walkdown-words.js';
 import { walkResult } from './walkdown-ops.js';
-import { formatDate } from './tank-list.js';
+import { formatDate } from './format-date.js';
 import type { FillFlag } from './fill-flag.js';
 
 export class SiteBoard extends LitElement {

@@ -17,6 +17,7 @@ import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
 import { productChoices, productLabel, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
+import { blankTank } from './blank-tank.js';
 import { FILL_METHOD_HINT, FILL_METHOD_WORDS } from './fill-words.js';
 import { TEXT_LIMITS } from './limits.js';
 import { PLAUSIBLE_DESIGN_PRESSURE, PLAUSIBLE_WATER_CAPACITY, plausibleFor } from './plausible.js';
@@ -568,27 +569,6 @@ const CLASSES: [ContainerClass, string][] = [
   ['cargo', 'Cargo tank'],
   ['portable', 'Portable tank'],
 ];
-
-/** A new tank with empty-ish defaults (the user must check every nameplate figure). */
-export function blankTank(id: string, now = new Date().toISOString()): TankRecord {
-  return {
-    id,
-    site: '',
-    name: '',
-    notes: '',
-    // No guessed nameplate figures: NaN shows as an empty field and blocks saving until typed.
-    nameplate: {
-      waterCapacity: Number.NaN,
-      designPressure: Number.NaN,
-      placement: 'aboveground',
-      containerClass: 'storage',
-    },
-    productId: 'propane',
-    demo: false,
-    createdAt: now,
-    updatedAt: now,
-  };
-}
 
 customElements.define('tank-form', TankForm);
 
