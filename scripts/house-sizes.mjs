@@ -23,7 +23,12 @@ export function tsFiles(dir) {
 function functionName(node, sf) {
   if (node.name) return node.name.getText(sf);
   const parent = node.parent;
-  if (parent && (ts.isVariableDeclaration(parent) || ts.isPropertyAssignment(parent) || ts.isPropertyDeclaration(parent)))
+  if (
+    parent &&
+    (ts.isVariableDeclaration(parent) ||
+      ts.isPropertyAssignment(parent) ||
+      ts.isPropertyDeclaration(parent))
+  )
     return parent.name.getText(sf);
   if (ts.isConstructorDeclaration(node)) return 'constructor';
   return '(anonymous)';
@@ -55,10 +60,17 @@ export function measureSizes(dirs, { root = process.cwd(), exclude = () => false
       const file = relative(root, path).split('\\').join('/');
       if (exclude(file)) continue;
       const m = measureFile(path);
-      if (m.fileLines > MAX_FILE_LINES) over.push({ file, lines: m.fileLines, limit: MAX_FILE_LINES });
+      if (m.fileLines > MAX_FILE_LINES)
+        over.push({ file, lines: m.fileLines, limit: MAX_FILE_LINES });
       for (const f of m.functions)
         if (f.lines > MAX_FUNCTION_LINES)
-          over.push({ file, name: f.name, line: f.line, lines: f.lines, limit: MAX_FUNCTION_LINES });
+          over.push({
+            file,
+            name: f.name,
+            line: f.line,
+            lines: f.lines,
+            limit: MAX_FUNCTION_LINES,
+          });
     }
   }
   return over;

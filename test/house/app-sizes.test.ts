@@ -34,7 +34,10 @@ suite('house sizes of the app (DEVELOPERS.md: functions ≤ 80 lines, files ≤ 
     const filler = (n: number): string => Array.from({ length: n }, (_, i) => `// ${i}`).join('\n');
     writeFileSync(join(root, 'x', 'file400.ts'), `${filler(400)}\n`);
     writeFileSync(join(root, 'x', 'file401.ts'), `${filler(401)}\n`);
-    writeFileSync(join(root, 'x', 'arrow.ts'), `export const c = (): void => {\n${filler(80)}\n};\n`);
+    writeFileSync(
+      join(root, 'x', 'arrow.ts'),
+      `export const c = (): void => {\n${filler(80)}\n};\n`,
+    );
     const over = measureSizes(['x'], { root }).map(describe);
     expect(over).toEqual([
       'x/arrow.ts:1 c: 82 lines > 80',
