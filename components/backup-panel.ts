@@ -95,6 +95,48 @@ export class BackupPanel extends LitElement {
     input.value = ''; // the same file can be chosen again
   }
 
+  /** Clearing the demo tanks, and deleting everything after a second tap. */
+  private _clearPart() {
+    return html`
+      <h3>Clear</h3>
+      <div class="buttons">
+        ${
+          this.demoCount > 0
+            ? html`<button data-testid="demo-clear" @click=${() => this._fire('demo-clear', {})}>
+                Clear the ${this.demoCount} demo tanks
+              </button>`
+            : nothing
+        }
+        ${
+          this._confirming
+            ? html`<button
+                  class="primary"
+                  data-testid="data-clear-confirm"
+                  @click=${() => {
+                    this._confirming = false;
+                    this._fire('data-clear', {});
+                  }}
+                >
+                  Yes, delete all tanks and checks
+                </button>
+                <button
+                  data-testid="data-clear-backup"
+                  @click=${() => this._fire('backup-export', {})}
+                >
+                  Export a backup first
+                </button>
+                <button data-testid="data-clear-cancel" @click=${() => (this._confirming = false)}>
+                  Keep my data
+                </button>`
+            : html`<button data-testid="data-clear" @click=${() => (this._confirming = true)}>
+                Delete all tanks and checks…
+              </button>`
+        }
+      </div>
+      ${this._confirming ? html`<p role="alert" class="error">This removes every tank and check from this device. Export a backup first if you may need them.</p>` : nothing}
+    `;
+  }
+
   override render() {
     return html`
       <h2>Your data</h2>
@@ -151,42 +193,7 @@ export class BackupPanel extends LitElement {
         An import adds the backup’s tanks, checks and fills and replaces those with the same id;
         nothing else is removed. A file that is not a valid backup changes nothing.
       </p>
-      <h3>Clear</h3>
-      <div class="buttons">
-        ${
-          this.demoCount > 0
-            ? html`<button data-testid="demo-clear" @click=${() => this._fire('demo-clear', {})}>
-                Clear the ${this.demoCount} demo tanks
-              </button>`
-            : nothing
-        }
-        ${
-          this._confirming
-            ? html`<button
-                  class="primary"
-                  data-testid="data-clear-confirm"
-                  @click=${() => {
-                    this._confirming = false;
-                    this._fire('data-clear', {});
-                  }}
-                >
-                  Yes, delete all tanks and checks
-                </button>
-                <button
-                  data-testid="data-clear-backup"
-                  @click=${() => this._fire('backup-export', {})}
-                >
-                  Export a backup first
-                </button>
-                <button data-testid="data-clear-cancel" @click=${() => (this._confirming = false)}>
-                  Keep my data
-                </button>`
-            : html`<button data-testid="data-clear" @click=${() => (this._confirming = true)}>
-                Delete all tanks and checks…
-              </button>`
-        }
-      </div>
-      ${this._confirming ? html`<p role="alert" class="error">This removes every tank and check from this device. Export a backup first if you may need them.</p>` : nothing}
+      ${this._clearPart()}
     `;
   }
 }

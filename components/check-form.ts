@@ -167,119 +167,89 @@ export class CheckForm extends LitElement {
       : nothing;
   }
 
-  override render() {
-    const r = this._readings;
+  /** The contents reading: its kind, then the one field of that kind. */
+  private _contents(r: Readings) {
     const d = this.display;
-    const baro = d.barometricPressure;
+    return html`
+      <div role="radiogroup" aria-label="Contents reading" class="modes">
+        ${MODES.map(
+          (m) =>
+            html`<label>
+              <input
+                type="radio"
+                name="mode"
+                value=${m.mode}
+                data-testid="contents-mode-${m.mode}"
+                .checked=${r.contentsMode === m.mode}
+                ?disabled=${m.mode === 'levelHeight' && !this.hasShape}
+                @change=${() => this._mode(m.mode)}
+              />
+              ${m.text}
+            </label>`,
+        )}
+      </div>
+      ${!this.hasShape ? html`<p class="muted note">A level height needs the tank’s shape (edit the tank to add it).</p>` : nothing}
+      ${
+        r.contentsMode === 'gaugePercent'
+          ? html`<number-field
+              label="Float gauge"
+              name="gaugePercent"
+              unit-text="%"
+              required
+              testid="gauge-percent"
+              hint="Percent of the tank volume, as the dial reads"
+              .decimals=${1}
+              .value=${r.gaugePercent}
+              .min=${READING_RANGES.gaugePercent.min}
+              .max=${READING_RANGES.gaugePercent.max}
+              @value-change=${this._field('gaugePercent')}
+            ></number-field>`
+          : nothing
+      }
+      ${
+        r.contentsMode === 'levelHeight'
+          ? html`<number-field
+              label="Liquid level height"
+              name="levelHeight"
+              quantity="length"
+              required
+              testid="level-height"
+              hint="Above the inside bottom of the tank"
+              .display=${d}
+              .value=${r.levelHeight}
+              .min=${READING_RANGES.levelHeight.min}
+              .max=${READING_RANGES.levelHeight.max}
+              @value-change=${this._field('levelHeight')}
+            ></number-field>`
+          : nothing
+      }
+      ${
+        r.contentsMode === 'netMass'
+          ? html`<number-field
+              label="Net product mass"
+              name="netMass"
+              quantity="mass"
+              required
+              testid="net-mass"
+              hint="Scale reading less the tare"
+              .display=${d}
+              .value=${r.netMass}
+              .min=${READING_RANGES.netMass.min}
+              .max=${READING_RANGES.netMass.max}
+              @value-change=${this._field('netMass')}
+            ></number-field>`
+          : nothing
+      }
+      ${this._engineError(r.contentsMode)}
+    `;
+  }
+
+  /** The forecast: peak air temperature plus the sun allowance, and the liquid peak they make. */
+  private _forecast(r: Readings) {
+    const d = this.display;
     const peak =
       r.peakAirTemperature !== null ? r.peakAirTemperature + (r.sunAllowance ?? 0) : null;
     return html`
-      <fieldset>
-        <legend>Readings now</legend>
-        <number-field
-          label="Liquid temperature"
-          name="liquidTemperature"
-          quantity="temperature"
-          required
-          testid="liquid-temperature"
-          hint="Thermometer well or a probe on the shell below the liquid level"
-          .display=${d}
-          .value=${r.liquidTemperature}
-          .min=${this.minTemperature}
-          .max=${T_RANGE_K.max}
-          .plausibleMin=${PLAUSIBLE_LIQUID_TEMPERATURE.min}
-          .plausibleMax=${PLAUSIBLE_LIQUID_TEMPERATURE.max}
-          plausible-what=${PLAUSIBLE_LIQUID_TEMPERATURE.what}
-          @value-change=${this._field('liquidTemperature')}
-        ></number-field>
-        ${this._engineError('liquidTemperature')}
-
-        <div role="radiogroup" aria-label="Contents reading" class="modes">
-          ${MODES.map(
-            (m) =>
-              html`<label>
-                <input
-                  type="radio"
-                  name="mode"
-                  value=${m.mode}
-                  data-testid="contents-mode-${m.mode}"
-                  .checked=${r.contentsMode === m.mode}
-                  ?disabled=${m.mode === 'levelHeight' && !this.hasShape}
-                  @change=${() => this._mode(m.mode)}
-                />
-                ${m.text}
-              </label>`,
-          )}
-        </div>
-        ${!this.hasShape ? html`<p class="muted note">A level height needs the tank’s shape (edit the tank to add it).</p>` : nothing}
-        ${
-          r.contentsMode === 'gaugePercent'
-            ? html`<number-field
-                label="Float gauge"
-                name="gaugePercent"
-                unit-text="%"
-                required
-                testid="gauge-percent"
-                hint="Percent of the tank volume, as the dial reads"
-                .decimals=${1}
-                .value=${r.gaugePercent}
-                .min=${READING_RANGES.gaugePercent.min}
-                .max=${READING_RANGES.gaugePercent.max}
-                @value-change=${this._field('gaugePercent')}
-              ></number-field>`
-            : nothing
-        }
-        ${
-          r.contentsMode === 'levelHeight'
-            ? html`<number-field
-                label="Liquid level height"
-                name="levelHeight"
-                quantity="length"
-                required
-                testid="level-height"
-                hint="Above the inside bottom of the tank"
-                .display=${d}
-                .value=${r.levelHeight}
-                .min=${READING_RANGES.levelHeight.min}
-                .max=${READING_RANGES.levelHeight.max}
-                @value-change=${this._field('levelHeight')}
-              ></number-field>`
-            : nothing
-        }
-        ${
-          r.contentsMode === 'netMass'
-            ? html`<number-field
-                label="Net product mass"
-                name="netMass"
-                quantity="mass"
-                required
-                testid="net-mass"
-                hint="Scale reading less the tare"
-                .display=${d}
-                .value=${r.netMass}
-                .min=${READING_RANGES.netMass.min}
-                .max=${READING_RANGES.netMass.max}
-                @value-change=${this._field('netMass')}
-              ></number-field>`
-            : nothing
-        }
-        ${this._engineError(r.contentsMode)}
-
-        <number-field
-          label="Pressure gauge (optional)"
-          name="gaugePressure"
-          quantity="gaugePressure"
-          testid="gauge-pressure"
-          hint="Leave empty if there is no gauge reading"
-          .display=${d}
-          .value=${r.gaugePressure}
-          .min=${-baro}
-          .max=${READING_RANGES.gaugePressureMax}
-          @value-change=${this._field('gaugePressure')}
-        ></number-field>
-        ${this._engineError('gaugePressure')}
-      </fieldset>
-
       <fieldset>
         <legend>Forecast</legend>
         <number-field
@@ -316,6 +286,50 @@ export class CheckForm extends LitElement {
         </p>
         ${this._engineError('peakTemperature')}
       </fieldset>
+    `;
+  }
+
+  override render() {
+    const r = this._readings;
+    const d = this.display;
+    const baro = d.barometricPressure;
+    return html`
+      <fieldset>
+        <legend>Readings now</legend>
+        <number-field
+          label="Liquid temperature"
+          name="liquidTemperature"
+          quantity="temperature"
+          required
+          testid="liquid-temperature"
+          hint="Thermometer well or a probe on the shell below the liquid level"
+          .display=${d}
+          .value=${r.liquidTemperature}
+          .min=${this.minTemperature}
+          .max=${T_RANGE_K.max}
+          .plausibleMin=${PLAUSIBLE_LIQUID_TEMPERATURE.min}
+          .plausibleMax=${PLAUSIBLE_LIQUID_TEMPERATURE.max}
+          plausible-what=${PLAUSIBLE_LIQUID_TEMPERATURE.what}
+          @value-change=${this._field('liquidTemperature')}
+        ></number-field>
+        ${this._engineError('liquidTemperature')} ${this._contents(r)}
+
+        <number-field
+          label="Pressure gauge (optional)"
+          name="gaugePressure"
+          quantity="gaugePressure"
+          testid="gauge-pressure"
+          hint="Leave empty if there is no gauge reading"
+          .display=${d}
+          .value=${r.gaugePressure}
+          .min=${-baro}
+          .max=${READING_RANGES.gaugePressureMax}
+          @value-change=${this._field('gaugePressure')}
+        ></number-field>
+        ${this._engineError('gaugePressure')}
+      </fieldset>
+
+      ${this._forecast(r)}
     `;
   }
 }

@@ -9,8 +9,8 @@
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent } from './display.js';
-import { formatDate } from './tank-list.js';
-import { PHASE_WORDS } from './check-results.js';
+import { formatDate } from './format-date.js';
+import { PHASE_WORDS } from './phase-words.js';
 import { DEFAULT_SETTINGS, type CheckRecord } from './types.js';
 
 export class CheckHistory extends LitElement {

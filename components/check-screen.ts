@@ -55,7 +55,7 @@ import {
   type Settings,
   type TankRecord,
 } from './types.js';
-import { blankTank } from './tank-form.js';
+import { blankTank } from './blank-tank.js';
 import {
   ageText,
   hasMeasured,

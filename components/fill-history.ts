@@ -8,7 +8,7 @@
 import { LitElement, html, css } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent } from './display.js';
-import { formatDate } from './tank-list.js';
+import { formatDate } from './format-date.js';
 import { fillFindingText } from './messages.js';
 import { DEFAULT_SETTINGS } from './types.js';
 import type { FillRecord } from './fill-types.js';

@@ -22,7 +22,7 @@ import type { NumberFieldChange } from './number-field.js';
 import { runFill, type FillField, type FillOutcome } from './fill-run.js';
 import { renderBefore, renderVerdict } from './fill-view.js';
 import { T_RANGE_K } from './check-input.js';
-import { blankTank } from './tank-form.js';
+import { blankTank } from './blank-tank.js';
 import { DEFAULT_SETTINGS, newId, type Settings, type TankRecord } from './types.js';
 import type { FillDraft, FillRecord } from './fill-types.js';
 import { makeFillRecord } from '../thermo/fill/index.js';

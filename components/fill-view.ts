@@ -5,7 +5,7 @@
 import { html, nothing } from 'lit';
 import { formatPercent, type DisplayUnits } from './display.js';
 import { fillFindingText } from './messages.js';
-import { formatDate } from './tank-list.js';
+import { formatDate } from './format-date.js';
 import type { FillDraft } from './fill-types.js';
 import type { FillOutcome } from './fill-run.js';
 import type { FillVerdict } from '../thermo/fill/index.js';

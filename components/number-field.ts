@@ -16,11 +16,12 @@
  *
  * @fires value-change - `CustomEvent<NumberFieldChange>` on every edit.
  */
-import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
-import { baseStyles } from './styles.js';
+import { LitElement, html, nothing, type PropertyValues } from 'lit';
+import { numberFieldStyles } from './number-field-styles.js';
+import { roundSignificant, sameNumber } from './number-text.js';
 import { DisplayUnits, trimZeros, type Quantity } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
-import { formatDigits, parseNumber, resolveNumberFormat } from './number-parse.js';
+import { formatDigits, parseNumber } from './number-parse.js';
 
 export interface NumberFieldChange {
   /** SI value, or null when the field is empty. Only meaningful when `valid`. */
@@ -122,61 +123,7 @@ export class NumberField extends LitElement {
     this._question = '';
   }
 
-  static override styles = [
-    baseStyles,
-    css`
-      :host {
-        margin-bottom: 0.75rem;
-      }
-      .box {
-        display: flex;
-        align-items: stretch;
-      }
-      input {
-        flex: 1 1 auto;
-        min-width: 0;
-        border-top-right-radius: 0;
-        border-bottom-right-radius: 0;
-      }
-      .unit {
-        /* Never shrinks below its text: "US gal" was cut off on a 320 px phone. */
-        flex: 0 0 auto;
-        display: flex;
-        align-items: center;
-        padding: 0 0.6rem;
-        min-width: 3.2rem;
-        border: var(--border-width) solid var(--ink);
-        border-left: 0;
-        border-radius: 0 0.4rem 0.4rem 0;
-        background: var(--paper-2);
-        font-weight: 600;
-        white-space: nowrap;
-      }
-      input[aria-invalid='true'] {
-        border-color: var(--danger);
-        outline: 2px solid var(--danger);
-      }
-      .hint {
-        display: block;
-        font-size: 0.9em;
-        margin: 0.1rem 0 0.25rem;
-      }
-      label {
-        display: block;
-        margin-bottom: 0.2rem;
-      }
-      .error {
-        margin: 0.25rem 0 0;
-      }
-      .question {
-        margin: 0.25rem 0 0;
-        font-weight: 600;
-      }
-      .question button {
-        margin-top: 0.3rem;
-      }
-    `,
-  ];
+  static override styles = numberFieldStyles;
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     // A value or unit change from outside rewrites the text, unless it is our own echo.
@@ -416,32 +363,6 @@ export class NumberField extends LitElement {
       }
     `;
   }
-}
-
-/**
- * Reads typed text in the browser locale's number format (kept for callers of the old helper;
- * new code uses `parseNumber` with the user's format). Empty text is null; refused text is
- * undefined.
- */
-export function parseDecimal(text: string): number | null | undefined {
-  const r = parseNumber(text, resolveNumberFormat('auto'));
-  return r.ok ? r.value : undefined;
-}
-
-/** `x` to `digits` significant figures, rounded up or down, as plain text ("3700000", "0.25"). */
-export function roundSignificant(x: number, digits: number, dir: 'up' | 'down'): string {
-  if (x === 0 || !Number.isFinite(x)) return '0';
-  const e = Math.floor(Math.log10(Math.abs(x))) - digits + 1;
-  const k = 10 ** e;
-  const scaled = x / k;
-  const eps = 1e-9 * Math.abs(scaled);
-  const r = dir === 'up' ? Math.ceil(scaled - eps) : Math.floor(scaled + eps);
-  return e >= 0 ? String(r * k) : (r * k).toFixed(-e);
-}
-
-function sameNumber(a: number | null, b: number | null): boolean {
-  if (a === null || b === null) return a === b;
-  return Math.abs(a - b) <= 1e-12 * Math.max(1, Math.abs(a));
 }
 
 customElements.define('number-field', NumberField);

@@ -38,7 +38,7 @@ import {
 import { walkResult } from './walkdown-ops.js';
 import './site-rules-form.js';
 import { siteRulesOf, type SiteRules } from './site-rules.js';
-import { formatDate } from './tank-list.js';
+import { formatDate } from './format-date.js';
 import type { FillFlag } from './fill-flag.js';
 
 export class SiteBoard extends LitElement {

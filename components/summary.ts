@@ -4,7 +4,7 @@
  * the standing caution; never worded as permission.
  */
 import { DisplayUnits, formatPercent } from './display.js';
-import { phaseWords } from './check-results.js';
+import { phaseWords } from './phase-words.js';
 import { stopPlace } from './fill-words.js';
 import { cautionText } from './messages.js';
 import type { Readings, TankRecord } from './types.js';

@@ -10,43 +10,29 @@
  * `tank-design-pressure`, `tank-relief-pressure`, `tank-placement`, `tank-class`, `tank-save`,
  * `tank-cancel`.
  */
-import { LitElement, html, css, nothing, type PropertyValues } from 'lit';
-import { baseStyles } from './styles.js';
+import { LitElement, html, nothing, type PropertyValues } from 'lit';
 import { DisplayUnits } from './display.js';
 import './number-field.js';
 import type { NumberFieldChange } from './number-field.js';
 import { productChoices, productLabel, type ProductGroup } from './products.js';
 import { DEFAULT_SETTINGS, type TankRecord } from './types.js';
-import { FILL_METHOD_HINT, FILL_METHOD_WORDS } from './fill-words.js';
+import { blankTank } from './blank-tank.js';
 import { TEXT_LIMITS } from './limits.js';
-import { PLAUSIBLE_DESIGN_PRESSURE, PLAUSIBLE_WATER_CAPACITY, plausibleFor } from './plausible.js';
 import type { NumberField } from './number-field.js';
-import type {
-  ContainerClass,
-  FillMethod,
-  HeadKind,
-  Placement,
-  TankInput,
-  TankShape,
-} from '../thermo/check/types.js';
+import type { ContainerClass, HeadKind, TankInput, TankShape } from '../thermo/check/types.js';
+import { tankFormStyles } from './tank-form-styles.js';
+import {
+  nameplateFields,
+  shapeFields,
+  type ShapeKind,
+  type TankFormView,
+} from './tank-form-fields.js';
 
-/** Ranges the form accepts, SI. They match what the check engine accepts (thermo/check/validate.ts). */
-export const TANK_RANGES = {
-  waterCapacity: { min: 1e-4, max: 1e5 },
-  pressure: { min: 1e4, max: 1e8 },
-  mdmt: { min: 73.15, max: 373.15 },
-  sphereDiameter: { min: 0.05, max: 50 },
-  diameter: { min: 0.05, max: 20 },
-  shellLength: { min: 0, max: 200 },
-  /** Recovery-cylinder liquid-volume limit, fraction (thermo/rules/recovery.ts). */
-  recoveryFraction: { min: 0.5, max: 0.95 },
-} as const;
+export { TANK_RANGES } from './tank-ranges.js';
 
 export interface TankSaveDetail {
   tank: TankRecord;
 }
-
-type ShapeKind = 'none' | TankShape['kind'];
 
 export class TankForm extends LitElement {
   static override properties = {
@@ -85,48 +71,7 @@ export class TankForm extends LitElement {
     this._nameMissing = false;
   }
 
-  static override styles = [
-    baseStyles,
-    css`
-      form {
-        max-width: 40rem;
-      }
-      .field {
-        margin-bottom: 0.75rem;
-      }
-      .field label {
-        display: block;
-        margin-bottom: 0.2rem;
-      }
-      .check {
-        display: flex;
-        align-items: center;
-        gap: 0.6rem;
-        min-height: 48px;
-        font-weight: 600;
-      }
-      .check input {
-        width: 28px;
-        height: 28px;
-        min-height: 28px;
-        flex: none;
-      }
-      .hint {
-        display: block;
-        font-size: 0.9em;
-        font-weight: 400;
-      }
-      .buttons {
-        display: flex;
-        flex-wrap: wrap;
-        gap: 0.5rem;
-        margin-top: 1rem;
-      }
-      .buttons button {
-        flex: 1 1 8rem;
-      }
-    `,
-  ];
+  static override styles = tankFormStyles;
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     // A new tank object for the same tank (the shell re-reading storage) must not wipe what the
@@ -161,10 +106,6 @@ export class TankForm extends LitElement {
       } else invalid.add(key);
       this._invalid = invalid;
     };
-  }
-
-  private _shapeKind(): ShapeKind {
-    return this._draft.nameplate.shape?.kind ?? 'none';
   }
 
   private _setShape(kind: ShapeKind): void {
@@ -252,36 +193,17 @@ export class TankForm extends LitElement {
     );
   }
 
-  /** Recovery-cylinder option (cylinders only): the common-practice liquid-volume limit. */
-  private _recoveryFields() {
-    const np = this._draft.nameplate;
-    if ((np.containerClass ?? 'storage') !== 'cylinder') return nothing;
-    const on = np.recovery !== undefined;
-    return html`<label class="check">
-        <input
-          type="checkbox"
-          data-testid="tank-recovery"
-          .checked=${on}
-          @change=${(e: Event) => this._setNameplate({ recovery: (e.target as HTMLInputElement).checked ? {} : undefined })}
-        />
-        Refrigerant recovery cylinder (adds the usual liquid-volume limit, common practice)
-      </label>
-      ${
-        on
-          ? html`<number-field
-              label="Recovery limit, liquid share of the volume"
-              name="recoveryFraction"
-              quantity="fraction"
-              hint="Common practice: 80 %"
-              testid="tank-recovery-fraction"
-              .display=${this.display}
-              .value=${np.recovery?.fillFraction ?? 0.8}
-              .min=${TANK_RANGES.recoveryFraction.min}
-              .max=${TANK_RANGES.recoveryFraction.max}
-              @value-change=${this._number('recoveryFraction', (v) => this._setNameplate({ recovery: { fillFraction: v ?? 0.8 } }))}
-            ></number-field>`
-          : nothing
-      }`;
+  /** The form's state and actions for the templates of tank-form-fields.ts. */
+  private _view(): TankFormView {
+    return {
+      draft: this._draft,
+      display: this.display,
+      setNameplate: (patch) => this._setNameplate(patch),
+      number: (key, apply) => this._number(key, apply),
+      setClass: (c) => this._setClass(c),
+      setShape: (kind) => this._setShape(kind),
+      patchShape: (patch) => this._patchShape(patch),
+    };
   }
 
   private _productOptions() {
@@ -297,12 +219,6 @@ export class TankForm extends LitElement {
 
   override render() {
     const d = this._draft;
-    const np = d.nameplate;
-    const disp = this.display;
-    const shape = np.shape;
-    const kind = this._shapeKind();
-    const wc = plausibleFor(PLAUSIBLE_WATER_CAPACITY, np.containerClass);
-    const dp = plausibleFor(PLAUSIBLE_DESIGN_PRESSURE, np.containerClass);
     return html`
       <form @submit=${this._save} novalidate>
         <h2>${this.heading}</h2>
@@ -355,188 +271,7 @@ export class TankForm extends LitElement {
           }
         </div>
 
-        <fieldset>
-          <legend>Nameplate</legend>
-          <number-field
-            label="Water capacity"
-            name="waterCapacity"
-            quantity="volume"
-            required
-            testid="tank-water-capacity"
-            hint="Volume of the container full of water (W.C.)"
-            .display=${disp}
-            .value=${np.waterCapacity}
-            .min=${TANK_RANGES.waterCapacity.min}
-            .max=${TANK_RANGES.waterCapacity.max}
-            .plausibleMin=${wc.min}
-            .plausibleMax=${wc.max}
-            plausible-what=${wc.what}
-            @value-change=${this._number('waterCapacity', (v) => this._setNameplate({ waterCapacity: v ?? Number.NaN }))}
-          ></number-field>
-          <number-field
-            label="Design pressure (MAWP)"
-            name="designPressure"
-            quantity="gaugePressure"
-            required
-            testid="tank-design-pressure"
-            .display=${disp}
-            .value=${np.designPressure}
-            .min=${TANK_RANGES.pressure.min}
-            .max=${TANK_RANGES.pressure.max}
-            .plausibleMin=${dp.min}
-            .plausibleMax=${dp.max}
-            plausible-what=${dp.what}
-            @value-change=${this._number('designPressure', (v) => this._setNameplate({ designPressure: v ?? Number.NaN }))}
-          ></number-field>
-          <number-field
-            label="Relief valve set pressure"
-            name="reliefSetPressure"
-            quantity="gaugePressure"
-            testid="tank-relief-pressure"
-            hint="Leave empty to use the design pressure"
-            .display=${disp}
-            .value=${np.reliefSetPressure ?? null}
-            .min=${TANK_RANGES.pressure.min}
-            .max=${TANK_RANGES.pressure.max}
-            .plausibleMin=${dp.min}
-            .plausibleMax=${dp.max}
-            plausible-what=${dp.what}
-            @value-change=${this._number('reliefSetPressure', (v) => this._setNameplate({ reliefSetPressure: v ?? undefined }))}
-          ></number-field>
-          <div class="field">
-            <label for="placement">Placement</label>
-            <p class="hint" id="placement-hint">A partly buried tank counts as aboveground.</p>
-            <select
-              id="placement"
-              aria-describedby="placement-hint"
-              data-testid="tank-placement"
-              @change=${(e: Event) => this._setNameplate({ placement: (e.target as HTMLSelectElement).value as Placement })}
-            >
-              <option
-                value="aboveground"
-                ?selected=${(np.placement ?? 'aboveground') === 'aboveground'}
-              >
-                Aboveground
-              </option>
-              <option value="underground" ?selected=${np.placement === 'underground'}>
-                Underground
-              </option>
-            </select>
-          </div>
-          <div class="field">
-            <label for="class">Container class (picks the filling rule)</label>
-            <p class="hint" id="class-hint">Storage: a stationary ASME container.</p>
-            <select
-              id="class"
-              aria-describedby="class-hint"
-              data-testid="tank-class"
-              @change=${(e: Event) => this._setClass((e.target as HTMLSelectElement).value as ContainerClass)}
-            >
-              ${CLASSES.map(([v, text]) => html`<option value=${v} ?selected=${(np.containerClass ?? 'storage') === v}>${text}</option>`)}
-            </select>
-          </div>
-          <label class="check">
-            <input
-              type="checkbox"
-              .checked=${np.insulated ?? false}
-              @change=${(e: Event) => this._setNameplate({ insulated: (e.target as HTMLInputElement).checked || undefined })}
-            />
-            Insulated shell (a DOT cylinder so marked is read as a DOT-4L)
-          </label>
-          <div class="field">
-            <label for="fill-method">How it is filled</label>
-            <p class="hint" id="fill-method-hint">${FILL_METHOD_HINT}</p>
-            <select
-              id="fill-method"
-              aria-describedby="fill-method-hint"
-              data-testid="tank-fill-method"
-              @change=${(e: Event) => this._setNameplate({ fillMethod: (e.target as HTMLSelectElement).value as FillMethod, fixedDipTube: undefined })}
-            >
-              ${FILL_METHOD_WORDS.map(([v, text]) => html`<option value=${v} ?selected=${fillMethodOf(np) === v}>${text}</option>`)}
-            </select>
-          </div>
-          ${this._recoveryFields()}
-          <number-field
-            label="Minimum design metal temperature"
-            name="mdmt"
-            quantity="temperature"
-            hint="Optional, from the nameplate (MDMT)"
-            .display=${disp}
-            .value=${np.minDesignMetalTemperature ?? null}
-            .min=${TANK_RANGES.mdmt.min}
-            .max=${TANK_RANGES.mdmt.max}
-            @value-change=${this._number('mdmt', (v) => this._setNameplate({ minDesignMetalTemperature: v ?? undefined }))}
-          ></number-field>
-        </fieldset>
-
-        <fieldset>
-          <legend>Shape (only for a level-height reading)</legend>
-          <div class="field">
-            <label for="shape">Shape</label>
-            <select
-              id="shape"
-              @change=${(e: Event) => this._setShape((e.target as HTMLSelectElement).value as ShapeKind)}
-            >
-              <option value="none" ?selected=${kind === 'none'}>Not given</option>
-              <option value="horizontal-cylinder" ?selected=${kind === 'horizontal-cylinder'}>
-                Horizontal cylinder
-              </option>
-              <option value="vertical-cylinder" ?selected=${kind === 'vertical-cylinder'}>
-                Vertical cylinder
-              </option>
-              <option value="sphere" ?selected=${kind === 'sphere'}>Sphere</option>
-            </select>
-          </div>
-          ${
-            shape && shape.kind !== 'sphere'
-              ? html`<div class="field">
-                  <label for="heads">Heads</label>
-                  <select
-                    id="heads"
-                    @change=${(e: Event) => this._patchShape({ heads: (e.target as HTMLSelectElement).value as HeadKind })}
-                  >
-                    <option value="hemispherical" ?selected=${shape.heads === 'hemispherical'}>
-                      Hemispherical
-                    </option>
-                    <option value="ellipsoidal" ?selected=${shape.heads === 'ellipsoidal'}>
-                      2:1 ellipsoidal
-                    </option>
-                    <option value="flat" ?selected=${shape.heads === 'flat'}>Flat</option>
-                  </select>
-                </div>`
-              : nothing
-          }
-          ${
-            shape
-              ? html`<number-field
-                  label="Inside diameter"
-                  name="diameter"
-                  quantity="length"
-                  required
-                  .display=${disp}
-                  .value=${shape.diameter}
-                  .min=${shape.kind === 'sphere' ? TANK_RANGES.sphereDiameter.min : TANK_RANGES.diameter.min}
-                  .max=${shape.kind === 'sphere' ? TANK_RANGES.sphereDiameter.max : TANK_RANGES.diameter.max}
-                  @value-change=${this._number('shape.diameter', (v) => this._patchShape({ diameter: v ?? Number.NaN }))}
-                ></number-field>`
-              : nothing
-          }
-          ${
-            shape && shape.kind !== 'sphere'
-              ? html`<number-field
-                  label="Shell length between head seams"
-                  name="shellLength"
-                  quantity="length"
-                  required
-                  .display=${disp}
-                  .value=${shape.shellLength}
-                  .min=${TANK_RANGES.shellLength.min}
-                  .max=${TANK_RANGES.shellLength.max}
-                  @value-change=${this._number('shape.shellLength', (v) => this._patchShape({ shellLength: v ?? Number.NaN }))}
-                ></number-field>`
-              : nothing
-          }
-        </fieldset>
+        ${nameplateFields(this._view())} ${shapeFields(this._view())}
 
         <div class="field">
           <label for="notes">Notes</label>
@@ -556,38 +291,6 @@ export class TankForm extends LitElement {
       </form>
     `;
   }
-}
-
-/** The fill method of a nameplate; an older record's `fixedDipTube: true` reads as the fixed gauge. */
-const fillMethodOf = (np: TankInput): FillMethod =>
-  np.fillMethod ?? (np.fixedDipTube ? 'fixed-gauge' : 'gauge');
-
-const CLASSES: [ContainerClass, string][] = [
-  ['storage', 'Storage (ASME)'],
-  ['cylinder', 'DOT cylinder'],
-  ['cargo', 'Cargo tank'],
-  ['portable', 'Portable tank'],
-];
-
-/** A new tank with empty-ish defaults (the user must check every nameplate figure). */
-export function blankTank(id: string, now = new Date().toISOString()): TankRecord {
-  return {
-    id,
-    site: '',
-    name: '',
-    notes: '',
-    // No guessed nameplate figures: NaN shows as an empty field and blocks saving until typed.
-    nameplate: {
-      waterCapacity: Number.NaN,
-      designPressure: Number.NaN,
-      placement: 'aboveground',
-      containerClass: 'storage',
-    },
-    productId: 'propane',
-    demo: false,
-    createdAt: now,
-    updatedAt: now,
-  };
 }
 
 customElements.define('tank-form', TankForm);

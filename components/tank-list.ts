@@ -17,6 +17,7 @@ import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits } from './display.js';
 import { productLabel } from './products.js';
+import { formatDate } from './format-date.js';
 import { DEFAULT_SETTINGS, type CheckRecord, type TankRecord } from './types.js';
 
 export interface TankIdDetail {
@@ -252,13 +253,6 @@ export class TankList extends LitElement {
       )}
     `;
   }
-}
-
-/** Short local date and time of an ISO timestamp; the ISO text itself if it cannot be read. */
-export function formatDate(iso: string): string {
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return iso;
-  return d.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 }
 
 customElements.define('tank-list', TankList);

@@ -23,7 +23,7 @@ import {
   resultLines,
   walkdownText,
 } from './walkdown-words.js';
-import { formatDate } from './tank-list.js';
+import { formatDate } from './format-date.js';
 
 export class WalkdownReport extends LitElement {
   static override properties = {

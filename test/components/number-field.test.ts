@@ -3,7 +3,7 @@
 import { expect, fixture, html, oneEvent } from '@open-wc/testing';
 import '../../components/number-field.js';
 import type { NumberField, NumberFieldChange } from '../../components/number-field.js';
-import { roundSignificant } from '../../components/number-field.js';
+import { roundSignificant } from '../../components/number-text.js';
 import { NUMBER_FORMATS } from '../../components/number-parse.js';
 import { DisplayUnits } from '../../components/display.js';
 import { toSI } from '../../thermo/units.js';

@@ -9,7 +9,7 @@ import '../../components/site-board.js';
 import type { SiteBoard } from '../../components/site-board.js';
 import type { BoardRow, SiteForecast } from '../../components/walkdown-board.js';
 import type { FillFlag } from '../../components/fill-flag.js';
-import { blankTank } from '../../components/tank-form.js';
+import { blankTank } from '../../components/blank-tank.js';
 import { deepAll } from './dom.js';
 
 function row(id: string, name: string): BoardRow {

@@ -5,7 +5,7 @@ import '../../components/tank-list.js';
 import '../../components/tank-form.js';
 import type { TankList } from '../../components/tank-list.js';
 import type { TankForm, TankSaveDetail } from '../../components/tank-form.js';
-import { blankTank } from '../../components/tank-form.js';
+import { blankTank } from '../../components/blank-tank.js';
 import type { TankRecord } from '../../components/types.js';
 import { DisplayUnits } from '../../components/display.js';
 import { toSI } from '../../thermo/units.js';

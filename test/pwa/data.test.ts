@@ -11,7 +11,7 @@ import { TEXT_LIMITS } from '../../components/limits.js';
 import { href, parseRoute } from '../../pwa/router.js';
 import { buildDemo, DEMO_REFRIGERANT_SITE, DEMO_SITE } from '../../pwa/demo.js';
 import { DisplayUnits } from '../../components/display.js';
-import { blankTank } from '../../components/tank-form.js';
+import { blankTank } from '../../components/blank-tank.js';
 import {
   DEFAULT_SETTINGS,
   emptyReadings,
