@@ -62,11 +62,13 @@ export class SiteRoute extends LitElement {
       .name {
         flex: 1;
         min-width: 0;
-        overflow-wrap: anywhere;
+        overflow-wrap: break-word;
         font-weight: 700;
       }
       li button {
-        padding: 0.4rem 0.6rem;
+        padding: 0;
+        width: 3.25rem;
+        font-size: 1.25rem;
       }
       .actions {
         display: flex;
@@ -109,8 +111,9 @@ export class SiteRoute extends LitElement {
     const byId = new Map(this.tanks.map((t) => [t.id, t]));
     return html`<h2>Route order: ${this.site}</h2>
       <p>
-        The order you walk the tanks in. Pick “Route order” when you start the walk; “Board order”
-        goes worst first instead.
+        The order you walk the tanks in: ▲ moves a tank one stop earlier, ▼ one stop later. Each
+        move is saved at once. When you start the walk, pick “route order” to follow it, or “board
+        order” to go worst first.
       </p>
       <p role="status" data-testid="route-status">
         ${this.route?.length ? this._said || 'Route set.' : 'No route set: shown in board order.'}
@@ -124,19 +127,21 @@ export class SiteRoute extends LitElement {
               class="quiet up"
               data-testid="route-up"
               aria-label="Move ${name} up"
+              title="Up"
               ?disabled=${i === 0}
               @click=${() => this._move(i, -1)}
             >
-              ▲ Up
+              ▲
             </button>
             <button
               class="quiet down"
               data-testid="route-down"
               aria-label="Move ${name} down"
+              title="Down"
               ?disabled=${i === ids.length - 1}
               @click=${() => this._move(i, 1)}
             >
-              ▼ Down
+              ▼
             </button>
           </li>`;
         })}
