@@ -174,6 +174,7 @@ export class SiteScreen extends LitElement {
     const tanks = this._siteTanks();
     let rows: BoardRow[] = [];
     let first = true;
+    this._rows = [];
     this._computing = { done: 0, total: tanks.length };
     const input = {
       tanks,
@@ -207,8 +208,9 @@ export class SiteScreen extends LitElement {
 
   private async _forecastChange(e: CustomEvent<{ forecast: SiteForecast }>): Promise<void> {
     this._forecast = e.detail.forecast;
+    // At once: the board says it is working from this event on, never shows the old figures.
+    this._compute();
     await this.store?.putSite(e.detail.forecast);
-    void this._compute();
   }
 
   /** Opens the tank's readings with the site forecast in place (written into its draft). */
