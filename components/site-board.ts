@@ -8,16 +8,21 @@
  *
  * @fires forecast-change - `CustomEvent<{ forecast: SiteForecast }>` (only with valid figures)
  * @fires board-open - `CustomEvent<{ id: string }>`: open this tank's readings with the forecast.
- * @fires walk-start - `CustomEvent<Record<string, never>>`
+ * @fires walk-start - `CustomEvent<{ order: 'board' | 'route' }>`
+ * @fires route-edit - `CustomEvent<Record<string, never>>`: open the route order.
  * @fires walk-resume - `CustomEvent<{ id: string }>`
  * @fires walk-open - `CustomEvent<{ id: string }>`: show a past walkdown's record.
  *
  * data-testid: `walkdown-forecast-air`, `walkdown-sun`, `walkdown-add-day`, `walkdown-row` (with
  * `data-tank-id`, `data-level`, `data-si-headroom-relief` (Pa), `data-si-liquid-full-margin` (K,
- * empty when none)), `walkdown-board-progress`, `walkdown-begin`, `walkdown-resume`,
- * `walkdown-history-item`.
+ * empty when none)), `walkdown-row-pending` (a tank still being worked out, with
+ * `data-tank-id`), `walkdown-board-unranked`, `walkdown-board-progress`, `walkdown-begin`,
+ * `walkdown-begin-route` (when a route is set), `walkdown-route-edit`, `walkdown-resume`;
+ * `walkdown-history-item` (in `walkdown-history`).
  */
-import { LitElement, html, css, nothing } from 'lit';
+import { LitElement, html, nothing, type TemplateResult } from 'lit';
+import { repeat } from 'lit/directives/repeat.js';
+import { siteBoardStyles } from './site-board-styles.js';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits } from './display.js';
 import './number-field.js';
@@ -27,6 +32,7 @@ import { T_RANGE_K } from './check-input.js';
 import { READING_RANGES } from './check-form.js';
 import { RANK_RULE, type BoardRow, type SiteForecast } from './walkdown-board.js';
 import { progress, type WalkdownRecord } from './walkdown-types.js';
+import './walkdown-history.js';
 import {
   LEVEL_SHAPES,
   LEVEL_WORDS,
@@ -85,69 +91,7 @@ export class SiteBoard extends LitElement {
     this._ownOpen = false;
   }
 
-  static override styles = [
-    baseStyles,
-    levelStyles,
-    css`
-      ol {
-        list-style: none;
-        margin: 0;
-        padding: 0;
-      }
-      li.row {
-        border: var(--border-width) solid var(--line);
-        border-radius: 0.6rem;
-        margin: 0 0 0.6rem;
-        background: var(--paper);
-      }
-      li.row[data-level='danger'],
-      li.row[data-level='warning'] {
-        border-width: 4px;
-        border-color: var(--ink);
-      }
-      .open {
-        width: 100%;
-        display: block;
-        text-align: left;
-        border: 0;
-        padding: 0.6rem;
-        font-weight: 400;
-      }
-      .name {
-        font-weight: 800;
-        font-size: 1.05em;
-      }
-      .line {
-        display: block;
-        overflow-wrap: anywhere;
-      }
-      .muted {
-        color: var(--muted);
-      }
-      .days {
-        display: grid;
-        gap: 0.25rem;
-      }
-      .rule,
-      .standing {
-        font-size: 0.92em;
-      }
-      .actions {
-        display: flex;
-        flex-wrap: wrap;
-        gap: 0.5rem;
-        margin: 0.75rem 0;
-      }
-      fieldset {
-        border: var(--border-width) solid var(--line);
-        border-radius: 0.6rem;
-        margin: 0 0 0.75rem;
-      }
-      h2 {
-        overflow-wrap: anywhere;
-      }
-    `,
-  ];
+  static override styles = [baseStyles, levelStyles, siteBoardStyles];
 
   private _fire<T>(type: string, detail: T): void {
     this.dispatchEvent(new CustomEvent<T>(type, { detail, bubbles: true, composed: true }));
@@ -259,11 +203,55 @@ export class SiteBoard extends LitElement {
     </fieldset>`;
   }
 
-  private _row(row: BoardRow, i: number) {
-    const d = this.display;
-    const res = walkResult(row);
+  /**
+   * The rows. While the figures come in: every tank by name (as `tanks` is given), its figures in
+   * place as they arrive, "working…" until then; nothing moves while the user reads. Ranked once,
+   * when all are in (keyed by tank, so the ranking moves rows rather than drawing them again).
+   */
+  private _list(c: { total: number } | null) {
+    const byId = new Map(this.rows.map((r) => [r.tank.id, r]));
+    const list: (BoardRow | TankRecord)[] = c
+      ? this.tanks.map((t) => byId.get(t.id) ?? t)
+      : this.rows;
+    return html`${
+        c
+          ? html`<p class="muted" data-testid="walkdown-board-unranked">
+              Listed by name while the figures come in; ranked worst first once all ${c.total} are
+              in.
+            </p>`
+          : nothing
+      }
+      <ol aria-label=${c ? 'Tanks by name, being worked out' : 'Tanks, worst first'}>
+        ${repeat(
+          list,
+          (x) => ('tank' in x ? x.tank.id : x.id),
+          (x, i) =>
+            'tank' in x
+              ? this._row(x, c ? null : i)
+              : html`<li class="row" data-testid="walkdown-row-pending" data-tank-id=${x.id}>
+                  <span class="open"
+                    ><span class="name">${x.name}</span> <span>working…</span></span
+                  >
+                </li>`,
+        )}
+      </ol>`;
+  }
+
+  /** Each row's figures as drawn for the current display: a new batch or the ranking draws no row twice. */
+  private _drawn = new WeakMap<BoardRow, TemplateResult>();
+
+  protected override willUpdate(changed: Map<PropertyKey, unknown>): void {
+    if (changed.has('display') || changed.has('fillFlags') || changed.has('staleDays'))
+      this._drawn = new WeakMap();
+  }
+
+  /** One tank's row; `i` is its rank, or null before the list is ranked. */
+  private _row(row: BoardRow, i: number | null) {
+    const n = i === null ? '' : `${i + 1}. `;
     const relief = row.summary ? String(row.summary.headroomToRelief) : '';
     const full = row.liquidFullMargin === null ? '' : String(row.liquidFullMargin);
+    let body = this._drawn.get(row);
+    if (!body) this._drawn.set(row, (body = this._body(row)));
     return html`<li
       class="row"
       data-testid="walkdown-row"
@@ -275,66 +263,74 @@ export class SiteBoard extends LitElement {
       <button
         class="open"
         @click=${() => this._fire('board-open', { id: row.tank.id })}
-        aria-label="${i + 1}. ${row.tank.name}: ${LEVEL_WORDS[row.level]}. Open its readings"
+        aria-label="${n}${row.tank.name}: ${LEVEL_WORDS[row.level]}. Open its readings"
       >
         <span class="line"
-          ><span class="name">${i + 1}. ${row.tank.name}</span>
+          ><span class="name">${n}${row.tank.name}</span>
           <span class="level ${row.level}"
             >${LEVEL_SHAPES[row.level]} ${LEVEL_WORDS[row.level]}</span
           ></span
         >
-        ${
-          res
-            ? html`${resultLines(res, d).map((l) => html`<span class="line">${l}</span>`)}
-              ${
-                row.result?.cautions[0] && row.summary?.topLevel
-                  ? html`<span class="line">Worst: ${cautionText(row.result.cautions[0], d)}</span>`
-                  : nothing
-              }`
-            : html`<span class="line">${row.reason}: not projected</span>`
-        }
-        ${
-          this.fillFlags?.get(row.tank.id)
-            ? html`<span class="line" data-testid="walkdown-fill-flag"
-                ><strong>▲ Gauge read low at the last fill</strong> (${formatDate(
-                  this.fillFlags.get(row.tank.id)!.at,
-                )}):
-                the tank may hold more than its float gauge shows. Check the contents another way
-                (by weight, or with the fixed maximum-level gauge) as site procedures require before
-                going by that gauge.</span
-              >`
-            : nothing
-        }
-        <span class="line muted"
-          >Readings ${row.ageMs === null ? 'none' : `${ageText(row.ageMs)} old`} (limit
-          ${this.staleDays} days)</span
-        >
+        ${body}
       </button>
     </li>`;
   }
 
-  private _history() {
-    if (!this.history.length) return nothing;
-    return html`<section aria-labelledby="h-hist">
-      <h3 id="h-hist">Walkdowns of this site</h3>
-      <ol>
-        ${this.history.map((w) => {
-          const p = progress(w);
-          return html`<li>
-            <button
-              class="quiet"
-              data-testid="walkdown-history-item"
-              data-id=${w.id}
-              @click=${() =>
-                this._fire(w.status === 'finished' ? 'walk-open' : 'walk-resume', { id: w.id })}
-            >
-              ${formatDate(w.startedAt)} · ${p.done} of ${p.total} done ·
-              ${w.status === 'finished' ? `by ${w.checkedBy || 'not given'}` : 'under way'}
-            </button>
-          </li>`;
-        })}
-      </ol>
-    </section>`;
+  /** A row's figures, flag and age. */
+  private _body(row: BoardRow) {
+    const d = this.display;
+    const res = walkResult(row);
+    return html` ${
+        res
+          ? html`${resultLines(res, d).map((l) => html`<span class="line">${l}</span>`)}
+            ${
+              row.result?.cautions[0] && row.summary?.topLevel
+                ? html`<span class="line">Worst: ${cautionText(row.result.cautions[0], d)}</span>`
+                : nothing
+            }`
+          : html`<span class="line">${row.reason}: not projected</span>`
+      }
+      ${
+        this.fillFlags?.get(row.tank.id)
+          ? html`<span class="line" data-testid="walkdown-fill-flag"
+              ><strong>▲ Gauge read low at the last fill</strong> (${formatDate(
+                this.fillFlags.get(row.tank.id)!.at,
+              )}):
+              the tank may hold more than its float gauge shows. Check the contents another way (by
+              weight, or with the fixed maximum-level gauge) as site procedures require before going
+              by that gauge.</span
+            >`
+          : nothing
+      }
+      <span class="line muted"
+        >Readings ${row.ageMs === null ? 'none' : `${ageText(row.ageMs)} old`} (limit
+        ${this.staleDays} days)</span
+      >`;
+  }
+
+  /** One start, or two when the site has a route: worst first, or the route's order. */
+  private _startButtons(disabled: boolean) {
+    const start = (order: 'board' | 'route') => () => this._fire('walk-start', { order });
+    if (!this.forecast.route?.length)
+      return html`<button
+        class="primary"
+        data-testid="walkdown-begin"
+        ?disabled=${disabled}
+        @click=${start('board')}
+      >
+        Start the walk
+      </button>`;
+    return html`<button
+        class="primary"
+        data-testid="walkdown-begin-route"
+        ?disabled=${disabled}
+        @click=${start('route')}
+      >
+        Start in route order
+      </button>
+      <button data-testid="walkdown-begin" ?disabled=${disabled} @click=${start('board')}>
+        Start in board order (worst first)
+      </button>`;
   }
 
   override render() {
@@ -358,15 +354,15 @@ export class SiteBoard extends LitElement {
               >
                 Go on with the walk (${progress(active).done} of ${progress(active).total} done)
               </button>`
-            : html`<button
-                class="primary"
-                data-testid="walkdown-begin"
-                ?disabled=${c !== null || this.rows.length === 0}
-                @click=${() => this._fire('walk-start', {})}
-              >
-                Start the walk
-              </button>`
+            : this._startButtons(c !== null || this.rows.length === 0)
         }
+        <button
+          class="quiet"
+          data-testid="walkdown-route-edit"
+          @click=${() => this._fire('route-edit', {})}
+        >
+          ${this.forecast.route?.length ? 'Change the route order' : 'Set a route order'}
+        </button>
       </div>
       <p class="rule">${RANK_RULE}</p>
       ${
@@ -377,11 +373,9 @@ export class SiteBoard extends LitElement {
             </p>`
           : nothing
       }
-      <ol aria-label="Tanks, worst first">
-        ${this.rows.map((r, i) => this._row(r, i))}
-      </ol>
+      ${this._list(c)}
       <p class="standing" role="note">${STANDING_WALK}</p>
-      ${this._history()}
+      <walkdown-history .history=${this.history}></walkdown-history>
     `;
   }
 }

@@ -15,6 +15,7 @@
  */
 import { runCheck, summarize } from './check-input.js';
 import { siteRulesOf, type SiteRule } from './site-rules.js';
+import { routeOrder } from './walkdown-route.js';
 import type { CheckRecord, CheckSummary, Readings, Settings, TankRecord } from './types.js';
 import type { CautionLevel, TankCheckResult } from '../thermo/check/types.js';
 
@@ -224,10 +225,8 @@ export function rankRows(rows: readonly BoardRow[]): BoardRow[] {
  * order), else the board order.
  */
 export function walkOrder(ranked: readonly BoardRow[], route?: readonly string[]): string[] {
-  const ids = ranked.map((r) => r.tank.id);
-  if (!route?.length) return ids;
-  const present = new Set(ids);
-  const first = route.filter((id) => present.has(id));
-  const seen = new Set(first);
-  return [...first, ...ids.filter((id) => !seen.has(id))];
+  return routeOrder(
+    ranked.map((r) => r.tank.id),
+    route,
+  );
 }

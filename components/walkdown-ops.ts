@@ -40,7 +40,10 @@ export function walkResult(row: BoardRow): WalkResult | null {
   };
 }
 
-/** Starts a walk over the ranked board, in the site route's order when one is set. */
+/**
+ * Starts a walk over the ranked board: in the site route's order when one is set and `order` is
+ * 'route' (the default), else worst first as on the board.
+ */
 export function startWalk(
   site: string,
   ranked: readonly BoardRow[],
@@ -49,9 +52,11 @@ export function startWalk(
   checkedBy: string,
   sunAllowance: number,
   now = new Date(),
+  order: 'board' | 'route' = 'route',
 ): WalkdownRecord {
   const byId = new Map(ranked.map((r) => [r.tank.id, r]));
-  const entries: WalkEntry[] = walkOrder(ranked, forecast.route).map((id) => {
+  const route = order === 'route' ? forecast.route : undefined;
+  const entries: WalkEntry[] = walkOrder(ranked, route).map((id) => {
     const row = byId.get(id)!;
     const from = latest.get(id)?.readings;
     return {

@@ -100,15 +100,66 @@ export class WalkdownReport extends LitElement {
         padding: 0.4rem;
         border-radius: 0.4rem;
       }
+      /* Print: one or two A4/Letter pages for a site of about six tanks (test/e2e/walkdown-print). */
       @media print {
         .actions {
           display: none;
         }
         :host {
-          font-size: 10pt;
+          font-size: 9pt;
+          line-height: 1.3;
         }
         .wrap {
           overflow: visible;
+        }
+        h2 {
+          font-size: 13pt;
+          margin: 0 0 0.3rem;
+        }
+        h3 {
+          font-size: 10.5pt;
+          margin: 0.5rem 0 0.2rem;
+          break-after: avoid;
+        }
+        p,
+        ul {
+          margin: 0.1rem 0;
+        }
+        ul {
+          padding-left: 1.1rem;
+        }
+        table {
+          font-size: 8.5pt;
+        }
+        thead {
+          display: table-header-group;
+        }
+        tr {
+          break-inside: avoid;
+        }
+        .tank {
+          margin: 0;
+          padding: 0.25rem 0;
+          border-top: 1px solid var(--line);
+        }
+        .tank h4 {
+          margin: 0;
+          break-after: avoid;
+        }
+        /* A tank's figures on one run of text, separated by a dot, to save lines. */
+        .tank .line {
+          display: inline;
+        }
+        .tank .line + .line::before {
+          content: ' · ';
+        }
+        .level {
+          padding: 0 0.2rem;
+          border-width: 1px;
+        }
+        .standing {
+          break-inside: avoid;
+          margin-top: 0.4rem;
         }
       }
     `,

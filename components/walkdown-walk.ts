@@ -11,7 +11,8 @@
  * data-testid: `walkdown-progress`, `walkdown-tank`, `walkdown-liquid-temperature`,
  * `walkdown-gauge-percent`, `walkdown-level-height`, `walkdown-net-mass`, `walkdown-pressure`,
  * `walkdown-note`, `walkdown-next`, `walkdown-back`, `walkdown-skip-reason`, `walkdown-skip`,
- * `walkdown-checked-by`, `walkdown-finish`, `walkdown-stop` (with `data-index`, `data-status`).
+ * `walkdown-checked-by`, `walkdown-finish`, `walkdown-stop` (with `data-index`, `data-tank-id`,
+ * `data-status`).
  */
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
@@ -322,6 +323,7 @@ export class WalkdownWalk extends LitElement {
                 class="quiet"
                 data-testid="walkdown-stop"
                 data-index=${i}
+                data-tank-id=${e.tankId}
                 data-status=${e.status}
                 aria-current=${i === w.current ? 'step' : nothing}
                 @click=${() => this._moveTo(w, i)}

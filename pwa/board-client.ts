@@ -28,6 +28,11 @@ export class BoardClient {
     else void this.onPage(input, job, onBatch);
   }
 
+  /** Starts the worker ahead of the first run, so its engine loads while the page reads storage. */
+  warm(): void {
+    this.start();
+  }
+
   close(): void {
     this.job++;
     this.worker?.terminate();

@@ -41,9 +41,12 @@ async function run(j: BoardJob): Promise<void> {
   const now = new Date(j.now);
   let batch: BoardRow[] = [];
   let start = performance.now();
+  let first = true;
   for (const t of j.tanks) {
     batch.push(projectTank(t, latest.get(t.id) ?? null, j.forecast, j.settings, now, j.staleDays));
-    if (performance.now() - start > BATCH_MS) {
+    // The first tank goes out alone, so the top row fills in as soon as it can.
+    if (first || performance.now() - start > BATCH_MS) {
+      first = false;
       postMessage({ job: j.job, rows: batch, finished: false } satisfies BoardBatch);
       batch = [];
       // Let a newer job's message in; stop if one came.

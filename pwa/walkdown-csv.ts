@@ -5,16 +5,16 @@
  */
 import { DisplayUnits, formatPercent } from '../components/display.js';
 import { forecastPeakAir } from '../components/walkdown-board.js';
-import type { WalkdownRecord } from '../components/walkdown-types.js';
+import type { WalkEntry, WalkdownRecord } from '../components/walkdown-types.js';
 import { LEVEL_WORDS, cautionText, rankedEntries } from '../components/walkdown-words.js';
 import { cell, numCell } from './csv.js';
 
-export function walkdownToCsv(w: WalkdownRecord, d: DisplayUnits): string {
-  type Q = Parameters<DisplayUnits['number']>[0];
-  const n = (q: Q, v: number | null | undefined, round: 'nearest' | 'up' | 'down' = 'nearest') =>
-    numCell(d.number(q, v ?? null, round));
+type Q = Parameters<DisplayUnits['number']>[0];
+
+/** The header row, with each quantity's unit as the user's settings give it. */
+function header(d: DisplayUnits): string[] {
   const L = (q: Parameters<DisplayUnits['label']>[0]) => d.label(q);
-  const head = [
+  return [
     'site',
     'walk started (UTC)',
     'walk finished (UTC)',
@@ -42,54 +42,49 @@ export function walkdownToCsv(w: WalkdownRecord, d: DisplayUnits): string {
     'level',
     'cautions',
   ];
-  const air = forecastPeakAir(w.forecast);
-  const rows = rankedEntries(w).map((e, i) => {
-    const r = e.result;
-    const s = r?.summary;
-    const allowance =
-      w.forecast.tankAllowances.find((a) => a.tankId === e.tankId)?.sunAllowance ??
-      w.forecast.sunAllowance;
-    return [
-      cell(w.site),
-      cell(w.startedAt),
-      cell(w.finishedAt ?? ''),
-      cell(w.checkedBy),
-      cell(w.appVersion),
-      String(i + 1),
-      cell(e.tankName),
-      cell(
-        e.status === 'pending'
-          ? 'not visited'
-          : e.status === 'unreached'
-            ? 'could not reach'
-            : 'checked',
-      ),
-      cell(e.reason),
-      cell(e.note),
-      cell(r?.productLabel ?? ''),
-      n('temperature', air),
-      n('temperatureDifference', allowance),
-      n('temperature', r?.peakTemperature),
-      n('temperature', e.readings.liquidTemperature),
-      e.readings.gaugePercent === null
-        ? ''
-        : numCell(formatPercent(e.readings.gaugePercent).replace(' %', '')),
-      n('gaugePressure', e.readings.gaugePressure),
-      n('gaugePressure', r?.designPressure),
-      n('gaugePressure', r?.reliefSetPressure),
-      n('gaugePressure', s?.peakPressure, 'up'),
-      n('pressureDifference', s?.headroomToRelief, 'down'),
-      n('pressureDifference', s?.headroomToDesign, 'down'),
-      r ? numCell(formatPercent(r.peakLiquidPercent, 'up').replace(' %', '')) : '',
-      n('temperatureDifference', r?.liquidFullMargin, 'down'),
-      cell(r ? LEVEL_WORDS[r.level] : ''),
-      cell(
-        (r?.cautions ?? [])
-          .filter((c) => c.code !== 'standing')
-          .map((c) => `${c.level}: ${cautionText(c, d)}`)
-          .join(' | '),
-      ),
-    ];
-  });
-  return [head.map(cell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';
+}
+
+const STATUS_WORDS = { pending: 'not visited', unreached: 'could not reach', checked: 'checked' };
+
+/** One tank's row: the walk's columns, then its readings, then its figures at the forecast. */
+function entryRow(w: WalkdownRecord, e: WalkEntry, rank: number, d: DisplayUnits): string[] {
+  const n = (q: Q, v: number | null | undefined, round: 'nearest' | 'up' | 'down' = 'nearest') =>
+    numCell(d.number(q, v ?? null, round));
+  const r = e.result;
+  const s = r?.summary;
+  const allowance =
+    w.forecast.tankAllowances.find((a) => a.tankId === e.tankId)?.sunAllowance ??
+    w.forecast.sunAllowance;
+  return [
+    ...[w.site, w.startedAt, w.finishedAt ?? '', w.checkedBy, w.appVersion].map(cell),
+    String(rank),
+    ...[e.tankName, STATUS_WORDS[e.status], e.reason, e.note, r?.productLabel ?? ''].map(cell),
+    n('temperature', forecastPeakAir(w.forecast)),
+    n('temperatureDifference', allowance),
+    n('temperature', r?.peakTemperature),
+    n('temperature', e.readings.liquidTemperature),
+    e.readings.gaugePercent === null
+      ? ''
+      : numCell(formatPercent(e.readings.gaugePercent).replace(' %', '')),
+    n('gaugePressure', e.readings.gaugePressure),
+    n('gaugePressure', r?.designPressure),
+    n('gaugePressure', r?.reliefSetPressure),
+    n('gaugePressure', s?.peakPressure, 'up'),
+    n('pressureDifference', s?.headroomToRelief, 'down'),
+    n('pressureDifference', s?.headroomToDesign, 'down'),
+    r ? numCell(formatPercent(r.peakLiquidPercent, 'up').replace(' %', '')) : '',
+    n('temperatureDifference', r?.liquidFullMargin, 'down'),
+    cell(r ? LEVEL_WORDS[r.level] : ''),
+    cell(
+      (r?.cautions ?? [])
+        .filter((c) => c.code !== 'standing')
+        .map((c) => `${c.level}: ${cautionText(c, d)}`)
+        .join(' | '),
+    ),
+  ];
+}
+
+export function walkdownToCsv(w: WalkdownRecord, d: DisplayUnits): string {
+  const rows = rankedEntries(w).map((e, i) => entryRow(w, e, i + 1, d));
+  return [header(d).map(cell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';
 }

@@ -46,21 +46,21 @@ export async function latestReadingsFor(
     for (const e of w.entries)
       if (ids.has(e.tankId) && e.status === 'checked' && e.result && e.at)
         add(e.tankId, { readings: e.readings, at: e.at, source: 'walk' });
+  // A demo tank with no check reads its seeded readings: all such reads at once, not in turn.
+  const drafts = await Promise.all(
+    tanks.map((t) => (t.demo && !candidates.has(t.id) ? store.getDraft(t.id) : undefined)),
+  );
   const out = new Map<string, LatestReadings | null>();
-  for (const t of tanks) {
-    let list = candidates.get(t.id) ?? [];
-    if (list.length === 0 && t.demo) {
-      const draft = await store.getDraft(t.id);
-      if (draft)
-        list = [
-          {
-            readings: draft.readings,
-            at: readingsTime(draft.readings, draft.updatedAt),
-            source: 'demo',
-          },
-        ];
-    }
+  tanks.forEach((t, i) => {
+    const draft = drafts[i];
+    const list = candidates.get(t.id) ?? [];
+    if (list.length === 0 && draft)
+      list.push({
+        readings: draft.readings,
+        at: readingsTime(draft.readings, draft.updatedAt),
+        source: 'demo',
+      });
     out.set(t.id, newestReadings(list));
-  }
+  });
   return out;
 }

@@ -11,6 +11,7 @@ import { DisplayUnits } from '../components/display.js';
 import '../components/site-board.js';
 import '../components/walkdown-walk.js';
 import '../components/walkdown-report.js';
+import '../components/site-route.js';
 import type { CheckRecord, Settings, TankRecord } from '../components/types.js';
 import {
   allowanceFor,
@@ -46,6 +47,7 @@ export class SiteScreen extends LitElement {
     _walk: { state: true },
     _lastWho: { state: true },
     _fillFlags: { state: true },
+    _routeOpen: { state: true },
   };
 
   declare store: Store | null;
@@ -63,6 +65,8 @@ export class SiteScreen extends LitElement {
   declare _lastWho: string;
   /** Tanks whose last fill found the gauge reading low, until a later check (components/fill-flag.ts). */
   declare _fillFlags: Map<string, FillFlag>;
+  /** The route order is on screen in place of the board. */
+  declare _routeOpen: boolean;
 
   private _latest = new Map<string, LatestReadings | null>();
   private readonly _board = new BoardClient();
@@ -83,6 +87,7 @@ export class SiteScreen extends LitElement {
     this._walk = undefined;
     this._lastWho = '';
     this._fillFlags = new Map();
+    this._routeOpen = false;
   }
 
   static override styles = [baseStyles];
@@ -95,19 +100,35 @@ export class SiteScreen extends LitElement {
     }
   }
 
+  private _sorted: { from: TankRecord[]; site: string; tanks: TankRecord[] } | null = null;
+
+  /** The site's tanks by name: the order the board fills in (and is computed in). */
   private _siteTanks(): TankRecord[] {
-    return this.tanks.filter((t) => siteOf(t) === this.site);
+    const m = this._sorted;
+    if (m && m.from === this.tanks && m.site === this.site) return m.tanks;
+    const tanks = this.tanks.filter((t) => siteOf(t) === this.site).sort(byName);
+    this._sorted = { from: this.tanks, site: this.site, tanks };
+    return tanks;
+  }
+
+  /** The site's tanks for the route: in board order once ranked, by name before. */
+  private _routeTanks(): TankRecord[] {
+    return this._computing ? this._siteTanks() : this._rows.map((r) => r.tank);
   }
 
   private async _load(): Promise<void> {
     const store = this.store!;
-    const all = await store.listWalkdowns();
-    this._lastWho = all.find((w) => w.status === 'finished' && w.checkedBy)?.checkedBy ?? '';
     if (this.view !== 'board') {
+      const all = await store.listWalkdowns();
+      this._lastWho = lastWho(all);
       this._walk = (await store.getWalkdown(this.walkId)) ?? null;
       return;
     }
-    this._history = all.filter((w) => w.site === this.site);
+    // The board shows at once, every tank by name with "working…", from the stored forecast;
+    // the figures follow from the worker.
+    this._rows = [];
+    this._routeOpen = false;
+    this._computing = { done: 0, total: this._siteTanks().length };
     this._forecast = (await store.getSite(this.site)) ?? {
       site: this.site,
       days: [],
@@ -115,22 +136,33 @@ export class SiteScreen extends LitElement {
       tankAllowances: [],
       enteredAt: '',
     };
-    this._latest = await latestReadingsFor(store, this._siteTanks(), this.checks, all);
-    this._fillFlags = await this._flags(store);
+    void this.updateComplete.then(() => this._event('board-shown', 0));
+    const all = await store.listWalkdowns();
+    this._lastWho = lastWho(all);
+    this._history = all.filter((w) => w.site === this.site);
+    [this._latest, this._fillFlags] = await Promise.all([
+      latestReadingsFor(store, this._siteTanks(), this.checks, all),
+      this._flags(store),
+    ]);
     void this._compute();
+  }
+
+  private _event(name: string, tanks: number): void {
+    this.dispatchEvent(new CustomEvent(name, { detail: { tanks }, bubbles: true, composed: true }));
   }
 
   /** The gauge-low flag of each tank of the site whose last fill read low. */
   private async _flags(store: Store): Promise<Map<string, FillFlag>> {
     const flags = new Map<string, FillFlag>();
-    for (const t of this._siteTanks()) {
-      const fills = await store.listFills(t.id);
-      if (!fills.length) continue;
+    const fills = await store.listFills();
+    const ids = new Set(this._siteTanks().map((t) => t.id));
+    for (const id of new Set(fills.map((f) => f.tankId))) {
+      if (!ids.has(id)) continue;
       const flag = lastFillFlag(
-        fills,
-        this.checks.filter((c) => c.tankId === t.id),
+        fills.filter((f) => f.tankId === id),
+        this.checks.filter((c) => c.tankId === id),
       );
-      if (flag) flags.set(t.id, flag);
+      if (flag) flags.set(id, flag);
     }
     return flags;
   }
@@ -142,6 +174,7 @@ export class SiteScreen extends LitElement {
     const tanks = this._siteTanks();
     let rows: BoardRow[] = [];
     let first = true;
+    this._rows = [];
     this._computing = { done: 0, total: tanks.length };
     const input = {
       tanks,
@@ -153,21 +186,19 @@ export class SiteScreen extends LitElement {
     };
     this._board.run(structuredClone(input), (batch, finished) => {
       rows = rows.concat(batch);
-      this._rows = rankRows(rows);
+      // Ranked once, when all are in: until then the board keeps the tanks by name.
+      this._rows = finished ? rankRows(rows) : rows;
       this._computing = finished ? null : { done: rows.length, total: tanks.length };
       const name = finished ? 'board-ready' : first ? 'board-first' : '';
       first = false;
-      if (name)
-        void this.updateComplete.then(() =>
-          this.dispatchEvent(
-            new CustomEvent(name, {
-              detail: { tanks: rows.length },
-              bubbles: true,
-              composed: true,
-            }),
-          ),
-        );
+      if (name) void this.updateComplete.then(() => this._event(name, rows.length));
     });
+  }
+
+  override connectedCallback(): void {
+    super.connectedCallback();
+    // Start the worker (and its engine) while the stored data loads.
+    this._board.warm();
   }
 
   override disconnectedCallback(): void {
@@ -177,8 +208,9 @@ export class SiteScreen extends LitElement {
 
   private async _forecastChange(e: CustomEvent<{ forecast: SiteForecast }>): Promise<void> {
     this._forecast = e.detail.forecast;
+    // At once: the board says it is working from this event on, never shows the old figures.
+    this._compute();
     await this.store?.putSite(e.detail.forecast);
-    void this._compute();
   }
 
   /** Opens the tank's readings with the site forecast in place (written into its draft). */
@@ -198,7 +230,17 @@ export class SiteScreen extends LitElement {
     location.hash = href({ name: 'check', id });
   }
 
-  private async _start(): Promise<void> {
+  /** Saves the site's route with its record (null drops it) at every move. */
+  private async _route(e: CustomEvent<{ route: string[] | null }>): Promise<void> {
+    const f = this._forecast;
+    if (!f) return;
+    const next: SiteForecast = { ...f, route: e.detail.route ?? [] };
+    if (!e.detail.route) delete next.route;
+    this._forecast = next;
+    await this.store?.putSite(next);
+  }
+
+  private async _start(e: CustomEvent<{ order?: 'board' | 'route' }>): Promise<void> {
     const store = this.store;
     if (!store || !this._forecast || this._computing) return;
     const walk = startWalk(
@@ -208,6 +250,8 @@ export class SiteScreen extends LitElement {
       this._latest,
       this._lastWho,
       this.settings.sunAllowance,
+      new Date(),
+      e.detail?.order ?? 'board',
     );
     await store.putWalkdown(walk);
     location.hash = href({ name: 'walk', id: walk.id });
@@ -238,10 +282,27 @@ export class SiteScreen extends LitElement {
     setTimeout(() => URL.revokeObjectURL(url), 10_000);
   }
 
+  private _display: { from: Settings; display: DisplayUnits } | null = null;
+
+  /** The display units, made again only when the settings change (the board redraws on a new one). */
+  private _units(): DisplayUnits {
+    if (this._display?.from !== this.settings)
+      this._display = { from: this.settings, display: DisplayUnits.fromSettings(this.settings) };
+    return this._display.display;
+  }
+
   override render() {
-    const display = DisplayUnits.fromSettings(this.settings);
+    const display = this._units();
     if (this.view === 'board') {
       if (!this._forecast) return html`<p>Loading…</p>`;
+      if (this._routeOpen)
+        return html`<site-route
+          .site=${this.site}
+          .tanks=${this._routeTanks()}
+          .route=${this._forecast.route}
+          @route-change=${this._route}
+          @route-done=${() => (this._routeOpen = false)}
+        ></site-route>`;
       return html`<site-board
         .site=${this.site}
         .forecast=${this._forecast}
@@ -255,6 +316,10 @@ export class SiteScreen extends LitElement {
         @forecast-change=${this._forecastChange}
         @board-open=${this._open}
         @walk-start=${this._start}
+        @route-edit=${() => {
+          this._routeOpen = true;
+          window.scrollTo(0, 0);
+        }}
         @walk-resume=${(e: CustomEvent<{ id: string }>) =>
           (location.hash = href({ name: 'walk', id: e.detail.id }))}
         @walk-open=${(e: CustomEvent<{ id: string }>) =>
@@ -278,6 +343,17 @@ export class SiteScreen extends LitElement {
       @walk-csv=${this._csv}
     ></walkdown-report>`;
   }
+}
+
+const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
+
+function byName(a: TankRecord, b: TankRecord): number {
+  return collator.compare(a.name, b.name);
+}
+
+/** Who checked the newest finished walkdown (remembered for the next). */
+function lastWho(all: readonly WalkdownRecord[]): string {
+  return all.find((w) => w.status === 'finished' && w.checkedBy)?.checkedBy ?? '';
 }
 
 customElements.define('site-screen', SiteScreen);

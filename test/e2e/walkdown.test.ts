@@ -212,8 +212,11 @@ describe('site walkdown', () => {
     expect(first.level).not.toBe('needs-reading');
     await ageReadings(page, first.id, 10);
     await page.reload();
+    // After the reload the board loads and computes again: a state to wait for, bounded.
     await expect
-      .poll(async () => (await rows(page)).find((r) => r.id === first.id)?.level)
+      .poll(async () => (await rows(page)).find((r) => r.id === first.id)?.level, {
+        timeout: 15_000,
+      })
       .toBe('needs-reading');
     const row = (await rows(page)).find((r) => r.id === first.id)!;
     expect(row.relief).toBe('');

@@ -9,8 +9,6 @@ const RESERVED = [
   /^components\/check-screen\.ts$/,
   /^components\/tank-list\.ts$/,
   /^pwa\/storage\.ts$/,
-  /(^|\/)walkdown-[^/]*\.ts$/,
-  /^components\/site-board\.ts$/,
 ];
 const reserved = (file: string): boolean => RESERVED.some((r) => r.test(file));
 

@@ -132,6 +132,45 @@ describe('walkdowns in the backup', () => {
   });
 });
 
+describe('the site route in the backup', () => {
+  it('a site record without a route (as written before routes) imports as it was', () => {
+    const { route: _unused, ...old } = FORECAST;
+    expect(_unused).to.deep.equal(['a']);
+    const r = parseBackup(
+      JSON.stringify({
+        ...makeBackup({ tanks: [tank('a')], checks: [], settings: null }),
+        sites: [old],
+      }),
+    );
+    expect(r.ok).to.equal(true);
+    if (r.ok) {
+      expect(r.data.sites).to.deep.equal([old]);
+      expect('route' in r.data.sites![0]!).to.equal(false);
+    }
+  });
+
+  it('a route survives storage and a backup round trip in its order; a bad stop is refused', async () => {
+    const name = `test-${Math.random().toString(36).slice(2)}`;
+    names.push(name);
+    const store = await Store.open(name);
+    const site = { ...FORECAST, route: ['c', 'a', 'b'] };
+    await store.putSite(site);
+    expect((await store.getSite('S'))?.route).to.deep.equal(['c', 'a', 'b']);
+    const back = await store.exportAll();
+    store.close();
+    const r = parseBackup(JSON.stringify(makeBackup(back)));
+    expect(r.ok && r.data.sites).to.deep.equal([site]);
+    const bad = parseBackup(
+      JSON.stringify({
+        ...makeBackup({ tanks: [], checks: [], settings: null }),
+        sites: [{ ...FORECAST, route: ['a', 42] }],
+      }),
+    );
+    expect(bad.ok).to.equal(false);
+    if (!bad.ok) expect(bad.reason).to.contain('Site forecast 1').and.contain('route stop 2');
+  });
+});
+
 describe('walkdown routes', () => {
   it('a site with a slash, a walk and a record read back from their links', () => {
     const routes: Route[] = [
