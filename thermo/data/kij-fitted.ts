@@ -12,12 +12,14 @@ export interface FittedPair {
   readonly slope: number;
   /** Curvature: k_ij(T) = k + slope·t + curve·t², t = T/T_REF − 1. */
   readonly curve: number;
-  /** Excess of the volume correction's pseudo-critical temperature, K (solvers/mixture.ts). */
+  /** Excess of the volume correction's pseudo-critical temperature, K (eos/blendVolume.ts). */
   readonly xi: number;
-  /** Excess volume of the translation, m³/mol (solvers/mixture.ts). */
+  /** Excess volume of the translation, m³/mol (eos/blendVolume.ts). */
   readonly vE: number;
   /** Slope of the excess volume: v^E(T) = vE + vESlope·(T/T_REF − 1), m³/mol. */
   readonly vESlope: number;
+  /** Excess of the distance-function amplitude δ, m³/mol (eos/blendVolume.ts). */
+  readonly deltaE: number;
   readonly source: string;
 }
 
@@ -25,73 +27,79 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
   {
     a: 'r32',
     b: 'r125',
-    k: 0.00354059,
-    slope: 0.0343087,
-    curve: -0.0523646,
-    xi: 3.82422,
-    vE: 3.79095e-7,
-    vESlope: 0.00000172121,
+    k: 0.00361735,
+    slope: 0.0331318,
+    curve: -0.0598385,
+    xi: -6.07785,
+    vE: 9.52414e-7,
+    vESlope: 0.00000446306,
+    deltaE: -0.00000302371,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-410A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-410A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r125',
     b: 'r143a',
-    k: -0.0103983,
-    slope: 0.00122296,
-    curve: -0.0685277,
-    xi: 21.0736,
-    vE: -7.85935e-7,
-    vESlope: -0.00000454437,
+    k: -0.0103969,
+    slope: 0.000895942,
+    curve: -0.070516,
+    xi: 20.6244,
+    vE: 0.00000104936,
+    vESlope: 0.00000636248,
+    deltaE: -0.00000753073,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-507A, R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-507A, R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r125',
     b: 'r134a',
-    k: 0.0223107,
-    slope: 0.00645712,
-    curve: -0.188214,
-    xi: -2.80815,
-    vE: 2.03077e-7,
-    vESlope: 5.74702e-7,
+    k: 0.0304706,
+    slope: 0.171057,
+    curve: 0.326754,
+    xi: -0.694288,
+    vE: -4.36179e-8,
+    vESlope: 2.43929e-8,
+    deltaE: 1.63377e-7,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-404A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-404A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r134a',
     b: 'r143a',
-    k: -0.0126464,
-    slope: -0.00778934,
-    curve: 0.0127257,
-    xi: 3.42677,
-    vE: -3.35588e-7,
-    vESlope: -7.28993e-7,
+    k: -0.0173435,
+    slope: -0.0986198,
+    curve: -0.262469,
+    xi: 2.58187,
+    vE: -5.16321e-7,
+    vESlope: -4.57064e-7,
+    deltaE: -0.00000174426,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r32',
     b: 'r134a',
-    k: -0.0078521,
-    slope: 0.00159438,
-    curve: 0.0271421,
-    xi: -10.2673,
-    vE: 8.49526e-7,
-    vESlope: 0.00000213716,
+    k: -0.0125093,
+    slope: -0.0910527,
+    curve: -0.259914,
+    xi: -4.72126,
+    vE: 5.56709e-7,
+    vESlope: 6.26658e-7,
+    deltaE: 0.00000254026,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r32',
     b: 'r1234yf',
-    k: 0.0384347,
-    slope: 0.0146779,
-    curve: -0.0665803,
-    xi: -39.8365,
-    vE: 0.00000262201,
-    vESlope: 0.00000628925,
+    k: 0.0382524,
+    slope: 0.0186787,
+    curve: -0.0450458,
+    xi: -38.6541,
+    vE: 0.00000233279,
+    vESlope: 0.00000493042,
+    deltaE: 0.00000186608,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-454B (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-454B (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
 ];

@@ -27,10 +27,12 @@ interface PairEntry {
   readonly tunedSlope?: number;
   /** Curvature for the tuned model: adds tunedCurve·(T/T_REF_KIJ − 1)². */
   readonly tunedCurve?: number;
-  /** Volume-correction excesses for the tuned model (solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. */
+  /** Volume-correction excesses for the tuned model (eos/blendVolume.ts): ξ_ij in K, v^E_ij in m³/mol. */
   readonly xi?: number;
   readonly vE?: number;
   readonly vESlope?: number;
+  /** Excess of the distance-function amplitude δ for the tuned model, m³/mol (eos/blendVolume.ts). */
+  readonly deltaE?: number;
   /** k_ij for textbook PR and SRK. */
   readonly textbook: number;
   readonly source: string;
@@ -54,6 +56,7 @@ export const PAIRS: readonly PairEntry[] = [
     xi: p.xi,
     vE: p.vE,
     vESlope: p.vESlope,
+    deltaE: p.deltaE,
     textbook: 0,
     source: p.source,
   })),
@@ -81,14 +84,14 @@ export function interactionCurve(a: string, b: string, model: string): number {
   return e && model === 'tuned' ? (e.tunedCurve ?? 0) : 0;
 }
 
-/** Volume-correction excesses ξ_ij (K) and v^E_ij (m³/mol) of a pair; zero where not fitted. */
+/** Volume-correction excesses ξ_ij (K), v^E_ij and δ^E_ij (m³/mol) of a pair; zero where not fitted. */
 export function volumeExcess(
   a: string,
   b: string,
   model: string,
-): { xi: number; vE: number; vESlope: number } {
+): { xi: number; vE: number; vESlope: number; deltaE: number } {
   const e = pair(a, b);
   return e && model === 'tuned'
-    ? { xi: e.xi ?? 0, vE: e.vE ?? 0, vESlope: e.vESlope ?? 0 }
-    : { xi: 0, vE: 0, vESlope: 0 };
+    ? { xi: e.xi ?? 0, vE: e.vE ?? 0, vESlope: e.vESlope ?? 0, deltaE: e.deltaE ?? 0 }
+    : { xi: 0, vE: 0, vESlope: 0, deltaE: 0 };
 }
