@@ -12,7 +12,8 @@
  *
  * Stage 1: k_ij(T) = k + k'·t + k''·t², t = T/298.15 K − 1, per pair (thermo/data/kij.ts), to
  * ln(p_model/p_ref) of every fitted bubble and dew point, all blends together, by
- * Levenberg–Marquardt with a loss that leans on the worst rows (minimaxPressure below); a
+ * Levenberg–Marquardt with a loss that leans on the worst rows (minimax below), and for
+ * R-32/R-1234yf a constant asymmetric term m_ab (ASYMMETRIC below); a
  * small ridge term keeps a pair that the data barely sees (R-125/R-134a is 4 % of R-404A's
  * moles) near zero rather than letting it chase rows.
  * Stage 2: per pair ξ, v^E, v^E′ and δ^E of the blend volume rule (thermo/eos/blendVolume.ts)
@@ -39,6 +40,16 @@ const RIDGE_K = 0.01;
 const RIDGE_SLOPE = 0.003;
 const RIDGE_VOLUME = 0.001;
 const RIDGE_CURVE = 0.003;
+const RIDGE_ASYM = 0.003;
+
+/**
+ * Pairs that also get the asymmetric term m_ab (thermo/eos/asymmetricMixing.ts): those that
+ * form a blend on their own, where the symmetric k_ij cannot match both the bubble and the dew
+ * pressure (R-32/R-1234yf: the best split of one k_ij leaves ±0.498 % at 233.15 K). Not used in
+ * the ternaries, where that form is not invariant to splitting a component.
+ */
+const ASYMMETRIC: readonly string[] = ['r32/r1234yf'];
+const asymIndex = PAIR_LIST.map(([a, b]) => ASYMMETRIC.indexOf(`${a}/${b}`));
 
 interface Row {
   T: number;
@@ -86,12 +97,27 @@ function pairMatrix(base: ResolvedProduct, values: (k: number) => number): Matri
 /** Stage-1 parameters per pair: k, k', k'' (k_ij(T) = k + k'·t + k''·t², t = T/T_REF − 1). */
 const K_PER_PAIR = 3;
 
+/** Stage-1 parameter vector: K_PER_PAIR per pair, then m_ab of each ASYMMETRIC pair. */
+const nK = PAIR_LIST.length * K_PER_PAIR + ASYMMETRIC.length;
+const asymOf = (q: number[], k: number) =>
+  asymIndex[k]! >= 0 ? q[PAIR_LIST.length * K_PER_PAIR + asymIndex[k]!]! : 0;
+
 function withKij(base: ResolvedProduct, q: number[]): ResolvedProduct {
+  const m = pairMatrix(base, (k) => asymOf(q, k));
+  // m_ab is antisymmetric: the ordered pair (a, b) of PAIR_LIST gets +m.
+  const ids = base.components.map((c) => c.id);
+  m.forEach((row, i) =>
+    row.forEach((_, j) => {
+      const k = PAIR_LIST.findIndex(([a, b]) => a === ids[j] && b === ids[i]);
+      if (k >= 0) row[j] = -row[j]!;
+    }),
+  );
   return {
     ...base,
     kij: pairMatrix(base, (k) => q[K_PER_PAIR * k]!),
     kijSlope: pairMatrix(base, (k) => q[K_PER_PAIR * k + 1]!),
     kijCurve: pairMatrix(base, (k) => q[K_PER_PAIR * k + 2]!),
+    kijAsym: ASYMMETRIC.length > 0 && m.some((r) => r.some((v) => v !== 0)) ? m : undefined,
   };
 }
 
@@ -148,25 +174,21 @@ const fitted = (r: Row) => !isHeldOut(r.T);
  * like r⁶ beyond 0.3 %), since the targets are worst-case bounds.
  */
 const minimax = (r: number) => r * (1 + (r / 0.003) ** 2);
-/**
- * The pressures' loss is sharper, r·(1 + |r/0.0048|³⁰): a smooth stand-in for the worst row,
- * flat below 0.45 % and steep past 0.48 %. R-454B needs it: with one k_ij per temperature its
- * best bubble/dew split at 233.15 K is ±0.498 % (the one-fluid rule cannot follow the glide
- * of R-32/R-1234yf there; see DEVELOPERS.md), so the line has to sit on that split at the cold
- * end and anywhere inside the slack above it.
- */
-const minimaxPressure = (r: number) => r * (1 + Math.abs(r / 0.0048) ** 30);
 const nPar = PAIR_LIST.length * V_PER_PAIR;
 
 // Stage 1: k_ij(T) on bubble and dew pressures.
 const kFit = levenbergMarquardt(
   (q) => [
     ...deviations((b) => withKij(b, q), fitted).flatMap((d) =>
-      d.out.flatMap((o) => [o.bubble, o.dew].map(minimaxPressure)),
+      d.out.flatMap((o) => [o.bubble, o.dew].map(minimax)),
     ),
-    ...q.map((x, k) => x * [RIDGE_K, RIDGE_SLOPE, RIDGE_CURVE][k % K_PER_PAIR]!),
+    ...q.map((x, k) =>
+      k >= PAIR_LIST.length * K_PER_PAIR
+        ? x * RIDGE_ASYM
+        : x * [RIDGE_K, RIDGE_SLOPE, RIDGE_CURVE][k % K_PER_PAIR]!,
+    ),
   ],
-  new Array<number>(PAIR_LIST.length * K_PER_PAIR).fill(0),
+  new Array<number>(nK).fill(0),
   100,
 ).params;
 
@@ -197,7 +219,7 @@ const num = (x: number) => x.toPrecision(6);
 const range = `test/reference/blends/, ${T_FIT_MIN}–${T_FIT_MAX} K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models`;
 const entries = PAIR_LIST.map(
   ([a, b, blends], k) =>
-    `  { a: '${a}', b: '${b}', k: ${num(kFit[K_PER_PAIR * k]!)}, slope: ${num(kFit[K_PER_PAIR * k + 1]!)}, curve: ${num(kFit[K_PER_PAIR * k + 2]!)}, xi: ${num(10 * vFit[V_PER_PAIR * k]!)}, vE: ${num(1e-6 * vFit[V_PER_PAIR * k + 1]!)}, vESlope: ${num(1e-6 * vFit[V_PER_PAIR * k + 2]!)}, deltaE: ${num(1e-6 * vFit[V_PER_PAIR * k + 3]!)}, source: 'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of ${blends} (${range})' },`,
+    `  { a: '${a}', b: '${b}', k: ${num(kFit[K_PER_PAIR * k]!)}, slope: ${num(kFit[K_PER_PAIR * k + 1]!)}, curve: ${num(kFit[K_PER_PAIR * k + 2]!)}, asym: ${num(asymOf(kFit, k))}, xi: ${num(10 * vFit[V_PER_PAIR * k]!)}, vE: ${num(1e-6 * vFit[V_PER_PAIR * k + 1]!)}, vESlope: ${num(1e-6 * vFit[V_PER_PAIR * k + 2]!)}, deltaE: ${num(1e-6 * vFit[V_PER_PAIR * k + 3]!)}, source: 'fitted by scripts/fit-blends.ts: k, slope, curve${asymIndex[k]! >= 0 ? ', asym' : ''} to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of ${blends} (${range})' },`,
 );
 const file = `/**
  * Binary parameters of the HFC/HFO pairs in the refrigerant blends. GENERATED by
@@ -213,6 +235,8 @@ export interface FittedPair {
   readonly slope: number;
   /** Curvature: k_ij(T) = k + slope·t + curve·t², t = T/T_REF − 1. */
   readonly curve: number;
+  /** Asymmetric term: k_ab(x) = k_ab(T) + asym·(x_a − x_b) (eos/asymmetricMixing.ts); 0 = none. */
+  readonly asym: number;
   /** Excess of the volume correction's pseudo-critical temperature, K (eos/blendVolume.ts). */
   readonly xi: number;
   /** Excess volume of the translation, m³/mol (eos/blendVolume.ts). */

@@ -6,6 +6,7 @@ import { REFRIGERANT_BLENDS, refrigerantBlendById } from './data/blends.js';
 import { fluidById, FLUIDS } from './data/fluids.js';
 import {
   interactionCurve,
+  interactionAsymmetry,
   interactionParameter,
   interactionSlope,
   volumeExcess,
@@ -53,6 +54,11 @@ export interface ResolvedProduct {
   readonly kijSlope?: readonly (readonly number[])[];
   /** Curvature of k_ij(T): adds kijCurve·(T/T_REF − 1)². Absent means none. */
   readonly kijCurve?: readonly (readonly number[])[];
+  /**
+   * Asymmetric terms m_ij (antisymmetric, eos/asymmetricMixing.ts); absent where every pair
+   * uses the symmetric rule alone.
+   */
+  readonly kijAsym?: readonly (readonly number[])[];
   /**
    * Binary volume-correction parameters (symmetric, zero diagonal; see mixtureModelVolume in
    * eos/blendVolume.ts): ξ_ij in K, v^E_ij in m³/mol. Absent means plain Kay's rule and no
@@ -243,6 +249,10 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
   const kijCurve = fluids.map((fi) =>
     fluids.map((fj) => (fi === fj ? 0 : interactionCurve(fi.id, fj.id, model))),
   );
+  const asym = fluids.map((fi) =>
+    fluids.map((fj) => (fi === fj ? 0 : interactionAsymmetry(fi.id, fj.id, model))),
+  );
+  const kijAsym = asym.some((row) => row.some((m) => m !== 0)) ? asym : undefined;
   const excess = fluids.map((fi) =>
     fluids.map((fj) =>
       fi === fj ? { xi: 0, vE: 0, vESlope: 0, deltaE: 0 } : volumeExcess(fi.id, fj.id, model),
@@ -268,6 +278,7 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
     kij,
     kijSlope,
     kijCurve,
+    kijAsym,
     volumeMixing,
     Tmin: Math.max(...fluids.map((f) => f.Ttriple)),
     molarMass: fluids.reduce((s, f, i) => s + f.molarMass * z[i]!, 0),

@@ -17,25 +17,6 @@ import { checkClose } from '../helpers/check.js';
 const SRC = (id: string) =>
   `${id === 'r454b' ? 'Bell 2023' : 'Lemmon & Jacobsen 2004'} mixture model, test/reference/blends/${id}.csv`;
 
-/**
- * Known misses of the issue's targets, measured by `npm run accuracy` and listed in the README:
- * the tolerance here is the measured worst case rounded up, so a regression still fails.
- */
-const KNOWN_MISS: Record<string, { what: string; rtol: number; why: string }[]> = {
-  r454b: [
-    {
-      what: 'bubble pressure',
-      rtol: 0.00501,
-      why: 'known miss (target 0.5 %) by 0.0004 points: 0.5004 % at the held-out row 238.15 K (0.499 % at 233.15 K). With one k_ij per temperature the best bubble/dew split of R-32/R-1234yf at 233.15 K is ±0.498 % (DEVELOPERS.md), so the one-fluid rule has no margin there',
-    },
-  ],
-};
-
-function tol(id: string, what: string, target: number) {
-  const miss = KNOWN_MISS[id]?.find((m) => m.what === what);
-  return miss ? { rtol: miss.rtol, why: miss.why } : { rtol: target };
-}
-
 const inRange = (T: number) => T >= T_FIT_MIN - 1e-9 && T <= T_FIT_MAX + 1e-9;
 
 describe.each(REFRIGERANT_BLENDS.map((b) => [b.id] as const))(
@@ -61,7 +42,7 @@ describe.each(REFRIGERANT_BLENDS.map((b) => [b.id] as const))(
             input,
             actual,
             expected,
-            ...tol(id, what, target),
+            rtol: target,
             kind: 'published',
             source: SRC(id),
           });

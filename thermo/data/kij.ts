@@ -31,6 +31,11 @@ interface PairEntry {
   readonly xi?: number;
   readonly vE?: number;
   readonly vESlope?: number;
+  /**
+   * Asymmetric term m_ab for the tuned model (eos/asymmetricMixing.ts): k_ab(x) = k_ab +
+   * m_ab·(x_a − x_b), m_ba = −m_ab.
+   */
+  readonly asym?: number;
   /** Excess of the distance-function amplitude δ for the tuned model, m³/mol (eos/blendVolume.ts). */
   readonly deltaE?: number;
   /** k_ij for textbook PR and SRK. */
@@ -53,6 +58,7 @@ export const PAIRS: readonly PairEntry[] = [
     tuned: p.k,
     tunedSlope: p.slope,
     tunedCurve: p.curve,
+    asym: p.asym,
     xi: p.xi,
     vE: p.vE,
     vESlope: p.vESlope,
@@ -82,6 +88,13 @@ export function interactionSlope(a: string, b: string, model: string): number {
 export function interactionCurve(a: string, b: string, model: string): number {
   const e = pair(a, b);
   return e && model === 'tuned' ? (e.tunedCurve ?? 0) : 0;
+}
+
+/** Asymmetric term m_ab of the ordered pair (a, b): −m_ba; 0 where not fitted. */
+export function interactionAsymmetry(a: string, b: string, model: string): number {
+  const e = pair(a, b);
+  if (!e || model !== 'tuned' || !e.asym) return 0;
+  return e.a === a ? e.asym : -e.asym;
 }
 
 /** Volume-correction excesses ξ_ij (K), v^E_ij and δ^E_ij (m³/mol) of a pair; zero where not fitted. */

@@ -1,6 +1,7 @@
 /**
  * Mixtures with the van der Waals one-fluid rule:
  *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij(T)),  k_ij(T) = k_ij + k'_ij·t + k''_ij·t²,
+ *   plus an asymmetric term where a pair has one (eos/asymmetricMixing.ts),
  *   t = T/T_REF − 1 (data/kij.ts),  b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
  * Fugacity coefficients of the generic cubic:
  *   ln φ_i = (b_i/b)(Z − 1) − ln(Z − B) − (A/B)·(2·Σ_j x_j·a_ij/a − b_i/b)·L − c_i·p/(R·T),
@@ -12,6 +13,7 @@ import { ConvergenceError } from '../errors.js';
 import { compressibilityRoots, logTerm } from '../eos/cubic.js';
 import { T_REF_KIJ } from '../data/kij.js';
 import { mixtureModelVolume } from '../eos/blendVolume.js';
+import { addAsymmetricAttraction } from '../eos/asymmetricMixing.js';
 import type { ResolvedProduct } from '../product.js';
 import type { RootChoice } from './pure.js';
 import { pureSaturation } from './pure.js';
@@ -97,6 +99,8 @@ export function phaseAt(
     am += x[i]! * si;
     bm += x[i]! * b[i]!;
   }
+  const asym = mx.product.kijAsym;
+  if (asym) am -= addAsymmetricAttraction(aij, asym, x, n, s);
   const A = (am * p) / (R * R * T * T);
   const B = (bm * p) / (R * T);
   const roots = compressibilityRoots(fam, A, B);
