@@ -13,6 +13,7 @@ import { REFRIGERANT_BLENDS } from '../../thermo/data/blends.js';
 import { BLEND_TARGETS, measureRefrigerantBlends, readTable } from '../reference/measure.js';
 import { isHeldOut, T_FIT_MAX, T_FIT_MIN } from '../reference/blend-rows.js';
 import { checkClose } from '../helpers/check.js';
+import { citation } from '../../thermo/data/sources.js';
 
 const SRC = (id: string) =>
   `${id === 'r454b' ? 'Bell 2023' : 'Lemmon & Jacobsen 2004'} mixture model, test/reference/blends/${id}.csv`;
@@ -65,6 +66,33 @@ describe.each(REFRIGERANT_BLENDS.map((b) => [b.id] as const))(
     });
   },
 );
+
+/**
+ * No reference has the blends' compressed liquid at +5 MPa above the bubble pressure; the
+ * pure-fluid tables have it for every component (p_sat + 5 MPa every 10 K), so the components
+ * are checked there over the blends' whole range, 233–333 K (the pure-fluid tests stop at
+ * 323 K or 0.97·Tc).
+ */
+describe('blend components at p_sat + 5 MPa, 233–333 K', () => {
+  const ids = ['r32', 'r125', 'r134a', 'r143a', 'r1234yf'];
+  it.each(ids)('%s: compressed-liquid density within 1 %', (id) => {
+    const key = readTable('fluids.csv').find((r) => r.fluid === id)!.eos_bibtex_key!;
+    const rows = readTable(`liquid/${id}.csv`).filter(
+      (r) => +r.dp_above_psat_MPa! === 5 && inRange(+r.T_K!),
+    );
+    expect(rows.length).toBeGreaterThanOrEqual(10);
+    for (const r of rows)
+      checkClose({
+        what: 'compressed liquid density at p_sat + 5 MPa',
+        input: { id, T: +r.T_K!, p: +r.p_Pa! },
+        actual: liquidDensity(id, +r.T_K!, +r.p_Pa!),
+        expected: +r.rho_kg_m3!,
+        rtol: BLEND_TARGETS.compressed,
+        kind: 'published',
+        source: `${citation(key)} (reference EOS), test/reference/liquid/${id}.csv`,
+      });
+  });
+});
 
 describe('held-out rows', () => {
   it('have worst errors close to those of the fitted rows (no chasing of rows)', () => {
