@@ -10,11 +10,14 @@
  * 233.15–333.15 K. Every third row (238.15, 253.15, … K) is held out of the fit and only
  * measured afterwards (test/thermo/refrigerant-blends.test.ts checks both sets).
  *
- * Model: k_ij(T) = k + k'·(T/298.15 K − 1), one straight line per pair (thermo/data/kij.ts).
- * Residuals: ln(p_model/p_ref) of every fitted bubble and dew point, all blends together,
- * by Levenberg–Marquardt; a small ridge term (0.01 per unit of k, 0.003 per unit of k') keeps
- * a pair that the data barely sees (R-125/R-134a is 4 % of R-404A's moles) near zero rather
- * than letting it chase rows.
+ * Stage 1: k_ij(T) = k + k'·t + k''·t², t = T/298.15 K − 1, per pair (thermo/data/kij.ts), to
+ * ln(p_model/p_ref) of every fitted bubble and dew point, all blends together, by
+ * Levenberg–Marquardt with a loss that leans on the worst rows (minimax below), and for
+ * R-32/R-1234yf a constant asymmetric term m_ab (ASYMMETRIC below); a
+ * small ridge term keeps a pair that the data barely sees (R-125/R-134a is 4 % of R-404A's
+ * moles) near zero rather than letting it chase rows.
+ * Stage 2: per pair ξ, v^E, v^E′ and δ^E of the blend volume rule (thermo/eos/blendVolume.ts)
+ * to the bubble-liquid, compressed-liquid (+1 MPa) and dew-vapour densities.
  */
 import { writeFileSync } from 'node:fs';
 import { REFRIGERANT_BLENDS } from '../thermo/data/blends.js';
@@ -37,6 +40,16 @@ const RIDGE_K = 0.01;
 const RIDGE_SLOPE = 0.003;
 const RIDGE_VOLUME = 0.001;
 const RIDGE_CURVE = 0.003;
+const RIDGE_ASYM = 0.003;
+
+/**
+ * Pairs that also get the asymmetric term m_ab (thermo/eos/asymmetricMixing.ts): those that
+ * form a blend on their own, where the symmetric k_ij cannot match both the bubble and the dew
+ * pressure (R-32/R-1234yf: the best split of one k_ij leaves ±0.498 % at 233.15 K). Not used in
+ * the ternaries, where that form is not invariant to splitting a component.
+ */
+const ASYMMETRIC: readonly string[] = ['r32/r1234yf'];
+const asymIndex = PAIR_LIST.map(([a, b]) => ASYMMETRIC.indexOf(`${a}/${b}`));
 
 interface Row {
   T: number;
@@ -84,19 +97,34 @@ function pairMatrix(base: ResolvedProduct, values: (k: number) => number): Matri
 /** Stage-1 parameters per pair: k, k', k'' (k_ij(T) = k + k'·t + k''·t², t = T/T_REF − 1). */
 const K_PER_PAIR = 3;
 
+/** Stage-1 parameter vector: K_PER_PAIR per pair, then m_ab of each ASYMMETRIC pair. */
+const nK = PAIR_LIST.length * K_PER_PAIR + ASYMMETRIC.length;
+const asymOf = (q: number[], k: number) =>
+  asymIndex[k]! >= 0 ? q[PAIR_LIST.length * K_PER_PAIR + asymIndex[k]!]! : 0;
+
 function withKij(base: ResolvedProduct, q: number[]): ResolvedProduct {
+  const m = pairMatrix(base, (k) => asymOf(q, k));
+  // m_ab is antisymmetric: the ordered pair (a, b) of PAIR_LIST gets +m.
+  const ids = base.components.map((c) => c.id);
+  m.forEach((row, i) =>
+    row.forEach((_, j) => {
+      const k = PAIR_LIST.findIndex(([a, b]) => a === ids[j] && b === ids[i]);
+      if (k >= 0) row[j] = -row[j]!;
+    }),
+  );
   return {
     ...base,
     kij: pairMatrix(base, (k) => q[K_PER_PAIR * k]!),
     kijSlope: pairMatrix(base, (k) => q[K_PER_PAIR * k + 1]!),
     kijCurve: pairMatrix(base, (k) => q[K_PER_PAIR * k + 2]!),
+    kijAsym: ASYMMETRIC.length > 0 && m.some((r) => r.some((v) => v !== 0)) ? m : undefined,
   };
 }
 
-/** Stage-2 parameters per pair: ξ, v^E and its slope v^E′. */
-const V_PER_PAIR = 3;
+/** Stage-2 parameters per pair: ξ, v^E, its slope v^E′ and δ^E. */
+const V_PER_PAIR = 4;
 
-/** Volume parameters scaled for the fit: ξ in units of 10 K, v^E in units of 1e-6 m³/mol. */
+/** Volume parameters scaled for the fit: ξ in units of 10 K, v^E and δ^E in units of 1e-6 m³/mol. */
 function withVolume(base: ResolvedProduct, q: number[]): ResolvedProduct {
   return {
     ...base,
@@ -104,6 +132,7 @@ function withVolume(base: ResolvedProduct, q: number[]): ResolvedProduct {
       xi: pairMatrix(base, (k) => 10 * q[V_PER_PAIR * k]!),
       vE: pairMatrix(base, (k) => 1e-6 * q[V_PER_PAIR * k + 1]!),
       vESlope: pairMatrix(base, (k) => 1e-6 * q[V_PER_PAIR * k + 2]!),
+      deltaE: pairMatrix(base, (k) => 1e-6 * q[V_PER_PAIR * k + 3]!),
     },
   };
 }
@@ -153,9 +182,13 @@ const kFit = levenbergMarquardt(
     ...deviations((b) => withKij(b, q), fitted).flatMap((d) =>
       d.out.flatMap((o) => [o.bubble, o.dew].map(minimax)),
     ),
-    ...q.map((x, k) => x * [RIDGE_K, RIDGE_SLOPE, RIDGE_CURVE][k % K_PER_PAIR]!),
+    ...q.map((x, k) =>
+      k >= PAIR_LIST.length * K_PER_PAIR
+        ? x * RIDGE_ASYM
+        : x * [RIDGE_K, RIDGE_SLOPE, RIDGE_CURVE][k % K_PER_PAIR]!,
+    ),
   ],
-  new Array<number>(PAIR_LIST.length * K_PER_PAIR).fill(0),
+  new Array<number>(nK).fill(0),
   100,
 ).params;
 
@@ -186,7 +219,7 @@ const num = (x: number) => x.toPrecision(6);
 const range = `test/reference/blends/, ${T_FIT_MIN}–${T_FIT_MAX} K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models`;
 const entries = PAIR_LIST.map(
   ([a, b, blends], k) =>
-    `  { a: '${a}', b: '${b}', k: ${num(kFit[K_PER_PAIR * k]!)}, slope: ${num(kFit[K_PER_PAIR * k + 1]!)}, curve: ${num(kFit[K_PER_PAIR * k + 2]!)}, xi: ${num(10 * vFit[V_PER_PAIR * k]!)}, vE: ${num(1e-6 * vFit[V_PER_PAIR * k + 1]!)}, vESlope: ${num(1e-6 * vFit[V_PER_PAIR * k + 2]!)}, source: 'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of ${blends} (${range})' },`,
+    `  { a: '${a}', b: '${b}', k: ${num(kFit[K_PER_PAIR * k]!)}, slope: ${num(kFit[K_PER_PAIR * k + 1]!)}, curve: ${num(kFit[K_PER_PAIR * k + 2]!)}, asym: ${num(asymOf(kFit, k))}, xi: ${num(10 * vFit[V_PER_PAIR * k]!)}, vE: ${num(1e-6 * vFit[V_PER_PAIR * k + 1]!)}, vESlope: ${num(1e-6 * vFit[V_PER_PAIR * k + 2]!)}, deltaE: ${num(1e-6 * vFit[V_PER_PAIR * k + 3]!)}, source: 'fitted by scripts/fit-blends.ts: k, slope, curve${asymIndex[k]! >= 0 ? ', asym' : ''} to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of ${blends} (${range})' },`,
 );
 const file = `/**
  * Binary parameters of the HFC/HFO pairs in the refrigerant blends. GENERATED by
@@ -202,12 +235,16 @@ export interface FittedPair {
   readonly slope: number;
   /** Curvature: k_ij(T) = k + slope·t + curve·t², t = T/T_REF − 1. */
   readonly curve: number;
-  /** Excess of the volume correction's pseudo-critical temperature, K (solvers/mixture.ts). */
+  /** Asymmetric term: k_ab(x) = k_ab(T) + asym·(x_a − x_b) (eos/asymmetricMixing.ts); 0 = none. */
+  readonly asym: number;
+  /** Excess of the volume correction's pseudo-critical temperature, K (eos/blendVolume.ts). */
   readonly xi: number;
-  /** Excess volume of the translation, m³/mol (solvers/mixture.ts). */
+  /** Excess volume of the translation, m³/mol (eos/blendVolume.ts). */
   readonly vE: number;
   /** Slope of the excess volume: v^E(T) = vE + vESlope·(T/T_REF − 1), m³/mol. */
   readonly vESlope: number;
+  /** Excess of the distance-function amplitude δ, m³/mol (eos/blendVolume.ts). */
+  readonly deltaE: number;
   readonly source: string;
 }
 

@@ -6,6 +6,7 @@ import { REFRIGERANT_BLENDS, refrigerantBlendById } from './data/blends.js';
 import { fluidById, FLUIDS } from './data/fluids.js';
 import {
   interactionCurve,
+  interactionAsymmetry,
   interactionParameter,
   interactionSlope,
   volumeExcess,
@@ -54,8 +55,13 @@ export interface ResolvedProduct {
   /** Curvature of k_ij(T): adds kijCurve·(T/T_REF − 1)². Absent means none. */
   readonly kijCurve?: readonly (readonly number[])[];
   /**
+   * Asymmetric terms m_ij (antisymmetric, eos/asymmetricMixing.ts); absent where every pair
+   * uses the symmetric rule alone.
+   */
+  readonly kijAsym?: readonly (readonly number[])[];
+  /**
    * Binary volume-correction parameters (symmetric, zero diagonal; see mixtureModelVolume in
-   * solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. Absent means plain Kay's rule and no
+   * eos/blendVolume.ts): ξ_ij in K, v^E_ij in m³/mol. Absent means plain Kay's rule and no
    * excess volume.
    */
   readonly volumeMixing?: {
@@ -63,6 +69,8 @@ export interface ResolvedProduct {
     readonly vE: readonly (readonly number[])[];
     /** Temperature slope of v^E_ij (per unit of T/T_REF − 1), m³/mol; absent means none. */
     readonly vESlope?: readonly (readonly number[])[];
+    /** Excess of the distance-function amplitude δ, m³/mol; absent means none. */
+    readonly deltaE?: readonly (readonly number[])[];
   };
   /** Highest temperature of a blend offered by id (its dew-curve end, less a margin), K. */
   readonly Tmax?: number;
@@ -241,19 +249,24 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
   const kijCurve = fluids.map((fi) =>
     fluids.map((fj) => (fi === fj ? 0 : interactionCurve(fi.id, fj.id, model))),
   );
+  const asym = fluids.map((fi) =>
+    fluids.map((fj) => (fi === fj ? 0 : interactionAsymmetry(fi.id, fj.id, model))),
+  );
+  const kijAsym = asym.some((row) => row.some((m) => m !== 0)) ? asym : undefined;
   const excess = fluids.map((fi) =>
     fluids.map((fj) =>
-      fi === fj ? { xi: 0, vE: 0, vESlope: 0 } : volumeExcess(fi.id, fj.id, model),
+      fi === fj ? { xi: 0, vE: 0, vESlope: 0, deltaE: 0 } : volumeExcess(fi.id, fj.id, model),
     ),
   );
   const hasExcess = excess.some((row) =>
-    row.some((e) => e.xi !== 0 || e.vE !== 0 || e.vESlope !== 0),
+    row.some((e) => e.xi !== 0 || e.vE !== 0 || e.vESlope !== 0 || e.deltaE !== 0),
   );
   const volumeMixing = hasExcess
     ? {
         xi: excess.map((r) => r.map((e) => e.xi)),
         vE: excess.map((r) => r.map((e) => e.vE)),
         vESlope: excess.map((r) => r.map((e) => e.vESlope)),
+        deltaE: excess.map((r) => r.map((e) => e.deltaE)),
       }
     : undefined;
   return {
@@ -265,6 +278,7 @@ function resolveBlend(list: BlendComponent[], model: ModelId): ResolvedProduct {
     kij,
     kijSlope,
     kijCurve,
+    kijAsym,
     volumeMixing,
     Tmin: Math.max(...fluids.map((f) => f.Ttriple)),
     molarMass: fluids.reduce((s, f, i) => s + f.molarMass * z[i]!, 0),

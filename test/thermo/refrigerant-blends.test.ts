@@ -13,42 +13,10 @@ import { REFRIGERANT_BLENDS } from '../../thermo/data/blends.js';
 import { BLEND_TARGETS, measureRefrigerantBlends, readTable } from '../reference/measure.js';
 import { isHeldOut, T_FIT_MAX, T_FIT_MIN } from '../reference/blend-rows.js';
 import { checkClose } from '../helpers/check.js';
+import { citation } from '../../thermo/data/sources.js';
 
 const SRC = (id: string) =>
   `${id === 'r454b' ? 'Bell 2023' : 'Lemmon & Jacobsen 2004'} mixture model, test/reference/blends/${id}.csv`;
-
-/**
- * Known misses of the issue's targets, measured by `npm run accuracy` and listed in the README:
- * the tolerance here is the measured worst case rounded up, so a regression still fails.
- */
-const KNOWN_MISS: Record<string, { what: string; rtol: number; why: string }[]> = {
-  r454b: [
-    {
-      what: 'bubble pressure',
-      rtol: 0.0055,
-      why: 'known miss (target 0.5 %): the one-fluid rule cannot match both the bubble and the dew curve of R-32/R-1234yf; the fit splits the 1 % gap',
-    },
-  ],
-  r404a: [
-    {
-      what: 'bubble liquid density',
-      rtol: 0.007,
-      why: 'known miss (target 0.5 %) in the last rows, 323–333 K, within 12 K of the blend critical point',
-    },
-  ],
-  r507a: [
-    {
-      what: 'bubble liquid density',
-      rtol: 0.0075,
-      why: 'known miss (target 0.5 %) in the last rows, 323–333 K, within 11 K of the blend critical point',
-    },
-  ],
-};
-
-function tol(id: string, what: string, target: number) {
-  const miss = KNOWN_MISS[id]?.find((m) => m.what === what);
-  return miss ? { rtol: miss.rtol, why: miss.why } : { rtol: target };
-}
 
 const inRange = (T: number) => T >= T_FIT_MIN - 1e-9 && T <= T_FIT_MAX + 1e-9;
 
@@ -75,7 +43,7 @@ describe.each(REFRIGERANT_BLENDS.map((b) => [b.id] as const))(
             input,
             actual,
             expected,
-            ...tol(id, what, target),
+            rtol: target,
             kind: 'published',
             source: SRC(id),
           });
@@ -98,6 +66,33 @@ describe.each(REFRIGERANT_BLENDS.map((b) => [b.id] as const))(
     });
   },
 );
+
+/**
+ * No reference has the blends' compressed liquid at +5 MPa above the bubble pressure; the
+ * pure-fluid tables have it for every component (p_sat + 5 MPa every 10 K), so the components
+ * are checked there over the blends' whole range, 233–333 K (the pure-fluid tests stop at
+ * 323 K or 0.97·Tc).
+ */
+describe('blend components at p_sat + 5 MPa, 233–333 K', () => {
+  const ids = ['r32', 'r125', 'r134a', 'r143a', 'r1234yf'];
+  it.each(ids)('%s: compressed-liquid density within 1 %', (id) => {
+    const key = readTable('fluids.csv').find((r) => r.fluid === id)!.eos_bibtex_key!;
+    const rows = readTable(`liquid/${id}.csv`).filter(
+      (r) => +r.dp_above_psat_MPa! === 5 && inRange(+r.T_K!),
+    );
+    expect(rows.length).toBeGreaterThanOrEqual(10);
+    for (const r of rows)
+      checkClose({
+        what: 'compressed liquid density at p_sat + 5 MPa',
+        input: { id, T: +r.T_K!, p: +r.p_Pa! },
+        actual: liquidDensity(id, +r.T_K!, +r.p_Pa!),
+        expected: +r.rho_kg_m3!,
+        rtol: BLEND_TARGETS.compressed,
+        kind: 'published',
+        source: `${citation(key)} (reference EOS), test/reference/liquid/${id}.csv`,
+      });
+  });
+});
 
 describe('held-out rows', () => {
   it('have worst errors close to those of the fitted rows (no chasing of rows)', () => {

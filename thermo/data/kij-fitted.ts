@@ -12,12 +12,16 @@ export interface FittedPair {
   readonly slope: number;
   /** Curvature: k_ij(T) = k + slope·t + curve·t², t = T/T_REF − 1. */
   readonly curve: number;
-  /** Excess of the volume correction's pseudo-critical temperature, K (solvers/mixture.ts). */
+  /** Asymmetric term: k_ab(x) = k_ab(T) + asym·(x_a − x_b) (eos/asymmetricMixing.ts); 0 = none. */
+  readonly asym: number;
+  /** Excess of the volume correction's pseudo-critical temperature, K (eos/blendVolume.ts). */
   readonly xi: number;
-  /** Excess volume of the translation, m³/mol (solvers/mixture.ts). */
+  /** Excess volume of the translation, m³/mol (eos/blendVolume.ts). */
   readonly vE: number;
   /** Slope of the excess volume: v^E(T) = vE + vESlope·(T/T_REF − 1), m³/mol. */
   readonly vESlope: number;
+  /** Excess of the distance-function amplitude δ, m³/mol (eos/blendVolume.ts). */
+  readonly deltaE: number;
   readonly source: string;
 }
 
@@ -25,73 +29,85 @@ export const FITTED_PAIRS: readonly FittedPair[] = [
   {
     a: 'r32',
     b: 'r125',
-    k: 0.00354059,
-    slope: 0.0343087,
-    curve: -0.0523646,
-    xi: 3.82422,
-    vE: 3.79095e-7,
-    vESlope: 0.00000172121,
+    k: 0.00354047,
+    slope: 0.0343047,
+    curve: -0.0523817,
+    asym: 0.0,
+    xi: -6.4837,
+    vE: 9.39746e-7,
+    vESlope: 0.00000440605,
+    deltaE: -0.00000295212,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-410A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-410A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r125',
     b: 'r143a',
     k: -0.0103983,
-    slope: 0.00122296,
-    curve: -0.0685277,
-    xi: 21.0736,
-    vE: -7.85935e-7,
-    vESlope: -0.00000454437,
+    slope: 0.00122582,
+    curve: -0.0685137,
+    asym: 0.0,
+    xi: 20.4732,
+    vE: 0.0000010492,
+    vESlope: 0.00000634944,
+    deltaE: -0.00000749447,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-507A, R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-507A, R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r125',
     b: 'r134a',
-    k: 0.0223107,
-    slope: 0.00645712,
-    curve: -0.188214,
-    xi: -2.80815,
-    vE: 2.03077e-7,
-    vESlope: 5.74702e-7,
+    k: 0.0222415,
+    slope: 0.00487299,
+    curve: -0.194208,
+    asym: 0.0,
+    xi: -1.52648,
+    vE: -5.57962e-8,
+    vESlope: -4.98467e-8,
+    deltaE: 2.66281e-8,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-404A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-404A, R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r134a',
     b: 'r143a',
-    k: -0.0126464,
-    slope: -0.00778934,
-    curve: 0.0127257,
-    xi: 3.42677,
-    vE: -3.35588e-7,
-    vESlope: -7.28993e-7,
+    k: -0.0126065,
+    slope: -0.00691329,
+    curve: 0.01599,
+    asym: 0.0,
+    xi: 2.44883,
+    vE: -5.55394e-7,
+    vESlope: -5.82645e-7,
+    deltaE: -0.00000196422,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-404A (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r32',
     b: 'r134a',
-    k: -0.0078521,
-    slope: 0.00159438,
-    curve: 0.0271421,
-    xi: -10.2673,
-    vE: 8.49526e-7,
-    vESlope: 0.00000213716,
+    k: -0.00781258,
+    slope: 0.00249814,
+    curve: 0.0305752,
+    asym: 0.0,
+    xi: -6.32378,
+    vE: 5.79963e-7,
+    vESlope: 6.26901e-7,
+    deltaE: 0.00000252666,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-407C (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
   {
     a: 'r32',
     b: 'r1234yf',
-    k: 0.0384347,
-    slope: 0.0146779,
-    curve: -0.0665803,
-    xi: -39.8365,
-    vE: 0.00000262201,
-    vESlope: 0.00000628925,
+    k: 0.0441847,
+    slope: 0.0123845,
+    curve: -0.0965156,
+    asym: -0.00984305,
+    xi: -37.2136,
+    vE: 0.00000235586,
+    vESlope: 0.00000505919,
+    deltaE: 0.00000127748,
     source:
-      'fitted by scripts/fit-blends.ts: k, slope, curve to the bubble and dew pressures, xi, vE, vESlope to the densities of R-454B (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
+      'fitted by scripts/fit-blends.ts: k, slope, curve, asym to the bubble and dew pressures, xi, vE, vESlope, deltaE to the densities of R-454B (test/reference/blends/, 233.15–333.15 K, held-out rows excluded; Lemmon & Jacobsen 2004 / Bell 2023 mixture models)',
   },
 ];

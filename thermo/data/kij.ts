@@ -27,10 +27,17 @@ interface PairEntry {
   readonly tunedSlope?: number;
   /** Curvature for the tuned model: adds tunedCurve·(T/T_REF_KIJ − 1)². */
   readonly tunedCurve?: number;
-  /** Volume-correction excesses for the tuned model (solvers/mixture.ts): ξ_ij in K, v^E_ij in m³/mol. */
+  /** Volume-correction excesses for the tuned model (eos/blendVolume.ts): ξ_ij in K, v^E_ij in m³/mol. */
   readonly xi?: number;
   readonly vE?: number;
   readonly vESlope?: number;
+  /**
+   * Asymmetric term m_ab for the tuned model (eos/asymmetricMixing.ts): k_ab(x) = k_ab +
+   * m_ab·(x_a − x_b), m_ba = −m_ab.
+   */
+  readonly asym?: number;
+  /** Excess of the distance-function amplitude δ for the tuned model, m³/mol (eos/blendVolume.ts). */
+  readonly deltaE?: number;
   /** k_ij for textbook PR and SRK. */
   readonly textbook: number;
   readonly source: string;
@@ -51,9 +58,11 @@ export const PAIRS: readonly PairEntry[] = [
     tuned: p.k,
     tunedSlope: p.slope,
     tunedCurve: p.curve,
+    asym: p.asym,
     xi: p.xi,
     vE: p.vE,
     vESlope: p.vESlope,
+    deltaE: p.deltaE,
     textbook: 0,
     source: p.source,
   })),
@@ -81,14 +90,21 @@ export function interactionCurve(a: string, b: string, model: string): number {
   return e && model === 'tuned' ? (e.tunedCurve ?? 0) : 0;
 }
 
-/** Volume-correction excesses ξ_ij (K) and v^E_ij (m³/mol) of a pair; zero where not fitted. */
+/** Asymmetric term m_ab of the ordered pair (a, b): −m_ba; 0 where not fitted. */
+export function interactionAsymmetry(a: string, b: string, model: string): number {
+  const e = pair(a, b);
+  if (!e || model !== 'tuned' || !e.asym) return 0;
+  return e.a === a ? e.asym : -e.asym;
+}
+
+/** Volume-correction excesses ξ_ij (K), v^E_ij and δ^E_ij (m³/mol) of a pair; zero where not fitted. */
 export function volumeExcess(
   a: string,
   b: string,
   model: string,
-): { xi: number; vE: number; vESlope: number } {
+): { xi: number; vE: number; vESlope: number; deltaE: number } {
   const e = pair(a, b);
   return e && model === 'tuned'
-    ? { xi: e.xi ?? 0, vE: e.vE ?? 0, vESlope: e.vESlope ?? 0 }
-    : { xi: 0, vE: 0, vESlope: 0 };
+    ? { xi: e.xi ?? 0, vE: e.vE ?? 0, vESlope: e.vESlope ?? 0, deltaE: e.deltaE ?? 0 }
+    : { xi: 0, vE: 0, vESlope: 0, deltaE: 0 };
 }

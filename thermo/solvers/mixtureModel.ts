@@ -1,6 +1,7 @@
 /**
  * Mixtures with the van der Waals one-fluid rule:
  *   a = Σ_i Σ_j x_i·x_j·√(a_i·a_j)·(1 − k_ij(T)),  k_ij(T) = k_ij + k'_ij·t + k''_ij·t²,
+ *   plus an asymmetric term where a pair has one (eos/asymmetricMixing.ts),
  *   t = T/T_REF − 1 (data/kij.ts),  b = Σ x_i·b_i,  c = Σ x_i·c_i (translation).
  * Fugacity coefficients of the generic cubic:
  *   ln φ_i = (b_i/b)(Z − 1) − ln(Z − B) − (A/B)·(2·Σ_j x_j·a_ij/a − b_i/b)·L − c_i·p/(R·T),
@@ -9,9 +10,10 @@
  */
 import { R_J_molK } from '../constants.js';
 import { ConvergenceError } from '../errors.js';
-import { compressibilityRoots, dPdv, logTerm } from '../eos/cubic.js';
+import { compressibilityRoots, logTerm } from '../eos/cubic.js';
 import { T_REF_KIJ } from '../data/kij.js';
-import { correctedVolume, correctionAtT } from '../eos/volumeCorrection.js';
+import { mixtureModelVolume } from '../eos/blendVolume.js';
+import { addAsymmetricAttraction } from '../eos/asymmetricMixing.js';
 import type { ResolvedProduct } from '../product.js';
 import type { RootChoice } from './pure.js';
 
@@ -94,6 +96,8 @@ export function phaseAt(
     am += x[i]! * si;
     bm += x[i]! * b[i]!;
   }
+  const asym = mx.product.kijAsym;
+  if (asym) am -= addAsymmetricAttraction(aij, asym, x, n, s);
   const A = (am * p) / (R * R * T * T);
   const B = (bm * p) / (R * T);
   const roots = compressibilityRoots(fam, A, B);
@@ -140,54 +144,5 @@ export function phaseAt(
   };
 }
 
-/**
- * The model's molar volume from the cubic's vCub for composition x (a_mix, b_mix given).
- * The correction terms mix linearly in mole fraction, each component's taken at the phase's
- * reduced temperature T/Tpc (Kay's rule, Tpc = Σ x_i·Tc_i) rather than at T itself: the steep
- * near-critical shape of c_i(T) then follows the blend's own critical region instead of
- * switching on at each component's Tc (a propane-rich liquid at 370 K is far from critical even
- * though propane alone would be). For a pure fluid this is exactly the pure-fluid correction.
- * Where a product carries fitted binary volume parameters (the refrigerant blends,
- * data/kij-fitted.ts), the pseudo-critical temperature gets a quadratic excess,
- * Tpc = Σ x_i·Tc_i + Σ_i Σ_j x_i·x_j·ξ_ij (the form of the reducing temperature of the
- * multi-fluid mixture models), and the translation an excess volume Σ_i Σ_j x_i·x_j·v^E_ij(T),
- * v^E_ij(T) = v^E_ij + v^E′_ij·(T/T_REF − 1);
- * both act after equilibrium, like the rest of the correction.
- */
-export function mixtureModelVolume(
-  mx: MixtureAtT,
-  x: ArrayLike<number>,
-  vCub: number,
-  am: number,
-  bm: number,
-): number {
-  let Tpc = 0;
-  for (let i = 0; i < mx.n; i++) Tpc += x[i]! * mx.Tc[i]!;
-  let c = 0;
-  const vm = mx.product.volumeMixing;
-  const tRef = mx.T / T_REF_KIJ - 1;
-  if (vm)
-    for (let i = 0; i < mx.n; i++)
-      for (let j = 0; j < mx.n; j++) {
-        const xx = x[i]! * x[j]!;
-        Tpc += xx * (vm.xi[i]?.[j] ?? 0);
-        c += xx * ((vm.vE[i]?.[j] ?? 0) + tRef * (vm.vESlope?.[i]?.[j] ?? 0));
-      }
-  let delta = 0;
-  let eps = 0;
-  let vc = 0;
-  const comps = mx.product.components;
-  for (let i = 0; i < mx.n; i++) {
-    const xi = x[i]!;
-    if (xi === 0) continue;
-    const m = comps[i]!;
-    const k = correctionAtT(m.correction, m.Tc, m.vcCub, (mx.T * m.Tc) / Tpc);
-    c += xi * k.c;
-    delta += xi * k.delta;
-    eps += xi * k.eps;
-    vc += xi * m.vcCub;
-  }
-  const T = mx.T;
-  const d = -((vCub * vCub) / (R * T)) * dPdv(family(mx), R, T, vCub, am, bm);
-  return correctedVolume({ c, delta, eps, vcCub: vc }, vCub, d);
-}
+/** The volume-correction mixing rule of blends lives in eos/blendVolume.ts. */
+export { mixtureModelVolume } from '../eos/blendVolume.js';
