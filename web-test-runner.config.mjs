@@ -80,7 +80,7 @@ export default {
       launchOptions: { executablePath: chromePath(), headless: true, args: chromiumArgs },
     }),
   ],
-  testFramework: { config: { timeout: 10_000 } },
+  testFramework: { config: { timeout: 30_000 } }, // a bound on a loaded machine, never a wait
   filterBrowserLogs: ({ args }) => !String(args[0]).includes('Lit is in dev mode'),
   reporters: [defaultReporter(), countsReporter()],
 };
