@@ -215,10 +215,10 @@ describe('site walkdown', () => {
     // After the reload the board loads and computes again: a state to wait for, bounded.
     await expect
       .poll(async () => (await rows(page)).find((r) => r.id === first.id)?.level, {
-        timeout: 15_000,
+        timeout: 45_000,
       })
       .toBe('needs-reading');
     const row = (await rows(page)).find((r) => r.id === first.id)!;
     expect(row.relief).toBe('');
-  });
+  }, 120_000);
 });
