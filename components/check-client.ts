@@ -1,0 +1,81 @@
+/**
+ * The tank check for the check screen, off the main thread (check-worker.ts) in the built app.
+ * Each request carries a sequence number and only the answer to the latest request is kept:
+ * the caller gets `null` for one that a newer request has overtaken (a stale answer is dropped,
+ * never shown). Where no worker can start (an old browser, Node, the component tests, which run
+ * the sources without the bundler) or the worker fails to load, the check runs here on the main
+ * thread, synchronously, as it did before.
+ */
+import { runCheck, type CheckOutcome } from './check-input.js';
+import type { CheckRequest } from './check-worker.js';
+import type { Readings, Settings, TankRecord } from './types.js';
+
+/** Where checks run: `auto` = a worker in the built app, else here; or forced either way. */
+export type CheckThread = 'auto' | 'main' | 'worker';
+
+let thread: CheckThread = 'auto';
+let worker: Worker | null | undefined;
+let latest = 0;
+const waiting = new Map<number, { req: CheckRequest; done: (o: CheckOutcome | null) => void }>();
+
+/** Chooses where checks run (tests force the worker or the main thread). */
+export function setCheckThread(t: CheckThread): void {
+  thread = t;
+}
+
+function builtApp(): boolean {
+  // Vite replaces import.meta.env at build time; under web-test-runner it is absent.
+  const env = (import.meta as ImportMeta & { env?: { PROD?: boolean } }).env;
+  return env?.PROD === true;
+}
+
+function answer(seq: number, outcome: CheckOutcome): void {
+  const job = waiting.get(seq);
+  waiting.delete(seq);
+  job?.done(seq === latest ? outcome : null);
+}
+
+function start(): Worker | null {
+  try {
+    const w = new Worker(new URL('./check-worker.ts', import.meta.url), { type: 'module' });
+    w.onmessage = (e: MessageEvent<{ seq: number; outcome: CheckOutcome }>) =>
+      answer(e.data.seq, e.data.outcome);
+    w.onerror = () => {
+      // The worker did not load: answer what is waiting here, and from now on.
+      worker = null;
+      for (const [seq, job] of waiting) {
+        const { tank, readings, settings } = job.req;
+        answer(seq, runCheck(tank, readings, settings));
+      }
+    };
+    return w;
+  } catch {
+    return null;
+  }
+}
+
+function workerFor(): Worker | null {
+  if (thread === 'main' || typeof Worker === 'undefined') return null;
+  if (thread === 'auto' && !builtApp()) return null;
+  if (worker === undefined) worker = start();
+  return worker;
+}
+
+/**
+ * Runs the check: the outcome at once where it runs on the main thread, else a promise of it
+ * (null if a newer request overtook this one).
+ */
+export function requestCheck(
+  tank: TankRecord,
+  readings: Readings,
+  settings: Settings,
+): CheckOutcome | Promise<CheckOutcome | null> {
+  const seq = ++latest;
+  const w = workerFor();
+  if (!w) return runCheck(tank, readings, settings);
+  const req: CheckRequest = { seq, tank, readings, settings };
+  return new Promise((done) => {
+    waiting.set(seq, { req, done });
+    w.postMessage(req);
+  });
+}
