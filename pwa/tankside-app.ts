@@ -39,7 +39,8 @@ import { openingReadings, type LastReadings } from '../components/reopen.js';
 import { BACKUP_MAX_BYTES, makeBackup, parseBackup } from './backup.js';
 import { checksToCsv } from './csv.js';
 import { claimByCheck, savedByUser } from './demo-own.js';
-import { lastCheckByTank } from './lookups.js';
+import { table } from './lookups.js';
+import { loadChecksLater, loadRegisterHead } from './register-load.js';
 import '../components/confirm-bar.js';
 import { FillController } from './fill-route.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
@@ -94,6 +95,8 @@ export class TanksideApp extends LitElement {
   declare _settings: Settings;
   declare _tanks: TankRecord[];
   declare _checks: CheckRecord[];
+  /** Newest check per tank, for the list (read without reading every check). */
+  private _last = table<CheckRecord>();
   /** Readings to open the current check screen with (loaded per tank). */
   declare _draft: { tankId: string; readings: Readings; last: LastReadings | null } | null;
   declare _undo: Undo | null;
@@ -246,7 +249,7 @@ export class TanksideApp extends LitElement {
       this._meta = { ...this._meta, demoSeeded: true };
       await store.putMeta(this._meta);
     }
-    await this._reload();
+    await this._reload(false);
     this._ready = true;
     await this._go(this._route);
     void this._askPersistence();
@@ -261,15 +264,17 @@ export class TanksideApp extends LitElement {
     }
   }
 
-  private async _reload(): Promise<void> {
+  /** Reads the register again; every check too, awaited unless `waitChecks` is false (start-up). */
+  private async _reload(waitChecks = true): Promise<void> {
     if (!this._store) return;
-    const [tanks, checks] = await Promise.all([
-      this._store.listTanks(),
-      this._store.listChecks(),
+    const all = loadChecksLater(this._store, (checks) => (this._checks = checks));
+    const [head] = await Promise.all([
+      loadRegisterHead(this._store),
       this._fill.reload(this._store),
     ]);
-    this._tanks = tanks;
-    this._checks = checks;
+    this._last = head.last;
+    this._tanks = head.tanks;
+    if (waitChecks) await all;
   }
 
   private _applyTheme(): void {
@@ -617,7 +622,7 @@ export class TanksideApp extends LitElement {
     const sites = [...new Set(this._tanks.map((t) => t.site).filter(Boolean))].sort();
     switch (r.name) {
       case 'tanks': {
-        const last = lastCheckByTank(this._checks);
+        const last = this._last;
         return html`<tank-list
           .tanks=${this._tanks}
           .lastChecks=${last}
