@@ -26,7 +26,7 @@ import { tankListStyles } from './tank-list-styles.js';
 import { DisplayUnits } from './display.js';
 import { productLabel } from './products.js';
 import { groupBySite, rowsFor, searchText, type TankRow } from './tank-rows.js';
-import { DEFAULT_SETTINGS, type CheckRecord, type TankRecord } from './types.js';
+import { DEFAULT_SETTINGS, type CheckBrief, type TankRecord } from './types.js';
 
 /** From this many tanks on, the list is virtualised. */
 export const VIRTUAL_FROM = 60;
@@ -46,7 +46,7 @@ export class TankList extends LitElement {
   /** Every tank in the register. */
   declare tanks: TankRecord[];
   /** Newest saved check per tank id (optional; shows its date and top caution level). */
-  declare lastChecks: Record<string, CheckRecord | undefined>;
+  declare lastChecks: Record<string, CheckBrief | undefined>;
   /** The user's display units. */
   declare display: DisplayUnits;
   declare _query: string;

@@ -5,7 +5,7 @@
  */
 import type { IDBPTransaction, StoreNames } from 'idb';
 import type { CheckRecord } from '../components/types.js';
-import { isNewer, type TanksideDB } from './storage-schema.js';
+import { briefOf, isNewer, type TanksideDB } from './storage-schema.js';
 
 type Tx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'readwrite'>;
 
@@ -13,13 +13,13 @@ type Tx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'readwrite'>;
 export async function noteCheck(tx: Tx, c: CheckRecord): Promise<void> {
   const latest = tx.objectStore('latestChecks');
   const had = await latest.get(c.tankId);
-  if (!had || had.id === c.id || isNewer(c, had)) await latest.put(c);
+  if (!had || had.id === c.id || isNewer(c, had)) await latest.put(briefOf(c));
 }
 
 /** Checks of a tank were removed (or put back): its latest is read again from the checks. */
 export async function refreshTank(tx: Tx, tankId: string): Promise<void> {
   const range = IDBKeyRange.bound([tankId, ''], [tankId, '\uffff']);
   const cursor = await tx.objectStore('checks').index('tankAt').openCursor(range, 'prev');
-  if (cursor) await tx.objectStore('latestChecks').put(cursor.value);
+  if (cursor) await tx.objectStore('latestChecks').put(briefOf(cursor.value));
   else await tx.objectStore('latestChecks').delete(tankId);
 }

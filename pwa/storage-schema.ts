@@ -11,7 +11,7 @@ import {
   type IDBPTransaction,
   type StoreNames,
 } from 'idb';
-import type { CheckRecord, DraftRecord, TankRecord } from '../components/types.js';
+import type { CheckBrief, CheckRecord, DraftRecord, TankRecord } from '../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 
@@ -25,8 +25,8 @@ export interface TanksideDB extends DBSchema {
     value: CheckRecord;
     indexes: { tankId: string; tankAt: [string, string] };
   };
-  /** v4: the newest saved check of each tank (key `tankId`), kept with every check written. */
-  latestChecks: { key: string; value: CheckRecord; indexes: { at: string } };
+  /** v4: the newest saved check of each tank in brief (key `tankId`), kept with every check written. */
+  latestChecks: { key: string; value: CheckBrief; indexes: { at: string } };
   drafts: { key: string; value: DraftRecord };
   settings: { key: string; value: unknown };
   sites: { key: string; value: SiteForecast };
@@ -72,12 +72,17 @@ export const UPGRADES: readonly UpgradeStep[] = [
       .objectStore('checks')
       .getAll()
       .then((all) => {
-        for (const c of newestPerTank(all)) void latest.put(c);
+        for (const c of newestPerTank(all)) void latest.put(briefOf(c));
       });
   },
 ];
 
 if (UPGRADES.length !== DB_VERSION) throw new Error('storage: one upgrade step per schema version');
+
+/** What the tank list shows of a tank's newest check (a few dozen bytes, not the whole check). */
+export function briefOf(c: CheckRecord): CheckBrief {
+  return { tankId: c.tankId, id: c.id, at: c.at, summary: { topLevel: c.summary.topLevel } };
+}
 
 /** The newest check of each tank among `checks` (by `at`; the later of equal times by id). */
 export function newestPerTank(checks: readonly CheckRecord[]): CheckRecord[] {
@@ -90,7 +95,7 @@ export function newestPerTank(checks: readonly CheckRecord[]): CheckRecord[] {
 }
 
 /** `a` was saved after `b` (ISO times compare as text; ties broken by id, so the order is total). */
-export function isNewer(a: CheckRecord, b: CheckRecord): boolean {
+export function isNewer(a: CheckBrief, b: CheckBrief): boolean {
   return a.at > b.at || (a.at === b.at && a.id > b.id);
 }
 

@@ -22,7 +22,13 @@
  * clear) runs in a single transaction, so a failure leaves the stored data as it was.
  */
 import type { IDBPDatabase } from 'idb';
-import type { CheckRecord, DraftRecord, Settings, TankRecord } from '../components/types.js';
+import type {
+  CheckBrief,
+  CheckRecord,
+  DraftRecord,
+  Settings,
+  TankRecord,
+} from '../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { isClearableDemo } from './demo-own.js';
@@ -132,9 +138,15 @@ export class Store {
     return list.sort((a, b) => (a.at < b.at ? 1 : a.at > b.at ? -1 : 0));
   }
 
-  /** The newest saved check of every tank (one per tank, in no particular order). */
-  async latestChecks(): Promise<CheckRecord[]> {
+  /** The newest saved check of every tank, in brief (one per tank, in no particular order). */
+  async latestChecks(): Promise<CheckBrief[]> {
     return this.db.getAll('latestChecks');
+  }
+
+  /** Up to `count` checks in key order after the key `after` (all from the first if null). */
+  async checksAfter(after: string | null, count: number): Promise<CheckRecord[]> {
+    const range = after === null ? null : IDBKeyRange.lowerBound(after, true);
+    return this.db.getAll('checks', range, count);
   }
 
   async putCheck(check: CheckRecord): Promise<void> {

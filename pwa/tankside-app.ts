@@ -27,6 +27,7 @@ import type { NoticeDetail } from '../components/app-notice.js';
 import {
   DEFAULT_SETTINGS,
   newId,
+  type CheckBrief,
   type CheckRecord,
   type Readings,
   type Settings,
@@ -96,7 +97,7 @@ export class TanksideApp extends LitElement {
   declare _tanks: TankRecord[];
   declare _checks: CheckRecord[];
   /** Newest check per tank, for the list (read without reading every check). */
-  private _last = table<CheckRecord>();
+  private _last = table<CheckBrief>();
   /** Readings to open the current check screen with (loaded per tank). */
   declare _draft: { tankId: string; readings: Readings; last: LastReadings | null } | null;
   declare _undo: Undo | null;
@@ -267,14 +268,17 @@ export class TanksideApp extends LitElement {
   /** Reads the register again; every check too, awaited unless `waitChecks` is false (start-up). */
   private async _reload(waitChecks = true): Promise<void> {
     if (!this._store) return;
-    const all = loadChecksLater(this._store, (checks) => (this._checks = checks));
+    const store = this._store;
+    const read = () => loadChecksLater(store, (c) => (this._checks = c), !waitChecks);
+    const all = waitChecks ? read() : null; // at start-up, after the list is shown
     const [head] = await Promise.all([
       loadRegisterHead(this._store),
       this._fill.reload(this._store),
     ]);
     this._last = head.last;
     this._tanks = head.tanks;
-    if (waitChecks) await all;
+    if (all) await all;
+    else void read();
   }
 
   private _applyTheme(): void {

@@ -4,6 +4,7 @@
 import { expect } from '@open-wc/testing';
 import { deleteDB } from 'idb';
 import { DB_VERSION, Store, UPGRADES, openAtVersion } from '../../pwa/storage.js';
+import { briefOf } from '../../pwa/storage-schema.js';
 import type { CheckRecord, TankRecord } from '../../components/types.js';
 import { DEFAULT_SETTINGS, emptyReadings } from '../../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../../components/walkdown-types.js';
@@ -99,7 +100,7 @@ const SEED: Record<number, (db: Awaited<ReturnType<typeof openAtVersion>>) => Pr
   },
   4: async (db) => {
     await SEED[3]!(db);
-    await db.put('latestChecks', check('c1', 't1', '2024-01-02T00:00:00.000Z'));
+    await db.put('latestChecks', briefOf(check('c1', 't1', '2024-01-02T00:00:00.000Z')));
   },
 };
 
