@@ -28,6 +28,15 @@ import { productLabel } from './products.js';
 import { groupBySite, rowsFor, searchText, type TankRow } from './tank-rows.js';
 import { DEFAULT_SETTINGS, type CheckBrief, type TankRecord } from './types.js';
 
+/**
+ * Groups and search texts per `tanks` array, kept across visits to the list (the shell hands the
+ * same array until the register changes), so reopening the list does not sort it again.
+ */
+const memo = new WeakMap<
+  readonly TankRecord[],
+  { groups: [string, TankRecord[]][]; text: WeakMap<TankRecord, string> }
+>();
+
 /** From this many tanks on, the list is virtualised. */
 export const VIRTUAL_FROM = 60;
 
@@ -51,13 +60,6 @@ export class TankList extends LitElement {
   declare display: DisplayUnits;
   declare _query: string;
 
-  /** Groups and search texts of the last `tanks` array (rebuilt only when it changes). */
-  private _memo: {
-    tanks: TankRecord[];
-    groups: [string, TankRecord[]][];
-    text: WeakMap<TankRecord, string>;
-  } | null = null;
-
   constructor() {
     super();
     this.tanks = [];
@@ -74,10 +76,10 @@ export class TankList extends LitElement {
 
   /** The rows to show: sites with their tanks, after the search. */
   private _rows(): TankRow[] {
-    let m = this._memo;
-    if (!m || m.tanks !== this.tanks) {
-      m = { tanks: this.tanks, groups: groupBySite(this.tanks), text: new WeakMap() };
-      this._memo = m;
+    let m = memo.get(this.tanks);
+    if (!m) {
+      m = { groups: groupBySite(this.tanks), text: new WeakMap() };
+      memo.set(this.tanks, m);
     }
     const text = m.text;
     const textOf = (t: TankRecord) => {

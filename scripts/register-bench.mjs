@@ -31,7 +31,7 @@ const FIRST_ROW = '[data-testid=tank-item]';
 
 /** ms from `start` (page time) until a tank row is painted. */
 async function untilFirstRow(page) {
-  await page.locator(FIRST_ROW).first().waitFor({ timeout: 60_000 });
+  await page.locator(FIRST_ROW).first().waitFor({ timeout: 300_000 });
   return page.evaluate(
     () =>
       new Promise((res) =>
@@ -43,7 +43,7 @@ async function untilFirstRow(page) {
 async function openFromTank(page) {
   // From a tank's screen back to the list, as a user taps "Tanks".
   await page.evaluate(() => (location.hash = '#/tank/reg-0'));
-  await page.locator('check-screen').waitFor({ timeout: 60_000 });
+  await page.locator('check-screen').waitFor({ timeout: 300_000 });
   const t0 = await page.evaluate(() => {
     const t = performance.now();
     location.hash = '#/';
@@ -94,7 +94,7 @@ async function search(page) {
   await box.fill('');
   const t0 = await page.evaluate(() => performance.now());
   await box.pressSequentially('tank 4321', { delay: 0 });
-  await page.locator('[data-testid=tank-item][data-tank-id=reg-4320]').waitFor({ timeout: 60_000 });
+  await page.locator('[data-testid=tank-item][data-tank-id=reg-4320]').waitFor({ timeout: 300_000 });
   const t1 = await page.evaluate(
     () =>
       new Promise((res) =>
@@ -107,11 +107,11 @@ async function search(page) {
 const context = await browser.newContext(PHONE);
 const page = await context.newPage();
 await page.goto(url);
-await page.locator(FIRST_ROW).first().waitFor({ timeout: 60_000 });
+await page.locator(FIRST_ROW).first().waitFor({ timeout: 300_000 });
 await saveOneCheck(page);
 await seedRegister(page, { tanks: 5000, checks: 5000 });
 await page.goto(url);
-await page.locator(FIRST_ROW).first().waitFor({ timeout: 60_000 });
+await page.locator(FIRST_ROW).first().waitFor({ timeout: 300_000 });
 const cdp = await context.newCDPSession(page);
 await cdp.send('Emulation.setCPUThrottlingRate', { rate: 4 });
 const r = { open: [], reload: [], scroll: [], search: [], rowsInDom: 0 };
