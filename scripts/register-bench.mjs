@@ -94,7 +94,9 @@ async function search(page) {
   await box.fill('');
   const t0 = await page.evaluate(() => performance.now());
   await box.pressSequentially('tank 4321', { delay: 0 });
-  await page.locator('[data-testid=tank-item][data-tank-id=reg-4320]').waitFor({ timeout: 300_000 });
+  await page
+    .locator('[data-testid=tank-item][data-tank-id=reg-4320]')
+    .waitFor({ timeout: 300_000 });
   const t1 = await page.evaluate(
     () =>
       new Promise((res) =>
