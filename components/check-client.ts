@@ -1,5 +1,6 @@
 /**
- * The tank check for the check screen, off the main thread (check-worker.ts) in the built app.
+ * The tank check for the check screen: a blend's off the main thread (check-worker.ts) in the
+ * built app.
  * Each request carries a sequence number and only the answer to the latest request is kept:
  * the caller gets `null` for one that a newer request has overtaken (a stale answer is dropped,
  * never shown). Where no worker can start (an old browser, Node, the component tests, which run
@@ -9,8 +10,14 @@
 import { runCheck, type CheckOutcome } from './check-input.js';
 import type { CheckRequest } from './check-worker.js';
 import type { Readings, Settings, TankRecord } from './types.js';
+import { productFor } from './products.js';
+import { refrigerantBlendById } from '../thermo/data/blends.js';
 
-/** Where checks run: `auto` = a worker in the built app, else here; or forced either way. */
+/**
+ * Where checks run: `auto` = a blend's check in a worker in the built app, everything else here
+ * (a pure fluid's check takes well under a millisecond even on a slow phone, less than the trip
+ * to a worker and back); or forced either way.
+ */
 export type CheckThread = 'auto' | 'main' | 'worker';
 
 let thread: CheckThread = 'auto';
@@ -54,9 +61,16 @@ function start(): Worker | null {
   }
 }
 
-function workerFor(): Worker | null {
+/** The tank holds a blend (an LP-gas preset or a refrigerant blend): its check can take long. */
+function holdsBlend(tank: TankRecord): boolean {
+  const p = productFor(tank.productId);
+  if (typeof p === 'string') return refrigerantBlendById(p) !== undefined;
+  return p !== undefined && 'components' in p && p.components.length > 1;
+}
+
+function workerFor(tank: TankRecord): Worker | null {
   if (thread === 'main' || typeof Worker === 'undefined') return null;
-  if (thread === 'auto' && !builtApp()) return null;
+  if (thread === 'auto' && (!builtApp() || !holdsBlend(tank))) return null;
   if (worker === undefined) worker = start();
   return worker;
 }
@@ -71,7 +85,7 @@ export function requestCheck(
   settings: Settings,
 ): CheckOutcome | Promise<CheckOutcome | null> {
   const seq = ++latest;
-  const w = workerFor();
+  const w = workerFor(tank);
   if (!w) return runCheck(tank, readings, settings);
   const req: CheckRequest = { seq, tank, readings, settings };
   return new Promise((done) => {

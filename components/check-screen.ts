@@ -143,6 +143,8 @@ export class CheckScreen extends LitElement {
 
   static override styles = [baseStyles, checkScreenStyles];
 
+  static busyAfterMs = 16; // a check still under way after a frame (ms) is marked as updating
+
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('settings')) this._display = DisplayUnits.fromSettings(this.settings);
     if (changed.has('readings')) {
@@ -190,7 +192,7 @@ export class CheckScreen extends LitElement {
       document.documentElement.style.setProperty('scroll-padding-top', `${bar.offsetHeight + 8}px`);
   });
 
-  /** The current result (for tests and the shell). */
+  /** The current result. */
   get outcome(): CheckOutcome | null {
     return this._outcome;
   }
@@ -215,7 +217,7 @@ export class CheckScreen extends LitElement {
     // Marked as updating only when the answer takes longer than a frame.
     this._busyTimer = setTimeout(() => {
       if (seq === this._seq && this._pending) this._updating = true;
-    }, 16);
+    }, CheckScreen.busyAfterMs);
   }
 
   /** Puts a check's outcome on screen and asks for its heating chart a moment later. */

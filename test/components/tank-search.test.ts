@@ -47,28 +47,30 @@ describe('tank-list at scale', () => {
     this.timeout(60_000);
     const all = tanks(5000);
     const el = await fixture<TankList>(html`<tank-list .tanks=${all}></tank-list>`);
-    await waitUntil(() => items(el).length > 0, 'first rows');
+    await waitUntil(() => items(el).length > 0, 'first rows', { timeout: 30_000 });
     // A phone screen's worth of rows, not 5,000.
     expect(items(el).length).to.be.within(1, 200);
 
     typeText(search(el), 'tank 4321');
-    await waitUntil(() => found(el).startsWith('1 of 5000'), 'name search');
+    await waitUntil(() => found(el).startsWith('1 of 5000'), 'name search', { timeout: 30_000 });
     await waitUntil(() => items(el).length === 1);
     expect(items(el)[0]!.dataset.tankId).to.equal('t4321');
 
     // Yard Q (i mod 26 = 16) holds tanks 16, 42, …, 4982: 192 tanks. No name or product label
     // holds a "q", so the words "yard" and "q" find only these.
     typeText(search(el), 'yard q');
-    await waitUntil(() => found(el).startsWith('192 of 5000'), 'site search');
+    await waitUntil(() => found(el).startsWith('192 of 5000'), 'site search', { timeout: 30_000 });
 
     // Butane: only tank 4321.
     typeText(search(el), 'butane');
-    await waitUntil(() => found(el).startsWith('1 of 5000'), 'product search');
+    await waitUntil(() => found(el).startsWith('1 of 5000'), 'product search', { timeout: 30_000 });
     await waitUntil(() => items(el)[0]?.dataset.tankId === 't4321');
 
     // Ammonia: i mod 7 = 0 for i < 5000 → 715 tanks (0, 7, …, 4998).
     typeText(search(el), 'ammonia');
-    await waitUntil(() => found(el).startsWith('715 of 5000'), 'ammonia search');
+    await waitUntil(() => found(el).startsWith('715 of 5000'), 'ammonia search', {
+      timeout: 30_000,
+    });
 
     // A found tank still opens.
     typeText(search(el), 'tank 4321');
