@@ -73,9 +73,7 @@ import {
   type LastReadings,
 } from './reopen.js';
 
-export interface CheckSaveDetail {
-  check: CheckRecord;
-}
+export type CheckSaveDetail = { check: CheckRecord };
 
 export class CheckScreen extends LitElement {
   static override properties = {
