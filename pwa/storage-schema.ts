@@ -18,6 +18,18 @@ import type { FillDraft, FillRecord } from '../components/fill-types.js';
 export const DB_NAME = 'tankside';
 export const DB_VERSION = 4;
 
+/** Bookkeeping that is not a user setting. */
+export interface Meta {
+  /** The demo site was created once; do not recreate it after the user clears it. */
+  demoSeeded: boolean;
+  /** The "works offline now" note was shown. */
+  offlineNoteShown: boolean;
+  /** Result of the last persistent-storage request, or null if never asked. */
+  persisted: boolean | null;
+}
+
+export const DEFAULT_META: Meta = { demoSeeded: false, offlineNoteShown: false, persisted: null };
+
 export interface TanksideDB extends DBSchema {
   tanks: { key: string; value: TankRecord; indexes: { site: string } };
   checks: {

@@ -32,22 +32,12 @@ import type {
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { isClearableDemo } from './demo-own.js';
-import { DB_NAME, DB_VERSION, openAtVersion, type TanksideDB } from './storage-schema.js';
+import { DEFAULT_META, openAtVersion, type Meta, type TanksideDB } from './storage-schema.js';
+import { DB_NAME, DB_VERSION } from './storage-schema.js';
 import { noteCheck, refreshTank } from './storage-latest.js';
 
-export { DB_NAME, DB_VERSION, UPGRADES, openAtVersion, type TanksideDB } from './storage-schema.js';
-
-/** Bookkeeping that is not a user setting. */
-export interface Meta {
-  /** The demo site was created once; do not recreate it after the user clears it. */
-  demoSeeded: boolean;
-  /** The "works offline now" note was shown. */
-  offlineNoteShown: boolean;
-  /** Result of the last persistent-storage request, or null if never asked. */
-  persisted: boolean | null;
-}
-
-export const DEFAULT_META: Meta = { demoSeeded: false, offlineNoteShown: false, persisted: null };
+export { DB_NAME, DB_VERSION, DEFAULT_META, UPGRADES, openAtVersion } from './storage-schema.js';
+export type { Meta, TanksideDB } from './storage-schema.js';
 
 /** All the user's data, as exported and imported. */
 export interface DataSet {
