@@ -48,6 +48,17 @@ export const checkScreenStyles = css`
   textarea {
     min-height: 10rem;
   }
+  .updating {
+    position: absolute;
+    right: 0.75rem;
+    bottom: -1.4rem;
+    margin: 0;
+    padding: 0 0.4rem;
+    font-size: 0.8rem;
+    border-radius: 0.25rem;
+    background: var(--paper);
+    color: var(--ink);
+  }
   .keybar {
     position: sticky;
     top: 0;

@@ -1,8 +1,9 @@
 /**
  * The check of one tank: readings in, live results out (no compute button), the heating chart,
- * save to history, share and print. It runs `checkTank` through `runCheck` on every valid edit
- * (well under a millisecond for a pure product, a few for a blend; see the report in the
- * commit), and draws the chart a moment later so typing never waits for it.
+ * save to history, share and print. Every edit runs `checkTank` through `requestCheck`
+ * (check-client.ts): in the built app in a Web Worker, so typing never waits for the engine.
+ * The last figures stay until the new ones arrive, marked as updating (`aria-busy`,
+ * "updating…") after a frame; an answer overtaken by a newer edit is dropped.
  *
  * @fires check-save - `CustomEvent<{ check: CheckRecord }>` when the user saves the check.
  * @fires fill-start - `CustomEvent<{ draft: FillDraft }>`: a fill started from the readings on screen.
@@ -19,7 +20,7 @@
  * The host carries `data-check-input`: the JSON of the `checkTank` input behind the figures
  * shown (absent while a reading is missing or invalid).
  *
- * data-testid: `check-screen`, `check-save`, `check-share`, `check-print`, `readings-clear`,
+ * data-testid: `check-screen`, `check-updating`, `check-save`, `check-share`, `check-print`, `readings-clear`,
  * `check-status`, `tank-heading`, `fill-start` (fill-start.ts), plus those of <check-form>,
  * <check-results>, <check-chart>, <check-history> and <fill-history>.
  */
@@ -39,17 +40,24 @@ import { fillStartButton } from './fill-start.js';
 import type { FillRecord } from './fill-types.js';
 import type { ReadingsChange } from './check-form.js';
 import { screenErrors, type ScreenErrors } from './check-errors.js';
-import { minTemperatureFor, runCheck, summarize, type CheckOutcome } from './check-input.js';
+import { buildCheckInput, minTemperatureFor, runCheck, type CheckOutcome } from './check-input.js';
+import { requestCheck } from './check-client.js';
 import type { SiteRules } from './site-rules.js';
 import type { HeatingCurve } from './chart-data.js';
-import { curveFor } from './chart-client.js';
-import { productFor, productLabel } from './products.js';
+import { curveLater } from './curve-later.js';
+import {
+  actionsPart,
+  barPart,
+  chartPart,
+  checkRecordOf,
+  headPart,
+  stalePart,
+} from './check-screen-parts.js';
 import { summaryText } from './summary.js';
 import { shareText } from './share.js';
 import {
   DEFAULT_SETTINGS,
   emptyReadings,
-  newId,
   type CheckRecord,
   type Readings,
   type Settings,
@@ -66,12 +74,7 @@ import {
   type LastReadings,
 } from './reopen.js';
 
-export interface CheckSaveDetail {
-  check: CheckRecord;
-}
-
-/** Wait after the last edit before the chart is redrawn, ms. */
-const CHART_DELAY_MS = 150;
+export type CheckSaveDetail = { check: CheckRecord };
 
 export class CheckScreen extends LitElement {
   static override properties = {
@@ -86,6 +89,7 @@ export class CheckScreen extends LitElement {
     _valid: { state: true },
     _outcome: { state: true },
     _curve: { state: true },
+    _updating: { state: true },
     _status: { state: true },
     _shareText: { state: true },
   };
@@ -108,11 +112,18 @@ export class CheckScreen extends LitElement {
   declare _valid: boolean;
   declare _outcome: CheckOutcome | null;
   declare _curve: HeatingCurve | null;
+  /** A check is under way and the figures shown are those of the previous readings. */
+  declare _updating: boolean;
   declare _status: string;
   declare _shareText: string;
 
-  private _chartTimer: ReturnType<typeof setTimeout> | undefined;
-  private _chartTicket = 0;
+  /** Cancels the chart asked for last (its answer is for older readings). */
+  private _cancelChart: () => void = () => {};
+  /** Sequence number of the latest check asked for; older answers are dropped. */
+  private _seq = 0;
+  /** The check under way in the worker, until its answer (or a newer request's) arrives. */
+  private _pending: Promise<void> | null = null;
+  private _busyTimer: ReturnType<typeof setTimeout> | undefined;
   private _display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
 
   constructor() {
@@ -128,11 +139,14 @@ export class CheckScreen extends LitElement {
     this._valid = true;
     this._outcome = null;
     this._curve = null;
+    this._updating = false;
     this._status = '';
     this._shareText = '';
   }
 
   static override styles = [baseStyles, checkScreenStyles];
+
+  static busyAfterMs = 16; // a check still under way after a frame (ms) is marked as updating
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('settings')) this._display = DisplayUnits.fromSettings(this.settings);
@@ -170,7 +184,8 @@ export class CheckScreen extends LitElement {
 
   override disconnectedCallback(): void {
     super.disconnectedCallback();
-    clearTimeout(this._chartTimer);
+    this._cancelChart();
+    clearTimeout(this._busyTimer);
     this._barObserver.disconnect();
     document.documentElement.style.removeProperty('scroll-padding-top');
   }
@@ -185,30 +200,42 @@ export class CheckScreen extends LitElement {
       document.documentElement.style.setProperty('scroll-padding-top', `${bar.offsetHeight + 8}px`);
   });
 
-  /** The current result (for tests and the shell). */
+  /** The current result. */
   get outcome(): CheckOutcome | null {
     return this._outcome;
   }
 
   private _recompute(): void {
-    this._outcome = runCheck(this.tank, this._readings, this.settings, this.siteRules);
-    clearTimeout(this._chartTimer);
-    const ticket = ++this._chartTicket;
-    const outcome = this._outcome;
-    if (!outcome.result || !outcome.input) {
-      this._curve = null;
+    const seq = ++this._seq;
+    clearTimeout(this._busyTimer);
+    // A reading still missing needs no engine: say so at once, on this thread.
+    const got = buildCheckInput(this.tank, this._readings, this.settings, this.siteRules).input
+      ? requestCheck(this.tank, this._readings, this.settings, this.siteRules)
+      : runCheck(this.tank, this._readings, this.settings, this.siteRules);
+    if (!(got instanceof Promise)) {
+      this._pending = null;
+      this._show(got);
       return;
     }
-    this._chartTimer = setTimeout(() => {
-      const product = productFor(this.tank.productId);
-      if (product === undefined || !outcome.result || !outcome.input) return;
-      const { peak, liquidFullTemperature, contents } = outcome.result;
-      const req = { product, result: { peak, liquidFullTemperature, contents } };
-      // Off the main thread (chart-client.ts); an answer for an older edit is dropped.
-      void curveFor({ ...req, Tnow: outcome.input.liquidTemperature }).then((curve) => {
-        if (ticket === this._chartTicket) this._curve = curve;
-      });
-    }, CHART_DELAY_MS);
+    this._pending = got.then((o) => {
+      if (seq !== this._seq) return; // overtaken by a newer edit: dropped
+      this._pending = null;
+      if (o) this._show(o);
+    });
+    // Marked as updating only when the answer takes longer than a frame.
+    this._busyTimer = setTimeout(() => {
+      if (seq === this._seq && this._pending) this._updating = true;
+    }, CheckScreen.busyAfterMs);
+  }
+
+  /** Puts a check's outcome on screen and asks for its heating chart a moment later. */
+  private _show(outcome: CheckOutcome): void {
+    clearTimeout(this._busyTimer);
+    this._updating = false;
+    this._outcome = outcome;
+    this._cancelChart();
+    if (!outcome.result || !outcome.input) this._curve = null;
+    else this._cancelChart = curveLater(this.tank.productId, outcome, (c) => (this._curve = c));
   }
 
   private _onReadings(e: CustomEvent<ReadingsChange>): void {
@@ -223,17 +250,15 @@ export class CheckScreen extends LitElement {
   }
 
   private _save(): void {
+    // Saved with the figures of the readings on screen: wait for a check under way.
+    const pending = this._pending;
+    if (pending) {
+      void pending.then(() => this._save());
+      return;
+    }
     const o = this._outcome;
     if (!o?.result || !this._valid) return;
-    const check: CheckRecord = {
-      id: newId(),
-      tankId: this.tank.id,
-      at: new Date().toISOString(),
-      readings: this._readings,
-      productLabel: o.result.product.label,
-      summary: summarize(o.result, this._display),
-      demo: this.tank.demo,
-    };
+    const check = checkRecordOf(this.tank, this._readings, o.result, this._display);
     this.dispatchEvent(
       new CustomEvent<CheckSaveDetail>('check-save', {
         detail: { check },
@@ -245,6 +270,7 @@ export class CheckScreen extends LitElement {
   }
 
   private async _share(): Promise<void> {
+    if (this._pending) await this._pending;
     const o = this._outcome;
     if (!o?.result) return;
     const text = summaryText(this.tank, this._readings, o.result, this._display);
@@ -253,10 +279,6 @@ export class CheckScreen extends LitElement {
     if (done === null) return; // the user closed the share sheet
     this._status = done.status;
     this._shareText = done.byHand ? text : '';
-  }
-
-  private _print(): void {
-    window.print();
   }
 
   private _clearReadings(): void {
@@ -272,12 +294,11 @@ export class CheckScreen extends LitElement {
   }
 
   private _replaceReadings(next: Readings): void {
-    const cleared = next;
-    this._readings = cleared;
-    this.readings = cleared;
+    this._readings = next;
+    this.readings = next;
     this.dispatchEvent(
       new CustomEvent<ReadingsChange>('readings-change', {
-        detail: { readings: cleared, valid: true },
+        detail: { readings: next, valid: true },
         bubbles: true,
         composed: true,
       }),
@@ -302,47 +323,6 @@ export class CheckScreen extends LitElement {
     return `${whenText(at)}, ${ageText(at)} old`;
   }
 
-  private _head(): TemplateResult {
-    const t = this.tank;
-    const d = this._display;
-    const np = t.nameplate;
-    return html`<div class="head">
-      <h2 data-testid="tank-heading">${t.name}${t.demo ? ' (demo, invented)' : ''}</h2>
-      <button class="quiet no-print" @click=${this._editTank}>Edit tank</button>
-      <p class="plate">
-        ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
-        ${d.format('volume', np.waterCapacity)} · MAWP
-        ${d.format('gaugePressure', np.designPressure)} ·
-        ${
-          np.reliefSetPressure === undefined
-            ? html`<span data-testid="relief-assumed"
-                >relief not entered (assumed at the design pressure)</span
-              >`
-            : html`relief ${d.format('gaugePressure', np.reliefSetPressure)}`
-        }
-      </p>
-      <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
-    </div>`;
-  }
-
-  /** The key bar: figures, or what is missing or wrong, and the standing caution in short. */
-  private _bar(result: TankCheckResult | null, error: string, stale: string): TemplateResult {
-    const o = this._outcome;
-    const message = error
-      ? 'No figures: fix the reading marked below.'
-      : o?.missing.length
-        ? `Enter ${o.missing.join(' and ')}: the stop-at percent and the room left show here.`
-        : 'No figures yet.';
-    return html`<div class="keybar">
-      <key-bar
-        .result=${result}
-        .display=${this._display}
-        .message=${message}
-        .stale=${stale}
-      ></key-bar>
-    </div>`;
-  }
-
   override render() {
     const t = this.tank;
     const d = this._display;
@@ -354,16 +334,10 @@ export class CheckScreen extends LitElement {
     const last = hasMeasured(this._readings) ? null : lastReadings(this.last, this.checks);
     return html`
       <div data-testid="check-screen">
-        ${this._head()} ${this._bar(result, error, stale)}
+        ${headPart(t, d, () => this._editTank())}
+        ${barPart({ result, display: d, outcome: o, error, stale, updating: this._updating })}
         <last-check .last=${last} .display=${d} @readings-reuse=${this._reuse}></last-check>
-        ${
-          stale
-            ? html`<p class="stale" data-testid="readings-age" role="note">
-                These readings were taken ${stale}. The figures are for then, not now: type today’s
-                readings.
-              </p>`
-            : nothing
-        }
+        ${stalePart(stale)}
         <div class="layout">
           <check-form
             .readings=${this.readings}
@@ -373,7 +347,7 @@ export class CheckScreen extends LitElement {
             .fieldErrors=${fieldErrors}
             @readings-change=${this._onReadings}
           ></check-form>
-          <div>
+          <div aria-busy=${this._updating ? 'true' : 'false'}>
             <check-results
               .result=${result}
               .display=${d}
@@ -382,7 +356,12 @@ export class CheckScreen extends LitElement {
               .thermometerTolerance=${this.settings.thermometerTolerance}
               ?peak-estimated=${o?.peakEstimated ?? false}
             ></check-results>
-            ${this._actions(result)} ${this._chart(result)}
+            ${this._actions(result)}
+            ${
+              result && this._curve
+                ? chartPart(t, d, this._curve, result, o?.input?.liquidTemperature ?? Number.NaN)
+                : nothing
+            }
             <h3>History</h3>
             <check-history .checks=${this.checks} .display=${d}></check-history>
             <h3>Fills</h3>
@@ -394,40 +373,17 @@ export class CheckScreen extends LitElement {
   }
 
   private _actions(result: TankCheckResult | null): TemplateResult {
-    return html`<div class="actions">
-        <button class="primary" data-testid="check-save" ?disabled=${!result} @click=${this._save}>
-          Save check
-        </button>
-        ${fillStartButton(this, this.tank.id, result ? (this._outcome ?? null) : null, this.settings)}
-        <button data-testid="check-share" ?disabled=${!result} @click=${this._share}>
-          Share summary
-        </button>
-        <button data-testid="check-print" ?disabled=${!result} @click=${this._print}>Print</button>
-        <button class="quiet" data-testid="readings-clear" @click=${this._clearReadings}>
-          Clear readings
-        </button>
-      </div>
-      <p class="status" role="status" data-testid="check-status">${this._status}</p>
-      ${
-        this._shareText
-          ? html`<label for="share-text">Summary</label
-              ><textarea id="share-text" readonly .value=${this._shareText}></textarea>`
-          : nothing
-      }`;
-  }
-
-  private _chart(result: TankCheckResult | null): TemplateResult | typeof nothing {
-    const np = this.tank.nameplate;
-    if (!result || !this._curve) return nothing;
-    return html`<h3>Heating</h3>
-      <check-chart
-        .curve=${this._curve}
-        .display=${this._display}
-        .designPressure=${np.designPressure}
-        .reliefPressure=${np.reliefSetPressure ?? np.designPressure}
-        .nowTemperature=${this._outcome?.input?.liquidTemperature ?? Number.NaN}
-        .peakTemperature=${result.peak.temperature}
-      ></check-chart>`;
+    const o = result && !this._pending ? this._outcome : null;
+    return actionsPart({
+      ready: result !== null,
+      fillStart: fillStartButton(this, this.tank.id, o, this.settings),
+      save: () => this._save(),
+      share: () => void this._share(),
+      print: () => window.print(),
+      clear: () => this._clearReadings(),
+      status: this._status,
+      shareText: this._shareText,
+    });
   }
 }
 

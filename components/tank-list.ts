@@ -10,15 +10,36 @@
  * @fires demo-clear - `CustomEvent<Record<string, never>>`: remove the invented demo tanks.
  * @fires site-walk - `CustomEvent<{ site: string }>`: open the site's board and walkdown.
  *
- * data-testid: `tank-add`, `tank-item` (with `data-tank-id` and `data-demo`), `tank-edit`,
- * `tank-duplicate`, `tank-delete`, `demo-clear`, `walkdown-start` (with `data-site`).
+ * A search box (`tank-search`) keeps, as you type, the tanks whose name, site or product holds
+ * every word typed (components/tank-rows.ts). A register longer than VIRTUAL_FROM tanks is
+ * drawn with @lit-labs/virtualizer: only the rows near the screen are in the DOM, so a register
+ * of thousands opens and scrolls as fast as a short one (a short one is drawn whole).
+ *
+ * data-testid: `tank-add`, `tank-search`, `tank-found`, `tank-item` (with `data-tank-id` and
+ * `data-demo`), `tank-edit`, `tank-duplicate`, `tank-delete`, `demo-clear`, `walkdown-start`
+ * (with `data-site`).
  */
-import { LitElement, html, css, nothing } from 'lit';
+import { LitElement, html, nothing, type TemplateResult } from 'lit';
+import { virtualize } from '@lit-labs/virtualizer/virtualize.js';
 import { baseStyles, levelStyles } from './styles.js';
+import { tankListStyles } from './tank-list-styles.js';
 import { DisplayUnits } from './display.js';
 import { productLabel } from './products.js';
 import { formatDate } from './format-date.js';
-import { DEFAULT_SETTINGS, type CheckRecord, type TankRecord } from './types.js';
+import { groupBySite, rowsFor, searchText, type TankRow } from './tank-rows.js';
+import { DEFAULT_SETTINGS, type CheckBrief, type TankRecord } from './types.js';
+
+/**
+ * Groups and search texts per `tanks` array, kept across visits to the list (the shell hands the
+ * same array until the register changes), so reopening the list does not sort it again.
+ */
+const memo = new WeakMap<
+  readonly TankRecord[],
+  { groups: [string, TankRecord[]][]; text: WeakMap<TankRecord, string> }
+>();
+
+/** From this many tanks on, the list is virtualised. */
+export const VIRTUAL_FROM = 60;
 
 export interface TankIdDetail {
   id: string;
@@ -29,123 +50,70 @@ export class TankList extends LitElement {
     tanks: { attribute: false },
     lastChecks: { attribute: false },
     display: { attribute: false },
+    _query: { state: true },
   };
 
   /** Every tank in the register. */
   declare tanks: TankRecord[];
   /** Newest saved check per tank id (optional; shows its date and top caution level). */
-  declare lastChecks: Record<string, CheckRecord | undefined>;
+  declare lastChecks: Record<string, CheckBrief | undefined>;
   /** The user's display units. */
   declare display: DisplayUnits;
+  declare _query: string;
 
   constructor() {
     super();
     this.tanks = [];
     this.lastChecks = {};
     this.display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
+    this._query = '';
   }
 
-  static override styles = [
-    baseStyles,
-    levelStyles,
-    css`
-      ul {
-        list-style: none;
-        margin: 0;
-        padding: 0;
-      }
-      li.tank {
-        border: var(--border-width) solid var(--line);
-        border-radius: 0.6rem;
-        margin: 0 0 0.75rem;
-        padding: 0.5rem;
-        background: var(--paper);
-      }
-      .open {
-        width: 100%;
-        display: block;
-        text-align: left;
-        border: 0;
-        padding: 0.5rem;
-        min-height: 56px;
-      }
-      .name {
-        font-size: 1.15em;
-        font-weight: 800;
-        display: block;
-      }
-      .meta {
-        display: block;
-        font-weight: 400;
-        color: var(--muted);
-        overflow-wrap: anywhere;
-      }
-      .actions {
-        display: flex;
-        flex-wrap: wrap;
-        gap: 0.4rem;
-        padding: 0 0.5rem 0.25rem;
-      }
-      .actions button {
-        /* Each button at least as wide as its word: on a narrow phone a row wraps rather than
-           cutting "Duplicate" off. */
-        flex: 1 1 auto;
-        min-width: max-content;
-        padding: 0.5rem 0.4rem;
-        font-size: 0.9em;
-      }
-      .walk {
-        width: 100%;
-        margin: 0 0 0.6rem;
-      }
-      .site {
-        margin: 1.25rem 0 0.5rem;
-        font-size: 1.2em;
-        overflow-wrap: anywhere;
-      }
-      .demo-note {
-        border: var(--border-width) dashed var(--ink);
-        border-radius: 0.5rem;
-        padding: 0.6rem;
-        margin-bottom: 0.75rem;
-      }
-      .empty {
-        padding: 1rem 0;
-      }
-      .head {
-        display: flex;
-        flex-wrap: wrap;
-        gap: 0.5rem;
-        justify-content: space-between;
-        align-items: center;
-      }
-    `,
-  ];
+  static override styles = [baseStyles, levelStyles, tankListStyles];
 
   private _fire<T>(type: string, detail: T): void {
     this.dispatchEvent(new CustomEvent<T>(type, { detail, bubbles: true, composed: true }));
   }
 
-  /** Sites in alphabetical order, each with its tanks by name. */
-  private _groups(): [string, TankRecord[]][] {
-    const bySite = new Map<string, TankRecord[]>();
-    for (const t of this.tanks) {
-      const site = t.site.trim() || 'No site';
-      const list = bySite.get(site) ?? [];
-      list.push(t);
-      bySite.set(site, list);
+  /** The rows to show: sites with their tanks, after the search. */
+  private _rows(): TankRow[] {
+    let m = memo.get(this.tanks);
+    if (!m) {
+      m = { groups: groupBySite(this.tanks), text: new WeakMap() };
+      memo.set(this.tanks, m);
     }
-    const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
-    return [...bySite.entries()]
-      .sort(([a], [b]) => collator.compare(a, b))
-      .map(([site, list]) => [site, list.sort((a, b) => collator.compare(a.name, b.name))]);
+    const text = m.text;
+    const textOf = (t: TankRecord) => {
+      let s = text.get(t);
+      if (s === undefined) text.set(t, (s = searchText(t)));
+      return s;
+    };
+    return rowsFor(m.groups, this._query, textOf);
   }
+
+  private _site(site: string, count: number): TemplateResult {
+    return html`<div class="site-row" role="listitem" aria-label=${site}>
+      <h3 class="site">${site}</h3>
+      <button
+        class="walk"
+        data-testid="walkdown-start"
+        data-site=${site}
+        @click=${() => this._fire('site-walk', { site })}
+      >
+        Site board and walkdown (${count} tank${count === 1 ? '' : 's'})
+      </button>
+    </div>`;
+  }
+
+  private _row = (r: TankRow): TemplateResult =>
+    r.kind === 'site' ? this._site(r.site, r.count) : this._tank(r.tank);
 
   private _tank(t: TankRecord) {
     const d = this.display;
     const last = this.lastChecks[t.id];
     const np = t.nameplate;
-    return html`<li
+    return html`<div
+      role="listitem"
       class="tank"
       data-testid="tank-item"
       data-tank-id=${t.id}
@@ -203,12 +171,14 @@ export class TankList extends LitElement {
           Delete
         </button>
       </div>
-    </li>`;
+    </div>`;
   }
 
   override render() {
-    const groups = this._groups();
     const hasDemo = this.tanks.some((t) => t.demo);
+    const rows = this.tanks.length ? this._rows() : [];
+    const shown = rows.reduce((n, r) => n + (r.kind === 'tank' ? 1 : 0), 0);
+    const virtual = this.tanks.length >= VIRTUAL_FROM;
     return html`
       <div class="head">
         <h2>Tanks</h2>
@@ -220,40 +190,54 @@ export class TankList extends LitElement {
           Add a tank
         </button>
       </div>
+      ${hasDemo ? this._demoNote() : nothing}
       ${
-        hasDemo
-          ? html`<div class="demo-note" role="note">
-              <p>
-                <strong>Demo site.</strong> These tanks, names and readings are invented, so you can
-                see real results at once. None of them is a real tank.
-              </p>
-              <button data-testid="demo-clear" @click=${() => this._fire('demo-clear', {})}>
-                Clear the demo tanks
-              </button>
-            </div>`
-          : nothing
+        this.tanks.length === 0
+          ? html`<p class="empty">No tanks yet. Add one with its nameplate figures to start.</p>`
+          : this._search(shown)
       }
-      ${groups.length === 0 ? html`<p class="empty">No tanks yet. Add one with its nameplate figures to start.</p>` : nothing}
-      ${groups.map(
-        ([site, list]) =>
-          html`<section aria-label=${site}>
-            <h3 class="site">${site}</h3>
-            <button
-              class="walk"
-              data-testid="walkdown-start"
-              data-site=${site}
-              @click=${() => this._fire('site-walk', { site })}
-            >
-              Site board and walkdown (${list.length} tank${list.length === 1 ? '' : 's'})
-            </button>
-            <ul>
-              ${list.map((t) => this._tank(t))}
-            </ul>
-          </section>`,
-      )}
+      <div class="rows" role="list" aria-label="Tanks by site">
+        ${
+          virtual
+            ? virtualize({ items: rows, renderItem: this._row, keyFunction: rowKey })
+            : rows.map(this._row)
+        }
+      </div>
     `;
   }
+
+  private _search(shown: number): TemplateResult {
+    const q = this._query.trim();
+    return html`<div class="search">
+        <label for="tank-search">Find a tank (name, site or product)</label>
+        <input
+          id="tank-search"
+          type="search"
+          data-testid="tank-search"
+          autocomplete="off"
+          .value=${this._query}
+          @input=${(e: Event) => (this._query = (e.target as HTMLInputElement).value)}
+        />
+      </div>
+      <p class="found" data-testid="tank-found" role="status">
+        ${q ? `${shown} of ${this.tanks.length} tanks match “${q}”.` : `${this.tanks.length} tanks.`}
+      </p>`;
+  }
+
+  private _demoNote(): TemplateResult {
+    return html`<div class="demo-note" role="note">
+      <p>
+        <strong>Demo site.</strong> These tanks, names and readings are invented, so you can see
+        real results at once. None of them is a real tank.
+      </p>
+      <button data-testid="demo-clear" @click=${() => this._fire('demo-clear', {})}>
+        Clear the demo tanks
+      </button>
+    </div>`;
+  }
 }
+
+const rowKey = (r: TankRow): string => (r.kind === 'site' ? `site:${r.site}` : r.tank.id);
 
 customElements.define('tank-list', TankList);
 

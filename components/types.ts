@@ -102,6 +102,14 @@ export interface CheckSummary {
 }
 
 /** A saved check. */
+/** What the tank list shows of a tank's newest check (storage keeps one per tank). */
+export interface CheckBrief {
+  tankId: string;
+  id: string;
+  at: string;
+  summary: Pick<CheckSummary, 'topLevel'>;
+}
+
 export interface CheckRecord {
   id: string;
   tankId: string;

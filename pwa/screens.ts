@@ -12,8 +12,7 @@ import type { ReadingsChange } from '../components/check-form.js';
 import type { SettingsChange } from '../components/settings-form.js';
 import type { BackupImportDetail } from '../components/backup-panel.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
-import type { CheckRecord, Settings, TankRecord } from '../components/types.js';
-import { lastCheckByTank } from './lookups.js';
+import type { CheckBrief, CheckRecord, Settings, TankRecord } from '../components/types.js';
 import type { Route } from './router.js';
 import type { Store } from './storage.js';
 import type { OpenDraft } from './drafts.js';
@@ -47,6 +46,8 @@ export interface ScreenContext {
   settings: Settings;
   tanks: TankRecord[];
   checks: CheckRecord[];
+  /** Newest check per tank, for the list. */
+  lastChecks: Record<string, CheckBrief | undefined>;
   /** The blank tank of the "add a tank" screen. */
   newTank: TankRecord;
   draft: OpenDraft | null;
@@ -104,7 +105,7 @@ export function renderScreen(c: ScreenContext): TemplateResult {
 function tanksScreen(c: ScreenContext): TemplateResult {
   return html`<tank-list
     .tanks=${c.tanks}
-    .lastChecks=${lastCheckByTank(c.checks)}
+    .lastChecks=${c.lastChecks}
     .display=${DisplayUnits.fromSettings(c.settings)}
     @tank-open=${(e: CustomEvent<TankIdDetail>) => c.navigate({ name: 'check', id: e.detail.id })}
     @tank-edit=${(e: CustomEvent<TankIdDetail>) => c.navigate({ name: 'edit', id: e.detail.id })}

@@ -1,6 +1,7 @@
 /**
- * The one module that touches IndexedDB. Tanks, checks, drafts and settings, with a schema
- * version and one upgrade step per version.
+ * The one module that reads and writes IndexedDB (the schema and its upgrade steps are in
+ * storage-schema.ts). Tanks, checks, drafts and settings, with a schema version and one upgrade
+ * step per version.
  *
  * Schema history (each step in `UPGRADES` takes the database from version i to i + 1; a step,
  * once shipped, is never edited — a change is a new step):
@@ -10,98 +11,33 @@
  *       `site`); nothing else changes.
  *   v3  adds `fills` (key `id`, index `tankId`: saved fill records) and `fillDrafts` (key
  *       `tankId`: a fill under way); nothing else changes.
+ *   v4  adds the index `tankAt` ([tankId, at]) on `checks` and the store `latestChecks` (key
+ *       `tankId`, index `at`: each tank's newest check, filled from the saved checks by the
+ *       step and kept by every write of checks here), so the list of a register of thousands
+ *       reads one check per tank (pwa/storage-schema.ts, pwa/storage-latest.ts).
  *   (v1) `Readings.takenAt`, an optional ISO time on a draft's or a check's readings, needs no
  *       step: records without it stay valid (components/reopen.ts uses `updatedAt` / `at`).
  *
  * Every write that must be all-or-nothing (delete a tank with its checks, import a backup,
  * clear) runs in a single transaction, so a failure leaves the stored data as it was.
  */
-import {
-  openDB,
-  type DBSchema,
-  type IDBPDatabase,
-  type IDBPTransaction,
-  type StoreNames,
-} from 'idb';
-import type { CheckRecord, DraftRecord, Settings, TankRecord } from '../components/types.js';
+import type { IDBPDatabase } from 'idb';
+import type {
+  CheckBrief,
+  CheckRecord,
+  DraftRecord,
+  Settings,
+  TankRecord,
+} from '../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { isClearableDemo } from './demo-own.js';
+import { DEFAULT_META, openAtVersion, type Meta, type TanksideDB } from './storage-schema.js';
+import { DB_NAME, DB_VERSION } from './storage-schema.js';
+import { noteCheck, refreshTank } from './storage-latest.js';
 
-export const DB_NAME = 'tankside';
-export const DB_VERSION = 3;
-
-/** Bookkeeping that is not a user setting. */
-export interface Meta {
-  /** The demo site was created once; do not recreate it after the user clears it. */
-  demoSeeded: boolean;
-  /** The "works offline now" note was shown. */
-  offlineNoteShown: boolean;
-  /** Result of the last persistent-storage request, or null if never asked. */
-  persisted: boolean | null;
-}
-
-export const DEFAULT_META: Meta = { demoSeeded: false, offlineNoteShown: false, persisted: null };
-
-export interface TanksideDB extends DBSchema {
-  tanks: { key: string; value: TankRecord; indexes: { site: string } };
-  checks: { key: string; value: CheckRecord; indexes: { tankId: string } };
-  drafts: { key: string; value: DraftRecord };
-  settings: { key: string; value: unknown };
-  sites: { key: string; value: SiteForecast };
-  walkdowns: { key: string; value: WalkdownRecord; indexes: { site: string } };
-  fills: { key: string; value: FillRecord; indexes: { tankId: string } };
-  fillDrafts: { key: string; value: FillDraft };
-}
-
-type UpgradeTx = IDBPTransaction<TanksideDB, StoreNames<TanksideDB>[], 'versionchange'>;
-type UpgradeStep = (db: IDBPDatabase<TanksideDB>, tx: UpgradeTx) => void;
-
-/** UPGRADES[i] upgrades a database at version i to version i + 1. */
-export const UPGRADES: readonly UpgradeStep[] = [
-  // 0 → 1: the first schema.
-  (db) => {
-    const tanks = db.createObjectStore('tanks', { keyPath: 'id' });
-    tanks.createIndex('site', 'site');
-    const checks = db.createObjectStore('checks', { keyPath: 'id' });
-    checks.createIndex('tankId', 'tankId');
-    db.createObjectStore('drafts', { keyPath: 'tankId' });
-    db.createObjectStore('settings');
-  },
-  // 1 → 2: site forecasts and walkdowns (new stores only).
-  (db) => {
-    db.createObjectStore('sites', { keyPath: 'site' });
-    const walks = db.createObjectStore('walkdowns', { keyPath: 'id' });
-    walks.createIndex('site', 'site');
-  },
-  // 2 → 3: fill records and fills under way (new stores only).
-  (db) => {
-    const fills = db.createObjectStore('fills', { keyPath: 'id' });
-    fills.createIndex('tankId', 'tankId');
-    db.createObjectStore('fillDrafts', { keyPath: 'tankId' });
-  },
-];
-
-if (UPGRADES.length !== DB_VERSION) throw new Error('storage: one upgrade step per schema version');
-
-/**
- * Opens (and creates or upgrades) the database at `version`, running the steps from the stored
- * version up. Exported with a version argument so tests can build every earlier version.
- */
-export async function openAtVersion(
-  name: string,
-  version: number,
-): Promise<IDBPDatabase<TanksideDB>> {
-  return openDB<TanksideDB>(name, version, {
-    upgrade(db, oldVersion, newVersion, tx) {
-      const to = newVersion ?? version;
-      for (let v = oldVersion; v < to; v++) UPGRADES[v]!(db, tx);
-    },
-    blocked() {
-      // Another tab holds an older version open; it closes itself on `versionchange` below.
-    },
-  });
-}
+export { DB_NAME, DB_VERSION, DEFAULT_META, UPGRADES, openAtVersion } from './storage-schema.js';
+export type { Meta, TanksideDB } from './storage-schema.js';
 
 /** All the user's data, as exported and imported. */
 export interface DataSet {
@@ -148,7 +84,7 @@ export class Store {
    * restored (undo).
    */
   async deleteTank(id: string): Promise<RemovedTank | null> {
-    const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
+    const names = ['tanks', 'checks', 'latestChecks', 'drafts', 'fills', 'fillDrafts'] as const;
     const tx = this.db.transaction([...names], 'readwrite');
     const tank = await tx.objectStore('tanks').get(id);
     if (!tank) {
@@ -161,6 +97,7 @@ export class Store {
     const fillDraft = await tx.objectStore('fillDrafts').get(id);
     await tx.objectStore('tanks').delete(id);
     for (const c of checks) await tx.objectStore('checks').delete(c.id);
+    await tx.objectStore('latestChecks').delete(id);
     for (const f of fills) await tx.objectStore('fills').delete(f.id);
     await tx.objectStore('drafts').delete(id);
     await tx.objectStore('fillDrafts').delete(id);
@@ -170,10 +107,11 @@ export class Store {
 
   /** Puts back what `deleteTank` removed. */
   async restoreTank(removed: RemovedTank): Promise<void> {
-    const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
+    const names = ['tanks', 'checks', 'latestChecks', 'drafts', 'fills', 'fillDrafts'] as const;
     const tx = this.db.transaction([...names], 'readwrite');
     await tx.objectStore('tanks').put(removed.tank);
     for (const c of removed.checks) await tx.objectStore('checks').put(c);
+    await refreshTank(tx, removed.tank.id);
     for (const f of removed.fills ?? []) await tx.objectStore('fills').put(f);
     if (removed.draft) await tx.objectStore('drafts').put(removed.draft);
     if (removed.fillDraft) await tx.objectStore('fillDrafts').put(removed.fillDraft);
@@ -190,12 +128,30 @@ export class Store {
     return list.sort((a, b) => (a.at < b.at ? 1 : a.at > b.at ? -1 : 0));
   }
 
+  /** The newest saved check of every tank, in brief (one per tank, in no particular order). */
+  async latestChecks(): Promise<CheckBrief[]> {
+    return this.db.getAll('latestChecks');
+  }
+
+  /** Up to `count` checks in key order after the key `after` (all from the first if null). */
+  async checksAfter(after: string | null, count: number): Promise<CheckRecord[]> {
+    const range = after === null ? null : IDBKeyRange.lowerBound(after, true);
+    return this.db.getAll('checks', range, count);
+  }
+
   async putCheck(check: CheckRecord): Promise<void> {
-    await this.db.put('checks', check);
+    const tx = this.db.transaction(['checks', 'latestChecks'], 'readwrite');
+    await tx.objectStore('checks').put(check);
+    await noteCheck(tx, check);
+    await tx.done;
   }
 
   async deleteCheck(id: string): Promise<void> {
-    await this.db.delete('checks', id);
+    const tx = this.db.transaction(['checks', 'latestChecks'], 'readwrite');
+    const check = await tx.objectStore('checks').get(id);
+    await tx.objectStore('checks').delete(id);
+    if (check) await refreshTank(tx, check.tankId);
+    await tx.done;
   }
 
   // ── drafts ─────────────────────────────────────────────────────────────────────────────
@@ -328,12 +284,14 @@ export class Store {
    */
   async importAll(data: DataSet): Promise<void> {
     const tx = this.db.transaction(
-      ['tanks', 'checks', 'settings', 'sites', 'walkdowns', 'fills'],
+      ['tanks', 'checks', 'latestChecks', 'settings', 'sites', 'walkdowns', 'fills'],
       'readwrite',
     );
     try {
       for (const t of data.tanks) await tx.objectStore('tanks').put(t);
       for (const c of data.checks) await tx.objectStore('checks').put(c);
+      // A replaced check may have been a tank's latest: read those tanks' latest again.
+      for (const id of new Set(data.checks.map((c) => c.tankId))) await refreshTank(tx, id);
       for (const f of data.sites ?? []) await tx.objectStore('sites').put(f);
       for (const w of data.walkdowns ?? []) await tx.objectStore('walkdowns').put(w);
       for (const f of data.fills ?? []) await tx.objectStore('fills').put(f);
@@ -350,12 +308,13 @@ export class Store {
   /** Removes every tank, check, draft, site forecast, walkdown and fill (settings and meta stay). */
   async clearAll(): Promise<void> {
     const tx = this.db.transaction(
-      ['tanks', 'checks', 'drafts', 'sites', 'walkdowns', 'fills', 'fillDrafts'],
+      ['tanks', 'checks', 'latestChecks', 'drafts', 'sites', 'walkdowns', 'fills', 'fillDrafts'],
       'readwrite',
     );
     await Promise.all([
       tx.objectStore('tanks').clear(),
       tx.objectStore('checks').clear(),
+      tx.objectStore('latestChecks').clear(),
       tx.objectStore('drafts').clear(),
       tx.objectStore('sites').clear(),
       tx.objectStore('walkdowns').clear(),
@@ -370,7 +329,7 @@ export class Store {
    * checks and drafts, in one transaction. Returns what was removed, for undo.
    */
   async clearDemo(): Promise<RemovedRecords> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+    const tx = this.db.transaction(['tanks', 'checks', 'latestChecks', 'drafts'], 'readwrite');
     const tanks = await tx.objectStore('tanks').getAll();
     const checks = await tx.objectStore('checks').getAll();
     const byTank = new Map<string, CheckRecord[]>();
@@ -386,6 +345,7 @@ export class Store {
       await tx.objectStore('tanks').delete(t.id);
       await tx.objectStore('drafts').delete(t.id);
       for (const c of own) await tx.objectStore('checks').delete(c.id);
+      await tx.objectStore('latestChecks').delete(t.id);
     }
     await tx.done;
     return removed;
@@ -393,9 +353,10 @@ export class Store {
 
   /** Puts back what `clearDemo` removed (undo), in one transaction. */
   async restoreRecords(removed: RemovedRecords): Promise<void> {
-    const tx = this.db.transaction(['tanks', 'checks', 'drafts'], 'readwrite');
+    const tx = this.db.transaction(['tanks', 'checks', 'latestChecks', 'drafts'], 'readwrite');
     for (const t of removed.tanks) await tx.objectStore('tanks').put(t);
     for (const c of removed.checks) await tx.objectStore('checks').put(c);
+    for (const id of new Set(removed.checks.map((c) => c.tankId))) await refreshTank(tx, id);
     for (const d of removed.drafts) await tx.objectStore('drafts').put(d);
     await tx.done;
   }

@@ -21,6 +21,7 @@ import type { BackupImportDetail } from '../components/backup-panel.js';
 import {
   DEFAULT_SETTINGS,
   newId,
+  type CheckBrief,
   type CheckRecord,
   type Settings,
   type TankRecord,
@@ -39,6 +40,8 @@ import { RouteController } from './route-controller.js';
 import { renderScreen, type ScreenHandlers } from './screens.js';
 import { appHeader } from './app-header.js';
 import { siteRulesOf } from '../components/site-rules.js';
+import { table } from './lookups.js';
+import { loadChecksLater, loadRegisterHead } from './register-load.js';
 
 export class TanksideApp extends LitElement {
   static override properties = {
@@ -60,6 +63,8 @@ export class TanksideApp extends LitElement {
   declare _settings: Settings;
   declare _tanks: TankRecord[];
   declare _checks: CheckRecord[];
+  /** Newest check per tank, for the list (read without reading every check). */
+  private _last = table<CheckBrief>();
   declare _persisted: boolean | null;
 
   /** The blank tank of the "add a tank" screen, made once per visit so a re-render keeps the typing. */
@@ -134,7 +139,7 @@ export class TanksideApp extends LitElement {
       this._meta = { ...this._meta, demoSeeded: true };
       await store.putMeta(this._meta);
     }
-    await this._reload();
+    await this._reload(false);
     this._ready = true;
     await this._router.go(this._router.route);
     void this._askPersistence();
@@ -149,15 +154,17 @@ export class TanksideApp extends LitElement {
     }
   }
 
-  private async _reload(): Promise<void> {
+  /** Reads the register again; every check too, awaited unless `waitChecks` is false (start-up). */
+  private async _reload(waitChecks = true): Promise<void> {
     if (!this._store) return;
-    const [tanks, checks] = await Promise.all([
-      this._store.listTanks(),
-      this._store.listChecks(),
-      this._fill.reload(this._store),
-    ]);
-    this._tanks = tanks;
-    this._checks = checks;
+    const store = this._store;
+    const read = () => loadChecksLater(store, (c) => (this._checks = c), !waitChecks);
+    const all = waitChecks ? read() : null; // at start-up, after the list is shown
+    const [head] = await Promise.all([loadRegisterHead(store), this._fill.reload(store)]);
+    this._last = head.last;
+    this._tanks = head.tanks;
+    if (all) await all;
+    else void read();
   }
 
   private _applyTheme(): void {
@@ -353,6 +360,7 @@ export class TanksideApp extends LitElement {
       settings: this._settings,
       tanks: this._tanks,
       checks: this._checks,
+      lastChecks: this._last,
       newTank: this._newTank,
       draft: this._drafts.current,
       fill: this._fill,

@@ -148,6 +148,11 @@ describe('tankside-app', () => {
     await settleAll(app.shadowRoot!);
     byTestId(app, 'data-clear-confirm').click();
     await waitUntil(async () => (await (await Store.open(db)).listTanks()).length === 0, 'cleared');
+    // The app has finished clearing (its message is up) before the next file comes in.
+    await waitUntil(
+      () => (byTestIdOrNull(app, 'data-message')?.textContent ?? '').includes('were deleted'),
+      'cleared message',
+    );
 
     // A foreign file is refused and changes nothing.
     const panel = deep(app, 'backup-panel')!;

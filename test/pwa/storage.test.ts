@@ -4,6 +4,7 @@
 import { expect } from '@open-wc/testing';
 import { deleteDB } from 'idb';
 import { DB_VERSION, Store, UPGRADES, openAtVersion } from '../../pwa/storage.js';
+import { briefOf } from '../../pwa/storage-schema.js';
 import type { CheckRecord, TankRecord } from '../../components/types.js';
 import { DEFAULT_SETTINGS, emptyReadings } from '../../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../../components/walkdown-types.js';
@@ -96,6 +97,10 @@ const SEED: Record<number, (db: Awaited<ReturnType<typeof openAtVersion>>) => Pr
     await SEED[2]!(db);
     await db.put('fills', FILL);
     await db.put('fillDrafts', FILL_DRAFT);
+  },
+  4: async (db) => {
+    await SEED[3]!(db);
+    await db.put('latestChecks', briefOf(check('c1', 't1', '2024-01-02T00:00:00.000Z')));
   },
 };
 
@@ -205,6 +210,8 @@ describe('storage', () => {
       } else {
         expect(await store.listFills()).to.deep.equal([]);
       }
+      // Each tank's newest check is there for the list (none before a check was saved).
+      expect((await store.latestChecks()).map((c) => c.id)).to.deep.equal(v === 0 ? [] : ['c1']);
       // The current schema is fully usable after the upgrade.
       await store.putTank(tank('t2'));
       expect((await store.listTanks()).length).to.equal(v === 0 ? 1 : 2);
@@ -215,6 +222,45 @@ describe('storage', () => {
       store.close();
     });
   }
+
+  it('a v3 database with several tanks and checks upgrades to v4 with every record intact and each tank’s newest check', async () => {
+    const name = dbName();
+    const old = await openAtVersion(name, 3);
+    await SEED[3]!(old);
+    // Hand-picked newest per tank: t1 → c3 (Jan 5), t2 → c5 (Feb 1), t3 → none.
+    const extra = [
+      check('c2', 't1', '2024-01-04T00:00:00.000Z'),
+      check('c3', 't1', '2024-01-05T00:00:00.000Z'),
+      check('c4', 't2', '2024-01-01T00:00:00.000Z'),
+      check('c5', 't2', '2024-02-01T00:00:00.000Z'),
+    ];
+    for (const t of ['t2', 't3']) await old.put('tanks', tank(t));
+    for (const c of extra) await old.put('checks', c);
+    const before = {
+      tanks: await old.getAll('tanks'),
+      checks: await old.getAll('checks'),
+      drafts: await old.getAll('drafts'),
+      fills: await old.getAll('fills'),
+      walkdowns: await old.getAll('walkdowns'),
+    };
+    old.close();
+    const store = await Store.open(name);
+    const all = await store.exportAll();
+    expect(all.tanks).to.deep.equal(before.tanks);
+    expect(all.checks).to.deep.equal(before.checks);
+    expect(all.fills).to.deep.equal(before.fills);
+    expect(all.walkdowns).to.deep.equal(before.walkdowns);
+    expect(await store.getDraft('t1')).to.deep.equal(before.drafts[0]);
+    const latest = (await store.latestChecks()).map((c) => `${c.tankId}:${c.id}`).sort();
+    expect(latest).to.deep.equal(['t1:c3', 't2:c5']);
+    // Kept by later writes: an older check does not replace the newest; deleting the newest
+    // falls back to the next; deleting the tank removes its entry.
+    await store.putCheck(check('c6', 't2', '2024-01-15T00:00:00.000Z'));
+    await store.deleteCheck('c5');
+    await store.deleteTank('t1');
+    expect((await store.latestChecks()).map((c) => `${c.tankId}:${c.id}`)).to.deep.equal(['t2:c6']);
+    store.close();
+  });
 
   it('Store.listChecks returns one tank’s checks, newest first', async () => {
     const store = await Store.open(dbName());

@@ -12,7 +12,8 @@
  */
 import { closedTank, describeProduct, maxDensity, saturation } from '../api.js';
 import { ConvergenceError, InputError } from '../errors.js';
-import type { Product } from '../product.js';
+import { resolveProduct, type Product } from '../product.js';
+import { blendSeed } from '../solvers/blendSeeds.js';
 import { T_15C_K, T_60F_K } from '../constants.js';
 import { bisectBoundary } from '../solvers/root.js';
 import { T_CHECK_MAX_K, checkMinTemperature } from '../limits.js';
@@ -154,6 +155,13 @@ export class ProductModel {
     const key = JSON.stringify(this.product);
     const hit = topCache.get(key);
     if (hit !== undefined) return hit;
+    // A blend the app offers: the top found by this bisection when the seeds were generated,
+    // once its bubble point is found again (blendSeeds.ts).
+    const seeded = blendSeed(resolveProduct(this.product))?.top;
+    if (seeded !== undefined && this.sat(seeded)) {
+      topCache.set(key, seeded);
+      return seeded;
+    }
     // A liquefied gas has a bubble point at 60 °F (productBasics checked it).
     const lo = this.sat(T_TOP_K)
       ? T_TOP_K

@@ -14,6 +14,7 @@ import { ConvergenceError } from '../errors.js';
 import type { ResolvedProduct } from '../product.js';
 import { mixtureAtT } from './mixtureModel.js';
 import { saturationPressure, type SaturationPoint } from './bubbleDew.js';
+import { blendSeed } from './blendSeeds.js';
 
 type Start = { p: number; K: Float64Array };
 interface Known {
@@ -31,7 +32,10 @@ const memory = new WeakMap<ResolvedProduct, Record<'bubble' | 'dew', Known[]>>()
 function knownOf(product: ResolvedProduct, kind: 'bubble' | 'dew'): Known[] {
   let m = memory.get(product);
   if (!m) {
-    m = { bubble: [], dew: [] };
+    // A blend the app offers starts with bubble points near the top of its curve (blendSeeds.ts).
+    const seed = blendSeed(product)?.bubble ?? [];
+    const bubble = seed.map((s) => ({ T: s.T, start: { p: s.p, K: Float64Array.from(s.K) } }));
+    m = { bubble: bubble.sort((a, b) => a.T - b.T), dew: [] };
     memory.set(product, m);
   }
   return m[kind];
