@@ -116,7 +116,41 @@ export interface DataSet {
   fills?: FillRecord[];
 }
 
+/** A record of a store the team sync shares (pwa/sync/), by kind and key. */
+export interface SharedRecord {
+  kind: SharedKind;
+  key: string;
+}
+export type SharedKind = 'tank' | 'check' | 'fill' | 'walkdown' | 'site';
+const SHARED_STORE = {
+  tank: 'tanks',
+  check: 'checks',
+  fill: 'fills',
+  walkdown: 'walkdowns',
+  site: 'sites',
+} as const;
+
+/**
+ * Told of writes to the shared stores (the team sync's outbox): `note` is awaited before the
+ * write, so a crash between the two loses nothing (a noted record that did not change is
+ * skipped later); `wrote` runs after the write committed.
+ */
+export interface StoreWatcher {
+  note(records: SharedRecord[]): Promise<void>;
+  wrote(records: SharedRecord[]): void;
+}
+
 export class Store {
+  /** The team sync's outbox, when a team is set up (pwa/sync/). */
+  watcher: StoreWatcher | null = null;
+
+  private async noted<T>(records: SharedRecord[], write: () => Promise<T>): Promise<T> {
+    if (this.watcher) await this.watcher.note(records);
+    const out = await write();
+    this.watcher?.wrote(records);
+    return out;
+  }
+
   private constructor(private readonly db: IDBPDatabase<TanksideDB>) {
     // A newer tab wants to upgrade: let it, rather than block it forever.
     db.addEventListener('versionchange', () => db.close());
@@ -140,7 +174,7 @@ export class Store {
   }
 
   async putTank(tank: TankRecord): Promise<void> {
-    await this.db.put('tanks', tank);
+    await this.noted([{ kind: 'tank', key: tank.id }], () => this.db.put('tanks', tank));
   }
 
   /**
@@ -148,6 +182,19 @@ export class Store {
    * restored (undo).
    */
   async deleteTank(id: string): Promise<RemovedTank | null> {
+    const removed = await this.noted([{ kind: 'tank', key: id }], () => this.deleteTankOnly(id));
+    if (removed && this.watcher) {
+      const more = [
+        ...removed.checks.map((c): SharedRecord => ({ kind: 'check', key: c.id })),
+        ...(removed.fills ?? []).map((f): SharedRecord => ({ kind: 'fill', key: f.id })),
+      ];
+      await this.watcher.note(more);
+      this.watcher.wrote(more);
+    }
+    return removed;
+  }
+
+  private async deleteTankOnly(id: string): Promise<RemovedTank | null> {
     const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
     const tx = this.db.transaction([...names], 'readwrite');
     const tank = await tx.objectStore('tanks').get(id);
@@ -170,6 +217,15 @@ export class Store {
 
   /** Puts back what `deleteTank` removed. */
   async restoreTank(removed: RemovedTank): Promise<void> {
+    const records: SharedRecord[] = [
+      { kind: 'tank', key: removed.tank.id },
+      ...removed.checks.map((c): SharedRecord => ({ kind: 'check', key: c.id })),
+      ...(removed.fills ?? []).map((f): SharedRecord => ({ kind: 'fill', key: f.id })),
+    ];
+    await this.noted(records, () => this.restoreTankOnly(removed));
+  }
+
+  private async restoreTankOnly(removed: RemovedTank): Promise<void> {
     const names = ['tanks', 'checks', 'drafts', 'fills', 'fillDrafts'] as const;
     const tx = this.db.transaction([...names], 'readwrite');
     await tx.objectStore('tanks').put(removed.tank);
@@ -191,11 +247,11 @@ export class Store {
   }
 
   async putCheck(check: CheckRecord): Promise<void> {
-    await this.db.put('checks', check);
+    await this.noted([{ kind: 'check', key: check.id }], () => this.db.put('checks', check));
   }
 
   async deleteCheck(id: string): Promise<void> {
-    await this.db.delete('checks', id);
+    await this.noted([{ kind: 'check', key: id }], () => this.db.delete('checks', id));
   }
 
   // ── drafts ─────────────────────────────────────────────────────────────────────────────
@@ -217,7 +273,7 @@ export class Store {
   }
 
   async putSite(forecast: SiteForecast): Promise<void> {
-    await this.db.put('sites', forecast);
+    await this.noted([{ kind: 'site', key: forecast.site }], () => this.db.put('sites', forecast));
   }
 
   /** Walkdowns of one site (or all), newest first. */
@@ -236,11 +292,11 @@ export class Store {
   }
 
   async putWalkdown(w: WalkdownRecord): Promise<void> {
-    await this.db.put('walkdowns', w);
+    await this.noted([{ kind: 'walkdown', key: w.id }], () => this.db.put('walkdowns', w));
   }
 
   async deleteWalkdown(id: string): Promise<void> {
-    await this.db.delete('walkdowns', id);
+    await this.noted([{ kind: 'walkdown', key: id }], () => this.db.delete('walkdowns', id));
   }
 
   // ── fills ──────────────────────────────────────────────────────────────────────────────
@@ -257,6 +313,10 @@ export class Store {
 
   /** Saves a fill record and removes the tank's fill under way, in one transaction. */
   async putFill(fill: FillRecord): Promise<void> {
+    await this.noted([{ kind: 'fill', key: fill.id }], () => this.putFillOnly(fill));
+  }
+
+  private async putFillOnly(fill: FillRecord): Promise<void> {
     const tx = this.db.transaction(['fills', 'fillDrafts'], 'readwrite');
     await tx.objectStore('fills').put(fill);
     await tx.objectStore('fillDrafts').delete(fill.tankId);
@@ -264,7 +324,7 @@ export class Store {
   }
 
   async deleteFill(id: string): Promise<void> {
-    await this.db.delete('fills', id);
+    await this.noted([{ kind: 'fill', key: id }], () => this.db.delete('fills', id));
   }
 
   async getFillDraft(tankId: string): Promise<FillDraft | undefined> {
@@ -327,6 +387,17 @@ export class Store {
    * everything else is kept. Settings are replaced when the set has them.
    */
   async importAll(data: DataSet): Promise<void> {
+    const records: SharedRecord[] = [
+      ...data.tanks.map((t): SharedRecord => ({ kind: 'tank', key: t.id })),
+      ...data.checks.map((c): SharedRecord => ({ kind: 'check', key: c.id })),
+      ...(data.sites ?? []).map((f): SharedRecord => ({ kind: 'site', key: f.site })),
+      ...(data.walkdowns ?? []).map((w): SharedRecord => ({ kind: 'walkdown', key: w.id })),
+      ...(data.fills ?? []).map((f): SharedRecord => ({ kind: 'fill', key: f.id })),
+    ];
+    await this.noted(records, () => this.importOnly(data));
+  }
+
+  private async importOnly(data: DataSet): Promise<void> {
     const tx = this.db.transaction(
       ['tanks', 'checks', 'settings', 'sites', 'walkdowns', 'fills'],
       'readwrite',
@@ -343,6 +414,31 @@ export class Store {
       tx.abort();
       await tx.done.catch(() => undefined);
       throw error;
+    }
+    await tx.done;
+  }
+
+  // ── team sync (pwa/sync/): reads and writes that do not go back to the outbox ─────────────
+  async getShared(kind: SharedKind, key: string): Promise<unknown> {
+    return this.db.get(SHARED_STORE[kind], key);
+  }
+
+  async listShared(kind: SharedKind): Promise<unknown[]> {
+    return this.db.getAll(SHARED_STORE[kind]);
+  }
+
+  /**
+   * Writes what the team sync brought, in one transaction, without telling the watcher. A
+   * deleted tank takes its drafts along (its checks and fills arrive as deletions of their own).
+   */
+  async applyShared(puts: { kind: SharedKind; record: unknown }[], dels: SharedRecord[]) {
+    const names = ['tanks', 'checks', 'fills', 'walkdowns', 'sites', 'drafts', 'fillDrafts'] as const;
+    const tx = this.db.transaction([...names], 'readwrite');
+    for (const p of puts) await tx.objectStore(SHARED_STORE[p.kind]).put(p.record as never);
+    for (const d of dels) {
+      await tx.objectStore(SHARED_STORE[d.kind]).delete(d.key);
+      if (d.kind === 'tank') await tx.objectStore('drafts').delete(d.key);
+      if (d.kind === 'tank') await tx.objectStore('fillDrafts').delete(d.key);
     }
     await tx.done;
   }
