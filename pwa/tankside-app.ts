@@ -44,6 +44,9 @@ import '../components/confirm-bar.js';
 import { FillController } from './fill-route.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { fillsToCsv } from './fill-csv.js';
+import '../components/team-panel.js';
+import '../components/sync-conflict.js';
+import { syncHub } from './sync/hub.js';
 
 /** How long an undo offer stays, ms. */
 const UNDO_MS = 12_000;
@@ -248,6 +251,7 @@ export class TanksideApp extends LitElement {
     }
     await this._reload();
     this._ready = true;
+    void syncHub.start(store, this.dbName, () => void this._reload());
     await this._go(this._route);
     void this._askPersistence();
   }
@@ -670,7 +674,8 @@ export class TanksideApp extends LitElement {
         if (!t) return this._missingTank();
         if (!this._checkScreenReady || !this._draft || this._draft.tankId !== t.id)
           return html`<p>Loading…</p>`;
-        return html`<check-screen
+        return html`<sync-conflict tank-id=${t.id} .display=${display}></sync-conflict>
+          <check-screen
           .tank=${t}
           .settings=${this._settings}
           .readings=${this._draft.readings}
@@ -719,7 +724,8 @@ export class TanksideApp extends LitElement {
           @fill-csv-export=${this._fillCsv}
           @demo-clear=${this._clearDemo}
           @data-clear=${this._clearAll}
-        ></backup-panel>`;
+        ></backup-panel>
+          <team-panel></team-panel>`;
       case 'not-found':
         return html`<div data-testid="not-found">
           <h2>Nothing here</h2>

@@ -8,7 +8,9 @@ import { startSyncServer } from './sync/server.mjs';
 
 const port = Number(process.env.SYNC_PORT ?? 5984);
 if (!Number.isInteger(port) || port < 0 || port > 65535) {
-  console.error(`SYNC_PORT must be a port number from 0 to 65535 (got “${process.env.SYNC_PORT}”).`);
+  console.error(
+    `SYNC_PORT must be a port number from 0 to 65535 (got “${process.env.SYNC_PORT}”).`,
+  );
   process.exit(2);
 }
 const admin = process.env.SYNC_ADMIN ?? `admin:${randomBytes(9).toString('base64url')}`;

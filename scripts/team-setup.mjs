@@ -20,11 +20,18 @@ try {
   process.exit(2);
 }
 if (!args.url || !args.admin || !args.team || !args.user?.length) {
-  console.error('Usage: npm run team:setup -- --url URL --admin USER:PASS --team NAME --user USER:PASS [--user USER:PASS …]');
+  console.error(
+    'Usage: npm run team:setup -- --url URL --admin USER:PASS --team NAME --user USER:PASS [--user USER:PASS …]',
+  );
   process.exit(2);
 }
 try {
-  const dbUrl = await setupTeam({ url: args.url, admin: args.admin, team: args.team, users: args.user });
+  const dbUrl = await setupTeam({
+    url: args.url,
+    admin: args.admin,
+    team: args.team,
+    users: args.user,
+  });
   console.log(`Team “${args.team}” is ready. On each phone: Data → Team, database URL ${dbUrl}`);
   console.log(`Members: ${args.user.map((u) => u.split(':')[0]).join(', ')}`);
 } catch (e) {

@@ -81,7 +81,11 @@ self.addEventListener('message', (event: ExtendableMessageEvent) => {
   ) {
     void self.skipWaiting();
   }
-  if (typeof data === 'object' && data !== null && (data as { type?: unknown }).type === 'TEAM_ORIGIN') {
+  if (
+    typeof data === 'object' &&
+    data !== null &&
+    (data as { type?: unknown }).type === 'TEAM_ORIGIN'
+  ) {
     const origin = (data as { origin?: unknown }).origin;
     setTeamOrigin(typeof origin === 'string' ? origin : null);
   }

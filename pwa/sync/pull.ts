@@ -150,7 +150,8 @@ async function settle(b: Batch, pouch: PouchLike, winner: SyncDoc): Promise<Sync
   const score = (d: SyncDoc): string => {
     const r = d.record as Record<string, unknown>;
     if (d.kind === 'site') return String(r.enteredAt ?? '');
-    if (d.kind === 'walkdown') return `${r.status === 'finished' ? 1 : 0}${String(r.current ?? 0).padStart(6, '0')}`;
+    if (d.kind === 'walkdown')
+      return `${r.status === 'finished' ? 1 : 0}${String(r.current ?? 0).padStart(6, '0')}`;
     return '';
   };
   let best = winner;
@@ -158,7 +159,8 @@ async function settle(b: Batch, pouch: PouchLike, winner: SyncDoc): Promise<Sync
   const keep: Partial<SyncDoc> = { ...winner, record: best.record };
   delete keep._conflicts;
   if (best !== winner) b.resolutions.push(keep);
-  for (const d of all) if (d !== winner) b.resolutions.push({ _id: d._id, _rev: d._rev, _deleted: true });
+  for (const d of all)
+    if (d !== winner) b.resolutions.push({ _id: d._id, _rev: d._rev, _deleted: true });
   return { ...winner, record: best.record };
 }
 
@@ -181,7 +183,8 @@ async function retryWaiting(book: SyncBook, local: LocalSide, pouch: PouchLike):
     const doc = row.doc;
     if (!doc || row.value?.deleted) continue;
     const tankId = (doc.record as { tankId?: string }).tankId ?? '';
-    if ((await local.getShared('tank', tankId)) !== undefined) puts.push({ kind: doc.kind, record: doc.record });
+    if ((await local.getShared('tank', tankId)) !== undefined)
+      puts.push({ kind: doc.kind, record: doc.record });
     else still.push(row.key);
   }
   if (puts.length) await local.applyShared(puts, []);
@@ -198,7 +201,11 @@ export async function tankVersions(pouch: PouchLike, tankId: string): Promise<Sy
 }
 
 /** Keeps the version `keepRev` of a conflicting tank and deletes the others. */
-export async function resolveTank(pouch: PouchLike, tankId: string, keepRev: string): Promise<void> {
+export async function resolveTank(
+  pouch: PouchLike,
+  tankId: string,
+  keepRev: string,
+): Promise<void> {
   const [winner, ...others] = await tankVersions(pouch, tankId);
   const chosen = [winner!, ...others].find((d) => d._rev === keepRev);
   if (!chosen) throw new Error('That version is no longer there: the tank changed meanwhile.');

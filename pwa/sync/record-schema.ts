@@ -11,8 +11,8 @@ import { WalkInvalid, validateSite, validateWalkdown } from '../walkdown-backup.
 import { validateFillRecord } from '../../thermo/fill/index.js';
 import { InputError } from '../../thermo/errors.js';
 
-export const SYNC_KINDS = ['tank', 'check', 'fill', 'walkdown', 'site'] as const;
-export type SyncKind = (typeof SYNC_KINDS)[number];
+import { SYNC_KINDS, docIdOf, type SyncKind } from './ids.js';
+export { SYNC_KINDS, docIdOf, type SyncKind };
 
 /** Format of the document wrapper (not of the record inside it). */
 export const SYNC_DOC_VERSION = 1;
@@ -25,10 +25,6 @@ export interface SyncDoc {
   v: number;
   kind: SyncKind;
   record: unknown;
-}
-
-export function docIdOf(kind: SyncKind, key: string): string {
-  return `${kind}:${key}`;
 }
 
 /** The kind and key of a document id, or null for an id that is not a record's. */

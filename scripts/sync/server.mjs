@@ -80,14 +80,18 @@ export async function startSyncServer({ port = 5984, admin = 'admin:admin', dir 
   }
   const pouchApp = expressPouchDB(Base, {
     inMemoryConfig: true,
-    logPath: dir ? join(dir, 'log.txt') : join(process.env.TMPDIR ?? '/tmp', 'tankside-sync-log.txt'),
+    logPath: dir
+      ? join(dir, 'log.txt')
+      : join(process.env.TMPDIR ?? '/tmp', 'tankside-sync-log.txt'),
     overrideMode: { exclude: ['routes/fauxton', 'routes/http-log'] },
   });
   await new Promise((resolve) => {
     pouchApp.couchConfig.set('admins', adminName, adminPass, resolve);
   });
   // No anonymous server admin ("admin party"): every request needs a session or basic auth.
-  await new Promise((resolve) => pouchApp.couchConfig.set('couch_httpd_auth', 'timeout', '2592000', resolve));
+  await new Promise((resolve) =>
+    pouchApp.couchConfig.set('couch_httpd_auth', 'timeout', '2592000', resolve),
+  );
   const app = express();
   app.disable('x-powered-by');
   app.use(loopbackCors);

@@ -25,7 +25,11 @@ function splitPair(pair, flag) {
 async function call(base, adminAuth, method, path, body) {
   const res = await fetch(new URL(path, base), {
     method,
-    headers: { authorization: adminAuth, 'content-type': 'application/json', accept: 'application/json' },
+    headers: {
+      authorization: adminAuth,
+      'content-type': 'application/json',
+      accept: 'application/json',
+    },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   const text = await res.text();
@@ -40,14 +44,22 @@ async function call(base, adminAuth, method, path, body) {
 
 function must(r, what) {
   if (r.status >= 400)
-    throw new Error(`${what} failed: ${r.status} ${r.json?.error ?? ''} ${r.json?.reason ?? ''}`.trim());
+    throw new Error(
+      `${what} failed: ${r.status} ${r.json?.error ?? ''} ${r.json?.reason ?? ''}`.trim(),
+    );
   return r.json;
 }
 
 async function putUser(base, auth, name, password) {
   const path = `/_users/${encodeURIComponent(`org.couchdb.user:${name}`)}`;
   const old = await call(base, auth, 'GET', path);
-  const doc = { ...(old.status === 200 ? old.json : {}), _id: `org.couchdb.user:${name}`, name, password, type: 'user' };
+  const doc = {
+    ...(old.status === 200 ? old.json : {}),
+    _id: `org.couchdb.user:${name}`,
+    name,
+    password,
+    type: 'user',
+  };
   doc.roles = Array.isArray(doc.roles) ? doc.roles : [];
   must(await call(base, auth, 'PUT', path, doc), `Creating user “${name}”`);
 }
@@ -72,10 +84,16 @@ export async function setupTeam({ url, admin, team, users }) {
     admins: { names: [], roles: [] },
     members: { names: members.map(([n]) => n), roles: [`${db}-member`] },
   };
-  must(await call(base, auth, 'PUT', `/${encodeURIComponent(db)}/_security`, security), 'Setting _security');
+  must(
+    await call(base, auth, 'PUT', `/${encodeURIComponent(db)}/_security`, security),
+    'Setting _security',
+  );
   const ddoc = await designDoc();
   const old = await call(base, auth, 'GET', `/${encodeURIComponent(db)}/${DESIGN_ID}`);
   if (old.status === 200) ddoc._rev = old.json._rev;
-  must(await call(base, auth, 'PUT', `/${encodeURIComponent(db)}/${DESIGN_ID}`, ddoc), 'Writing the design document');
+  must(
+    await call(base, auth, 'PUT', `/${encodeURIComponent(db)}/${DESIGN_ID}`, ddoc),
+    'Writing the design document',
+  );
   return new URL(`${encodeURIComponent(db)}`, base).href;
 }

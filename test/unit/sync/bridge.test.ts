@@ -24,7 +24,10 @@ function phone() {
 }
 
 /** Both phones push, the server passes everything along, both pull. */
-async function roundTrip(server: ReturnType<typeof memoryPouch>, ...phones: ReturnType<typeof phone>[]) {
+async function roundTrip(
+  server: ReturnType<typeof memoryPouch>,
+  ...phones: ReturnType<typeof phone>[]
+) {
   for (const p of phones) await p.sync();
   for (const p of phones) await replicateBothWays(p.pouch, server);
   for (const p of phones) await replicateBothWays(p.pouch, server);
@@ -108,7 +111,9 @@ describe('team sync bridge', () => {
     await roundTrip(server, a, b);
     for (const p of [a, b]) {
       expect(p.book.marks.conflicts).toEqual([]);
-      expect(((await p.local.getShared('tank', 't1')) as { name: string }).name).toBe('Edited on B');
+      expect(((await p.local.getShared('tank', 't1')) as { name: string }).name).toBe(
+        'Edited on B',
+      );
     }
   });
 
@@ -147,7 +152,13 @@ describe('team sync bridge', () => {
 
   it('a phone joining a team pushes its register once, and again changes nothing', async () => {
     const a = phone();
-    await a.local.applyShared([{ kind: 'tank', record: tank('t1') }, { kind: 'tank', record: tank('t2') }], []);
+    await a.local.applyShared(
+      [
+        { kind: 'tank', record: tank('t1') },
+        { kind: 'tank', record: tank('t2') },
+      ],
+      [],
+    );
     expect(await noteAll(a.book, a.local)).toBe(2);
     expect(await flush(a.book, a.local, a.pouch)).toBe(2);
     await noteAll(a.book, a.local);

@@ -6,7 +6,13 @@
 import PouchDB from 'pouchdb-core';
 import memory from 'pouchdb-adapter-memory';
 import replication from 'pouchdb-replication';
-import type { LocalSide, OutboxEntry, PouchLike, SyncBook, SyncMarks } from '../../../pwa/sync/bridge.js';
+import type {
+  LocalSide,
+  OutboxEntry,
+  PouchLike,
+  SyncBook,
+  SyncMarks,
+} from '../../../pwa/sync/bridge.js';
 import type { SyncKind } from '../../../pwa/sync/record-schema.js';
 
 PouchDB.plugin(memory).plugin(replication);

@@ -35,7 +35,14 @@ async function put(cookie: string, doc: { _id: string }) {
 
 const importRefusal = (t: unknown) =>
   parseBackup(
-    JSON.stringify({ format: 'tankside-backup', version: 2, exportedAt: '2026-06-01T00:00:00Z', tanks: [t], checks: [], settings: null }),
+    JSON.stringify({
+      format: 'tankside-backup',
+      version: 2,
+      exportedAt: '2026-06-01T00:00:00Z',
+      tanks: [t],
+      checks: [],
+      settings: null,
+    }),
   );
 
 beforeAll(async () => {
@@ -47,13 +54,23 @@ beforeAll(async () => {
     users: ['ann:ann-pass', 'bob:bob-pass'],
   });
   // A user of the server who is not a member of this team.
-  await setupTeam({ url: server.url, admin: 'boss:boss-pass', team: 'other-co', users: ['eve:eve-pass'] });
+  await setupTeam({
+    url: server.url,
+    admin: 'boss:boss-pass',
+    team: 'other-co',
+    users: ['eve:eve-pass'],
+  });
 }, 120_000);
 afterAll(() => server?.close());
 
 describe('team server', () => {
   it('takes a valid record from a member', async () => {
-    const r = await put(await login('ann', 'ann-pass'), { _id: 'tank:t1', v: 1, kind: 'tank', record: tank('t1') } as never);
+    const r = await put(await login('ann', 'ann-pass'), {
+      _id: 'tank:t1',
+      v: 1,
+      kind: 'tank',
+      record: tank('t1'),
+    } as never);
     expect(r.status).toBe(201);
   });
 
@@ -61,19 +78,36 @@ describe('team server', () => {
     const bad = tank('t2', { nameplate: { waterCapacity: 1.9, designPressure: 5 } });
     const verdict = importRefusal(bad);
     expect(verdict.ok).toBe(false);
-    const r = await put(await login('ann', 'ann-pass'), { _id: 'tank:t2', v: 1, kind: 'tank', record: bad } as never);
+    const r = await put(await login('ann', 'ann-pass'), {
+      _id: 'tank:t2',
+      v: 1,
+      kind: 'tank',
+      record: bad,
+    } as never);
     expect(r.status).toBe(403);
     expect(r.body.reason).toContain('“designPressure” must be a number from 10000 to 100000000');
-    expect(verdict.ok ? '' : verdict.reason).toContain('“designPressure” must be a number from 10000 to 100000000');
+    expect(verdict.ok ? '' : verdict.reason).toContain(
+      '“designPressure” must be a number from 10000 to 100000000',
+    );
   });
 
   it('refuses a document whose id does not match its record', async () => {
-    const r = await put(await login('bob', 'bob-pass'), { _id: 'tank:other', v: 1, kind: 'tank', record: tank('t3') } as never);
+    const r = await put(await login('bob', 'bob-pass'), {
+      _id: 'tank:other',
+      v: 1,
+      kind: 'tank',
+      record: tank('t3'),
+    } as never);
     expect(r.status).toBe(403);
   });
 
   it('refuses a user who is not a member, and anyone not signed in', async () => {
-    const eve = await put(await login('eve', 'eve-pass'), { _id: 'tank:t4', v: 1, kind: 'tank', record: tank('t4') } as never);
+    const eve = await put(await login('eve', 'eve-pass'), {
+      _id: 'tank:t4',
+      v: 1,
+      kind: 'tank',
+      record: tank('t4'),
+    } as never);
     expect([401, 403]).toContain(eve.status);
     const anon = await put('', { _id: 'tank:t5', v: 1, kind: 'tank', record: tank('t5') } as never);
     expect([401, 403]).toContain(anon.status);
