@@ -47,6 +47,11 @@ export class Engine {
   private stopped = false;
   private denied = '';
   private readonly onOnline = () => this.restartLive();
+  private readonly onOffline = () =>
+    this.hooks.status({
+      state: 'paused',
+      words: 'Waiting for signal: changes stay on this phone and go when it is back.',
+    });
 
   constructor(
     private readonly store: Store,
@@ -124,6 +129,7 @@ export class Engine {
   private goLive(): void {
     if (this.stopped || this.live) return;
     window.addEventListener('online', this.onOnline);
+    window.addEventListener('offline', this.onOffline);
     this.feed = this.replica
       .changes({ since: 'now', live: true })
       .on('change', () => this.schedule());
@@ -191,6 +197,7 @@ export class Engine {
 
   private stopLive(): void {
     window.removeEventListener('online', this.onOnline);
+    window.removeEventListener('offline', this.onOffline);
     this.live?.cancel();
     this.feed?.cancel();
     this.live = null;
