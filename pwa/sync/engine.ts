@@ -33,8 +33,17 @@ function withCookies(url: string | Request, opts?: RequestInit): Promise<Respons
 }
 
 function reasonOf(e: unknown): string {
-  const err = (e ?? {}) as HttpError;
-  return err.reason || err.message || err.name || 'no reason given';
+  const err = (e ?? {}) as HttpError & { doc?: HttpError; error?: unknown };
+  const inner = err.doc ?? {};
+  return (
+    err.reason ||
+    inner.reason ||
+    err.message ||
+    inner.message ||
+    (typeof err.error === 'string' ? err.error : '') ||
+    err.name ||
+    'no reason given'
+  );
 }
 
 export class Engine {

@@ -111,6 +111,14 @@ describe('team server', () => {
     expect([401, 403]).toContain(eve.status);
     const anon = await put('', { _id: 'tank:t5', v: 1, kind: 'tank', record: tank('t5') } as never);
     expect([401, 403]).toContain(anon.status);
+    // Replication writes through _bulk_docs: refused for a non-member too.
+    const bulk = await fetch(`${dbUrl}/_bulk_docs`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', cookie: await login('eve', 'eve-pass') },
+      body: JSON.stringify({ docs: [{ _id: 'tank:t6', v: 1, kind: 'tank', record: tank('t6') }] }),
+    });
+    const written = bulk.status < 300 ? ((await bulk.json()) as { ok?: boolean }[]) : [];
+    expect(written.filter((r) => r.ok)).toEqual([]);
     const res = await fetch(`${dbUrl}/_all_docs`);
     expect([401, 403]).toContain(res.status);
   });
