@@ -49,3 +49,7 @@ declare module 'pouchdb-replication' {
   const plugin: unknown;
   export default plugin;
 }
+declare module 'pouchdb-adapter-http' {
+  const plugin: unknown;
+  export default plugin;
+}

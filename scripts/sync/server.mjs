@@ -65,6 +65,31 @@ function adminOnlyDatabases(adminBasic) {
   };
 }
 
+/**
+ * Replication writes with `_bulk_docs` and `new_edits: false`, each document carrying its
+ * revision history in `_revisions`. The validation package of the server packages overwrites
+ * `_revisions` with the stored document's before the write, so an update from a replica would
+ * be dropped without a word. Parsing the body here first and making `_revisions` ignore that
+ * assignment keeps the replicated history intact (validation itself is unchanged).
+ */
+const keepRevisionHistory = [
+  express.json({ limit: '64mb' }),
+  (req, res, next) => {
+    const docs = Array.isArray(req.body?.docs) ? req.body.docs : [];
+    for (const doc of docs) {
+      if (!doc || typeof doc !== 'object' || !doc._revisions) continue;
+      const history = doc._revisions;
+      Object.defineProperty(doc, '_revisions', {
+        enumerable: true,
+        configurable: true,
+        get: () => history,
+        set: () => undefined,
+      });
+    }
+    next();
+  },
+];
+
 /** Starts the server; resolves when it listens. */
 export async function startSyncServer({ port = 5984, admin = 'admin:admin', dir = null } = {}) {
   const colon = admin.indexOf(':');
@@ -95,6 +120,7 @@ export async function startSyncServer({ port = 5984, admin = 'admin:admin', dir 
   const app = express();
   app.disable('x-powered-by');
   app.use(loopbackCors);
+  app.post('/:db/_bulk_docs', ...keepRevisionHistory);
   app.use(adminOnlyDatabases(`Basic ${Buffer.from(admin).toString('base64')}`));
   app.use(pouchApp);
   const server = createServer(app);

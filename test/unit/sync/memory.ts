@@ -6,6 +6,7 @@
 import PouchDB from 'pouchdb-core';
 import memory from 'pouchdb-adapter-memory';
 import replication from 'pouchdb-replication';
+import http from 'pouchdb-adapter-http';
 import type {
   LocalSide,
   OutboxEntry,
@@ -15,7 +16,16 @@ import type {
 } from '../../../pwa/sync/bridge.js';
 import type { SyncKind } from '../../../pwa/sync/record-schema.js';
 
-PouchDB.plugin(memory).plugin(replication);
+// The embedded server (imported by some tests) registers the same plugins on the same module.
+for (const plugin of [memory, replication, http]) {
+  try {
+    PouchDB.plugin(plugin);
+  } catch {
+    // already registered
+  }
+}
+
+export { PouchDB };
 
 let n = 0;
 export function memoryPouch(): PouchDB.Database & PouchLike {

@@ -10,6 +10,7 @@ import { startSyncServer } from '../../../scripts/sync/server.mjs';
 import { setupTeam } from '../../../scripts/sync/team-setup.mjs';
 import { parseBackup } from '../../../pwa/backup.js';
 import { tank } from './records.js';
+import { PouchDB, memoryPouch } from './memory.js';
 
 let server: { url: string; close: () => Promise<void> };
 let dbUrl = '';
@@ -121,5 +122,28 @@ describe('team server', () => {
     expect(written.filter((r) => r.ok)).toEqual([]);
     const res = await fetch(`${dbUrl}/_all_docs`);
     expect([401, 403]).toContain(res.status);
+  });
+
+  it('takes an edit replicated from a phone, with its revision history', async () => {
+    const replica = memoryPouch();
+    const remote = new PouchDB(dbUrl, {
+      auth: { username: 'ann', password: 'ann-pass' },
+      skip_setup: true,
+    });
+    const first = await replica.put({ _id: 'tank:t7', v: 1, kind: 'tank', record: tank('t7') });
+    await replica.replicate.to(remote);
+    await replica.put({
+      _id: 'tank:t7',
+      _rev: first.rev,
+      v: 1,
+      kind: 'tank',
+      record: tank('t7', { name: 'Edited' }),
+    });
+    await replica.replicate.to(remote);
+    const onServer = (await (
+      await fetch(`${dbUrl}/tank%3At7`, { headers: { cookie: await login('ann', 'ann-pass') } })
+    ).json()) as { _rev: string; record: { name: string } };
+    expect(onServer._rev.startsWith('2-')).toBe(true);
+    expect(onServer.record.name).toBe('Edited');
   });
 });
