@@ -423,6 +423,14 @@ export class Store {
     return this.db.get(SHARED_STORE[kind], key);
   }
 
+  async getSharedMany(kind: SharedKind, keys: string[]): Promise<unknown[]> {
+    if (keys.length === 0) return [];
+    const tx = this.db.transaction(SHARED_STORE[kind], 'readonly');
+    const out = await Promise.all(keys.map((k) => tx.store.get(k)));
+    await tx.done;
+    return out;
+  }
+
   async listShared(kind: SharedKind): Promise<unknown[]> {
     return this.db.getAll(SHARED_STORE[kind]);
   }
@@ -432,7 +440,15 @@ export class Store {
    * deleted tank takes its drafts along (its checks and fills arrive as deletions of their own).
    */
   async applyShared(puts: { kind: SharedKind; record: unknown }[], dels: SharedRecord[]) {
-    const names = ['tanks', 'checks', 'fills', 'walkdowns', 'sites', 'drafts', 'fillDrafts'] as const;
+    const names = [
+      'tanks',
+      'checks',
+      'fills',
+      'walkdowns',
+      'sites',
+      'drafts',
+      'fillDrafts',
+    ] as const;
     const tx = this.db.transaction([...names], 'readwrite');
     for (const p of puts) await tx.objectStore(SHARED_STORE[p.kind]).put(p.record as never);
     for (const d of dels) {

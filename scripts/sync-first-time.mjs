@@ -90,23 +90,34 @@ try {
   await page.getByTestId('sync-password').fill('ann-pass');
   t0 = Date.now();
   await page.getByTestId('sync-connect').click();
-  await page.waitForFunction(
-    (n) =>
-      new Promise((resolve) => {
-        const el = document.querySelector('tankside-app')?.shadowRoot?.querySelector('team-panel')
-          ?.shadowRoot?.querySelector('[data-testid="sync-status"]');
-        if (el?.getAttribute('data-state') !== 'paused') return resolve(false);
-        const r = indexedDB.open('tankside');
-        r.onsuccess = () => {
-          const tx = r.result.transaction(['tanks', 'checks']);
-          const a = tx.objectStore('tanks').count();
-          const b = tx.objectStore('checks').count();
-          tx.oncomplete = () => resolve(a.result >= n && b.result >= n);
+  const done = (n) =>
+    new Promise((resolve) => {
+      const el = document
+        .querySelector('tankside-app')
+        ?.shadowRoot?.querySelector('team-panel')
+        ?.shadowRoot?.querySelector('[data-testid="sync-status"]');
+      if (el?.getAttribute('data-state') !== 'paused') return resolve(false);
+      const r = indexedDB.open('tankside');
+      r.onsuccess = () => {
+        const tx = r.result.transaction(['tanks', 'checks']);
+        const a = tx.objectStore('tanks').count();
+        const b = tx.objectStore('checks').count();
+        tx.oncomplete = () => {
+          r.result.close();
+          resolve(a.result >= n && b.result >= n);
         };
-      }),
-    N,
-    { timeout: 1_800_000, polling: 1000 },
-  );
+      };
+    });
+  // Polled from here (each evaluation awaits the page's answer), every half second.
+  for (;;) {
+    if (await page.evaluate(done, N)) break;
+    if (Date.now() - t0 > 1_800_000) throw new Error('no full sync within 30 min');
+    if (process.env.DEBUG_SYNC) console.log(await page.evaluate(() => {
+      const el = document.querySelector('tankside-app')?.shadowRoot?.querySelector('team-panel')?.shadowRoot?.querySelector('[data-testid="sync-status"]');
+      return `${el?.getAttribute('data-state')} ${el?.textContent?.trim()}`;
+    }));
+    await new Promise((r) => setTimeout(r, 500));
+  }
   const secs = (Date.now() - t0) / 1000;
   console.log(`first sync of ${N} tanks + ${N} checks: ${secs.toFixed(1)} s (Connect → up to date, all in the phone's store)`);
 } finally {

@@ -55,6 +55,8 @@ export interface PouchLike {
 /** The phone's store, as the bridge sees it (pwa/storage.ts implements it). */
 export interface LocalSide {
   getShared(kind: SyncKind, key: string): Promise<unknown>;
+  /** Several records of one kind in one read (undefined where absent). */
+  getSharedMany(kind: SyncKind, keys: string[]): Promise<unknown[]>;
   listShared(kind: SyncKind): Promise<unknown[]>;
   applyShared(
     puts: { kind: SyncKind; record: unknown }[],
@@ -73,6 +75,8 @@ export interface SyncBook {
   /** Removes the entries whose seq is unchanged (a newer note of the same id stays). */
   removeOutbox(entries: OutboxEntry[]): Promise<void>;
   hasOutbox(id: string): Promise<boolean>;
+  /** Which of these ids have a note in the outbox (one read). */
+  outboxHas(ids: string[]): Promise<Set<string>>;
   getPullSeq(): Promise<number | string>;
   setPullSeq(seq: number | string): Promise<void>;
   /** Checks and fills that arrived before their tank. */
@@ -120,8 +124,9 @@ export async function flush(book: SyncBook, local: LocalSide, pouch: PouchLike):
     const docs: Partial<SyncDoc>[] = [];
     const done: OutboxEntry[] = [];
     const pending = new Map<string, OutboxEntry>();
+    const records = await readRecords(local, entries);
     for (const [i, entry] of entries.entries()) {
-      const doc = await wantedDoc(entry.id, rows[i], local);
+      const doc = wantedDoc(entry.id, rows[i], records.get(entry.id));
       if (doc) {
         docs.push(doc);
         pending.set(entry.id, entry);
@@ -139,15 +144,32 @@ export async function flush(book: SyncBook, local: LocalSide, pouch: PouchLike):
   }
 }
 
+/** The stored records of the entries, by document id, read kind by kind. */
+async function readRecords(
+  local: LocalSide,
+  entries: OutboxEntry[],
+): Promise<Map<string, unknown>> {
+  const out = new Map<string, unknown>();
+  const byKind = new Map<SyncKind, string[]>();
+  for (const e of entries) {
+    const p = parseDocId(e.id);
+    if (p) byKind.set(p.kind, [...(byKind.get(p.kind) ?? []), p.key]);
+  }
+  for (const [kind, keys] of byKind) {
+    const recs = await local.getSharedMany(kind, keys);
+    keys.forEach((k, i) => out.set(docIdOf(kind, k), recs[i]));
+  }
+  return out;
+}
+
 /** The document that makes the replica match the store for this id, or null if it already does. */
-async function wantedDoc(
+function wantedDoc(
   id: string,
   row: PouchRow | undefined,
-  local: LocalSide,
-): Promise<Partial<SyncDoc> | null> {
+  record: unknown,
+): Partial<SyncDoc> | null {
   const parsed = parseDocId(id);
   if (!parsed) return null;
-  const record = await local.getShared(parsed.kind, parsed.key);
   const rev = row?.value?.rev;
   const alive = rev !== undefined && !row?.value?.deleted;
   if (record === undefined || !isShared(record)) {

@@ -19,6 +19,12 @@ interface Batch {
   repush: string[];
   resolutions: Partial<SyncDoc>[];
   marks: SyncMarks & { seenDeletes?: string[] };
+  /** Ids of the batch with a local change not flushed yet. */
+  pending: Set<string>;
+  /** Tanks present in the store before the batch, among those the batch's records name. */
+  stored: Set<string>;
+  /** The store's own copy of the batch's deleted checks and fills (for their tank). */
+  mine: Map<string, { tankId?: string }>;
 }
 
 /** Applies the replica's changes since the saved sequence; returns how many were read. */
@@ -58,13 +64,17 @@ async function applyBatch(
     repush: [],
     resolutions: [],
     marks: await book.getMarks(),
+    pending: await book.outboxHas(changes.map((c) => c.id)),
+    stored: new Set(),
+    mine: new Map(),
   };
   const parsed = changes
     .map((c) => ({ c, p: parseDocId(c.id) }))
     .filter((x): x is { c: PouchChange; p: { kind: SyncKind; key: string } } => x.p !== null);
+  await lookUp(b, local, parsed);
   // Tanks first, so a check in the same batch finds its tank.
-  for (const { c, p } of parsed) if (p.kind === 'tank') await onTank(b, book, c, p.key);
-  for (const { c, p } of parsed) if (p.kind !== 'tank') await onOther(b, book, local, pouch, c, p);
+  for (const { c, p } of parsed) if (p.kind === 'tank') onTank(b, c, p.key);
+  for (const { c, p } of parsed) if (p.kind !== 'tank') await onOther(b, pouch, c, p);
   for (const tankId of b.kept) b.repush.push(...(await childrenOf(local, tankId)));
   await local.applyShared(b.puts, b.dels);
   if (b.repush.length) await book.addOutbox(b.repush);
@@ -80,12 +90,39 @@ function setMark(list: string[], id: string, on: boolean): string[] {
   return list;
 }
 
-async function onTank(b: Batch, book: SyncBook, c: PouchChange, key: string): Promise<void> {
+/** Reads, in a few requests, what the batch needs from the store. */
+async function lookUp(
+  b: Batch,
+  local: LocalSide,
+  parsed: { c: PouchChange; p: { kind: SyncKind; key: string } }[],
+): Promise<void> {
+  const tankIds = new Set<string>();
+  for (const { c, p } of parsed) {
+    const tankId = (c.doc?.record as { tankId?: unknown } | undefined)?.tankId;
+    if ((p.kind === 'check' || p.kind === 'fill') && typeof tankId === 'string')
+      tankIds.add(tankId);
+  }
+  const ids = [...tankIds];
+  const tanks = await local.getSharedMany('tank', ids);
+  ids.forEach((id, i) => tanks[i] !== undefined && b.stored.add(id));
+  for (const kind of ['check', 'fill'] as const) {
+    const gone = parsed.filter(({ c, p }) => p.kind === kind && (c.deleted || !c.doc));
+    const recs = await local.getSharedMany(
+      kind,
+      gone.map(({ p }) => p.key),
+    );
+    gone.forEach(
+      ({ c }, i) => recs[i] !== undefined && b.mine.set(c.id, recs[i] as { tankId?: string }),
+    );
+  }
+}
+
+function onTank(b: Batch, c: PouchChange, key: string): void {
   const m = b.marks;
   if (c.deleted || !c.doc) {
     m.conflicts = setMark(m.conflicts, key, false);
     m.keptAfterDelete = setMark(m.keptAfterDelete, key, false);
-    if (!(await book.hasOutbox(c.id))) b.dels.push({ kind: 'tank', key });
+    if (!b.pending.has(c.id)) b.dels.push({ kind: 'tank', key });
     return;
   }
   if (validateSyncDoc(c.doc) !== null) return;
@@ -103,21 +140,19 @@ async function onTank(b: Batch, book: SyncBook, c: PouchChange, key: string): Pr
   }
   b.tanks.add(key);
   // A local edit not pushed yet is newer: the flush writes it over this revision.
-  if (!(await book.hasOutbox(c.id))) b.puts.push({ kind: 'tank', record: c.doc.record });
+  if (!b.pending.has(c.id)) b.puts.push({ kind: 'tank', record: c.doc.record });
 }
 
 async function onOther(
   b: Batch,
-  book: SyncBook,
-  local: LocalSide,
   pouch: PouchLike,
   c: PouchChange,
   p: { kind: SyncKind; key: string },
 ): Promise<void> {
-  if (await book.hasOutbox(c.id)) return;
+  if (b.pending.has(c.id)) return;
   if (c.deleted || !c.doc) {
     b.waiting.delete(c.id);
-    const mine = (await local.getShared(p.kind, p.key)) as { tankId?: string } | undefined;
+    const mine = b.mine.get(c.id);
     // The tank was kept (edited elsewhere while deleted here): its history comes back with it.
     if (mine?.tankId && (b.kept.has(mine.tankId) || b.marks.keptAfterDelete.includes(mine.tankId)))
       b.repush.push(c.id);
@@ -129,7 +164,7 @@ async function onOther(
   if (validateSyncDoc(doc) !== null) return;
   const tankId = (doc.record as { tankId?: unknown }).tankId;
   if ((p.kind === 'check' || p.kind === 'fill') && typeof tankId === 'string') {
-    const present = b.tanks.has(tankId) || (await local.getShared('tank', tankId)) !== undefined;
+    const present = b.tanks.has(tankId) || b.stored.has(tankId);
     if (!present) {
       b.waiting.add(c.id);
       return;

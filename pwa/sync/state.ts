@@ -76,6 +76,16 @@ export class SyncState implements SyncBook {
     return (await this.db.count('outbox', id)) > 0;
   }
 
+  async outboxHas(ids: string[]): Promise<Set<string>> {
+    const out = new Set<string>();
+    if (ids.length === 0 || (await this.db.count('outbox')) === 0) return out;
+    const tx = this.db.transaction('outbox', 'readonly');
+    const counts = await Promise.all(ids.map((id) => tx.store.count(id)));
+    await tx.done;
+    ids.forEach((id, i) => counts[i]! > 0 && out.add(id));
+    return out;
+  }
+
   getPullSeq(): Promise<number | string> {
     return this.meta<number | string>('pullSeq', 0);
   }

@@ -49,6 +49,9 @@ export class MapLocal implements LocalSide {
   async getShared(kind: SyncKind, key: string): Promise<unknown> {
     return structuredClone(this.store(kind).get(key));
   }
+  async getSharedMany(kind: SyncKind, keys: string[]): Promise<unknown[]> {
+    return keys.map((k) => structuredClone(this.store(kind).get(k)));
+  }
   async listShared(kind: SyncKind): Promise<unknown[]> {
     return [...this.store(kind).values()].map((x) => structuredClone(x));
   }
@@ -90,6 +93,9 @@ export class MemoryBook implements SyncBook {
   }
   async hasOutbox(id: string): Promise<boolean> {
     return this.outbox.has(id);
+  }
+  async outboxHas(ids: string[]): Promise<Set<string>> {
+    return new Set(ids.filter((id) => this.outbox.has(id)));
   }
   async getPullSeq() {
     return this.seq;
