@@ -676,18 +676,18 @@ export class TanksideApp extends LitElement {
           return html`<p>Loading…</p>`;
         return html`<sync-conflict tank-id=${t.id} .display=${display}></sync-conflict>
           <check-screen
-          .tank=${t}
-          .settings=${this._settings}
-          .readings=${this._draft.readings}
-          .last=${this._draft.last}
-          .checks=${this._checks.filter((c) => c.tankId === t.id)}
-          .fills=${this._fill.fillsOf(t.id)}
-          @fill-start=${this._startFill}
-          @readings-change=${this._onReadings}
-          @check-save=${this._saveCheck}
-          @check-delete=${this._deleteCheck}
-          @tank-edit=${() => this._navigate({ name: 'edit', id: t.id })}
-        ></check-screen>`;
+            .tank=${t}
+            .settings=${this._settings}
+            .readings=${this._draft.readings}
+            .last=${this._draft.last}
+            .checks=${this._checks.filter((c) => c.tankId === t.id)}
+            .fills=${this._fill.fillsOf(t.id)}
+            @fill-start=${this._startFill}
+            @readings-change=${this._onReadings}
+            @check-save=${this._saveCheck}
+            @check-delete=${this._deleteCheck}
+            @tank-edit=${() => this._navigate({ name: 'edit', id: t.id })}
+          ></check-screen>`;
       }
       case 'fill': {
         const t = this._tank(r.id);
@@ -712,19 +712,19 @@ export class TanksideApp extends LitElement {
         ></settings-form>`;
       case 'data':
         return html`<backup-panel
-          tank-count=${this._tanks.length}
-          check-count=${this._checks.length}
-          demo-count=${this._tanks.filter((t) => t.demo).length}
-          .persisted=${this._persisted}
-          .message=${this._dataMessage}
-          message-kind=${this._dataMessageKind}
-          @backup-export=${this._export}
-          @backup-import=${this._import}
-          @csv-export=${this._csv}
-          @fill-csv-export=${this._fillCsv}
-          @demo-clear=${this._clearDemo}
-          @data-clear=${this._clearAll}
-        ></backup-panel>
+            tank-count=${this._tanks.length}
+            check-count=${this._checks.length}
+            demo-count=${this._tanks.filter((t) => t.demo).length}
+            .persisted=${this._persisted}
+            .message=${this._dataMessage}
+            message-kind=${this._dataMessageKind}
+            @backup-export=${this._export}
+            @backup-import=${this._import}
+            @csv-export=${this._csv}
+            @fill-csv-export=${this._fillCsv}
+            @demo-clear=${this._clearDemo}
+            @data-clear=${this._clearAll}
+          ></backup-panel>
           <team-panel></team-panel>`;
       case 'not-found':
         return html`<div data-testid="not-found">

@@ -1,3 +1,4 @@
+/* global document, indexedDB -- the timing functions run in the page */
 // Measures a phone's first sync of a large team register (by hand; never a timed test):
 // starts the embedded team server, fills the team with N invented tanks and N checks, then opens
 // the built app in headless Chromium, connects, and times Connect → "Up to date" with every
@@ -42,17 +43,35 @@ function check(i) {
     },
     productLabel: 'Propane',
     summary: {
-      phase: 'two-phase', pressure: 7e5, totalMass: 400, liquidVolume: 0.76, fillingDensity: 0.2,
-      maxMass: 800, roomLeftMass: 400, stopAtGaugePercent: 80, binding: 'weight',
-      peakTemperature: 316, peakPressure: 1.3e6, peakLiquidFraction: 0.45, headroomToDesign: 4e5,
-      headroomToRelief: 3e5, liquidFullTemperature: 340, topLevel: null, cautions: [],
+      phase: 'two-phase',
+      pressure: 7e5,
+      totalMass: 400,
+      liquidVolume: 0.76,
+      fillingDensity: 0.2,
+      maxMass: 800,
+      roomLeftMass: 400,
+      stopAtGaugePercent: 80,
+      binding: 'weight',
+      peakTemperature: 316,
+      peakPressure: 1.3e6,
+      peakLiquidFraction: 0.45,
+      headroomToDesign: 4e5,
+      headroomToRelief: 3e5,
+      liquidFullTemperature: 340,
+      topLevel: null,
+      cautions: [],
     },
     demo: false,
   };
 }
 
 const sync = await startSyncServer({ port: 0, admin: ADMIN });
-const dbUrl = await setupTeam({ url: sync.url, admin: ADMIN, team: 'measure', users: ['ann:ann-pass'] });
+const dbUrl = await setupTeam({
+  url: sync.url,
+  admin: ADMIN,
+  team: 'measure',
+  users: ['ann:ann-pass'],
+});
 let t0 = Date.now();
 for (let start = 0; start < N; start += 500) {
   const docs = [];
@@ -83,7 +102,9 @@ const browser = await chromium.launch({
   args: ['--headless=new', '--disable-gpu', '--disable-dev-shm-usage', '--no-first-run'],
 });
 try {
-  const page = await (await browser.newContext({ viewport: { width: 360, height: 740 } })).newPage();
+  const page = await (
+    await browser.newContext({ viewport: { width: 360, height: 740 } })
+  ).newPage();
   await page.goto(`${appUrl}#/data`);
   await page.getByTestId('sync-url').fill(dbUrl);
   await page.getByTestId('sync-user').fill('ann');
@@ -112,14 +133,22 @@ try {
   for (;;) {
     if (await page.evaluate(done, N)) break;
     if (Date.now() - t0 > 1_800_000) throw new Error('no full sync within 30 min');
-    if (process.env.DEBUG_SYNC) console.log(await page.evaluate(() => {
-      const el = document.querySelector('tankside-app')?.shadowRoot?.querySelector('team-panel')?.shadowRoot?.querySelector('[data-testid="sync-status"]');
-      return `${el?.getAttribute('data-state')} ${el?.textContent?.trim()}`;
-    }));
+    if (process.env.DEBUG_SYNC)
+      console.log(
+        await page.evaluate(() => {
+          const el = document
+            .querySelector('tankside-app')
+            ?.shadowRoot?.querySelector('team-panel')
+            ?.shadowRoot?.querySelector('[data-testid="sync-status"]');
+          return `${el?.getAttribute('data-state')} ${el?.textContent?.trim()}`;
+        }),
+      );
     await new Promise((r) => setTimeout(r, 500));
   }
   const secs = (Date.now() - t0) / 1000;
-  console.log(`first sync of ${N} tanks + ${N} checks: ${secs.toFixed(1)} s (Connect → up to date, all in the phone's store)`);
+  console.log(
+    `first sync of ${N} tanks + ${N} checks: ${secs.toFixed(1)} s (Connect → up to date, all in the phone's store)`,
+  );
 } finally {
   await browser.close();
   await app.close();

@@ -83,7 +83,9 @@ const keepRevisionHistory = [
         enumerable: true,
         configurable: true,
         get: () => history,
-        set: () => undefined,
+        set: () => {
+          // the validation package's overwrite is ignored
+        },
       });
     }
     next();

@@ -105,77 +105,89 @@ function listed(page: Page, name: string) {
 }
 
 describe('team sync, two phones', () => {
-  it('with no team set up the app makes no request to any other origin and loads no sync code', async () => {
-    const a = await phone();
-    await a.page.goto(new URL('#/data', app.url).href);
-    await expect.poll(() => state(a.page)).toBe('off');
-    await a.page.goto(new URL('#/', app.url).href);
-    await byTestId(a.page, 'tank-item').first().waitFor();
-    expect(foreignRequests(a.requests, app.origin)).toEqual([]);
-    expect(a.requests.urls.filter((u) => /\/assets\/engine-/.test(u))).toEqual([]);
-  }, TEST_TIMEOUT);
+  it(
+    'with no team set up the app makes no request to any other origin and loads no sync code',
+    async () => {
+      const a = await phone();
+      await a.page.goto(new URL('#/data', app.url).href);
+      await expect.poll(() => state(a.page)).toBe('off');
+      await a.page.goto(new URL('#/', app.url).href);
+      await byTestId(a.page, 'tank-item').first().waitFor();
+      expect(foreignRequests(a.requests, app.origin)).toEqual([]);
+      expect(a.requests.urls.filter((u) => /\/assets\/engine-/.test(u))).toEqual([]);
+    },
+    TEST_TIMEOUT,
+  );
 
-  it('a tank added on one phone appears on the other; checks saved offline arrive after reconnecting', async () => {
-    const a = await phone();
-    const b = await phone();
-    await connect(a.page, 'ann');
-    await connect(b.page, 'bob');
-    const id = await addTank(a.page, 'Invented north tank');
-    await b.page.goto(new URL('#/', app.url).href);
-    await listed(b.page, 'Invented north tank').waitFor({ timeout: SYNC_TIMEOUT });
+  it(
+    'a tank added on one phone appears on the other; checks saved offline arrive after reconnecting',
+    async () => {
+      const a = await phone();
+      const b = await phone();
+      await connect(a.page, 'ann');
+      await connect(b.page, 'bob');
+      const id = await addTank(a.page, 'Invented north tank');
+      await b.page.goto(new URL('#/', app.url).href);
+      await listed(b.page, 'Invented north tank').waitFor({ timeout: SYNC_TIMEOUT });
 
-    // Phone A loses signal, saves two checks, and gets it back.
-    await a.context.setOffline(true);
-    for (const gauge of ['40', '45']) {
-      await typeInto(byTestId(a.page, 'liquid-temperature'), '70');
-      await typeInto(byTestId(a.page, 'gauge-percent'), gauge);
-      await byTestId(a.page, 'fill-limit').waitFor();
-      const before = await byTestId(a.page, 'history-item').count();
-      await byTestId(a.page, 'check-save').click();
-      await expect.poll(() => byTestId(a.page, 'history-item').count()).toBe(before + 1);
-    }
-    await b.page.goto(new URL(`#/tank/${encodeURIComponent(id)}`, app.url).href);
-    await byTestId(b.page, 'tank-heading').waitFor();
-    expect(await byTestId(b.page, 'history-item').count()).toBe(0);
-    await a.context.setOffline(false);
-    await expect
-      .poll(() => byTestId(b.page, 'history-item').count(), { timeout: SYNC_TIMEOUT })
-      .toBe(2);
-  }, TEST_TIMEOUT);
-
-  it('a nameplate edited on both phones while apart shows the conflict, and the choice settles it on both', async () => {
-    const a = await phone();
-    const b = await phone();
-    await connect(a.page, 'ann');
-    await connect(b.page, 'bob');
-    const id = await addTank(a.page, 'Invented south tank');
-    await b.page.goto(new URL('#/', app.url).href);
-    await listed(b.page, 'Invented south tank').waitFor({ timeout: SYNC_TIMEOUT });
-
-    await a.context.setOffline(true);
-    await b.context.setOffline(true);
-    await renameTank(a.page, id, 'Invented south tank A');
-    await renameTank(b.page, id, 'Invented south tank B');
-    await a.context.setOffline(false);
-    await b.context.setOffline(false);
-
-    for (const p of [a.page, b.page]) {
-      await p.goto(new URL(`#/tank/${encodeURIComponent(id)}`, app.url).href);
-      await byTestId(p, 'sync-conflict').waitFor({ timeout: SYNC_TIMEOUT });
-    }
-    const versions = byTestId(a.page, 'sync-version');
-    await expect.poll(() => versions.count(), { timeout: SYNC_TIMEOUT }).toBe(2);
-    const texts = await versions.allTextContents();
-    expect(texts.some((t) => t.includes('Invented south tank A'))).toBe(true);
-    expect(texts.some((t) => t.includes('Invented south tank B'))).toBe(true);
-    await versions.filter({ hasText: 'Invented south tank B' }).getByTestId('sync-keep').click();
-    for (const p of [a.page, b.page]) {
-      await byTestId(p, 'sync-conflict').waitFor({ state: 'detached', timeout: SYNC_TIMEOUT });
+      // Phone A loses signal, saves two checks, and gets it back.
+      await a.context.setOffline(true);
+      for (const gauge of ['40', '45']) {
+        await typeInto(byTestId(a.page, 'liquid-temperature'), '70');
+        await typeInto(byTestId(a.page, 'gauge-percent'), gauge);
+        await byTestId(a.page, 'fill-limit').waitFor();
+        const before = await byTestId(a.page, 'history-item').count();
+        await byTestId(a.page, 'check-save').click();
+        await expect.poll(() => byTestId(a.page, 'history-item').count()).toBe(before + 1);
+      }
+      await b.page.goto(new URL(`#/tank/${encodeURIComponent(id)}`, app.url).href);
+      await byTestId(b.page, 'tank-heading').waitFor();
+      expect(await byTestId(b.page, 'history-item').count()).toBe(0);
+      await a.context.setOffline(false);
       await expect
-        .poll(() => byTestId(p, 'tank-heading').textContent(), { timeout: SYNC_TIMEOUT })
-        .toContain('Invented south tank B');
-    }
-  }, TEST_TIMEOUT);
+        .poll(() => byTestId(b.page, 'history-item').count(), { timeout: SYNC_TIMEOUT })
+        .toBe(2);
+    },
+    TEST_TIMEOUT,
+  );
+
+  it(
+    'a nameplate edited on both phones while apart shows the conflict, and the choice settles it on both',
+    async () => {
+      const a = await phone();
+      const b = await phone();
+      await connect(a.page, 'ann');
+      await connect(b.page, 'bob');
+      const id = await addTank(a.page, 'Invented south tank');
+      await b.page.goto(new URL('#/', app.url).href);
+      await listed(b.page, 'Invented south tank').waitFor({ timeout: SYNC_TIMEOUT });
+
+      await a.context.setOffline(true);
+      await b.context.setOffline(true);
+      await renameTank(a.page, id, 'Invented south tank A');
+      await renameTank(b.page, id, 'Invented south tank B');
+      await a.context.setOffline(false);
+      await b.context.setOffline(false);
+
+      for (const p of [a.page, b.page]) {
+        await p.goto(new URL(`#/tank/${encodeURIComponent(id)}`, app.url).href);
+        await byTestId(p, 'sync-conflict').waitFor({ timeout: SYNC_TIMEOUT });
+      }
+      const versions = byTestId(a.page, 'sync-version');
+      await expect.poll(() => versions.count(), { timeout: SYNC_TIMEOUT }).toBe(2);
+      const texts = await versions.allTextContents();
+      expect(texts.some((t) => t.includes('Invented south tank A'))).toBe(true);
+      expect(texts.some((t) => t.includes('Invented south tank B'))).toBe(true);
+      await versions.filter({ hasText: 'Invented south tank B' }).getByTestId('sync-keep').click();
+      for (const p of [a.page, b.page]) {
+        await byTestId(p, 'sync-conflict').waitFor({ state: 'detached', timeout: SYNC_TIMEOUT });
+        await expect
+          .poll(() => byTestId(p, 'tank-heading').textContent(), { timeout: SYNC_TIMEOUT })
+          .toContain('Invented south tank B');
+      }
+    },
+    TEST_TIMEOUT,
+  );
 });
 
 describe('team server', () => {
