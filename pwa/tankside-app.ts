@@ -44,8 +44,7 @@ import '../components/confirm-bar.js';
 import { FillController } from './fill-route.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { fillsToCsv } from './fill-csv.js';
-import '../components/team-panel.js';
-import '../components/sync-conflict.js';
+import { syncAddOns } from './sync/shell-hooks.js';
 import { syncHub } from './sync/hub.js';
 
 /** How long an undo offer stays, ms. */
@@ -674,20 +673,19 @@ export class TanksideApp extends LitElement {
         if (!t) return this._missingTank();
         if (!this._checkScreenReady || !this._draft || this._draft.tankId !== t.id)
           return html`<p>Loading…</p>`;
-        return html`<sync-conflict tank-id=${t.id} .display=${display}></sync-conflict>
-          <check-screen
-            .tank=${t}
-            .settings=${this._settings}
-            .readings=${this._draft.readings}
-            .last=${this._draft.last}
-            .checks=${this._checks.filter((c) => c.tankId === t.id)}
-            .fills=${this._fill.fillsOf(t.id)}
-            @fill-start=${this._startFill}
-            @readings-change=${this._onReadings}
-            @check-save=${this._saveCheck}
-            @check-delete=${this._deleteCheck}
-            @tank-edit=${() => this._navigate({ name: 'edit', id: t.id })}
-          ></check-screen>`;
+        return html`<check-screen
+          .tank=${t}
+          .settings=${this._settings}
+          .readings=${this._draft.readings}
+          .last=${this._draft.last}
+          .checks=${this._checks.filter((c) => c.tankId === t.id)}
+          .fills=${this._fill.fillsOf(t.id)}
+          @fill-start=${this._startFill}
+          @readings-change=${this._onReadings}
+          @check-save=${this._saveCheck}
+          @check-delete=${this._deleteCheck}
+          @tank-edit=${() => this._navigate({ name: 'edit', id: t.id })}
+        ></check-screen>`;
       }
       case 'fill': {
         const t = this._tank(r.id);
@@ -712,20 +710,19 @@ export class TanksideApp extends LitElement {
         ></settings-form>`;
       case 'data':
         return html`<backup-panel
-            tank-count=${this._tanks.length}
-            check-count=${this._checks.length}
-            demo-count=${this._tanks.filter((t) => t.demo).length}
-            .persisted=${this._persisted}
-            .message=${this._dataMessage}
-            message-kind=${this._dataMessageKind}
-            @backup-export=${this._export}
-            @backup-import=${this._import}
-            @csv-export=${this._csv}
-            @fill-csv-export=${this._fillCsv}
-            @demo-clear=${this._clearDemo}
-            @data-clear=${this._clearAll}
-          ></backup-panel>
-          <team-panel></team-panel>`;
+          tank-count=${this._tanks.length}
+          check-count=${this._checks.length}
+          demo-count=${this._tanks.filter((t) => t.demo).length}
+          .persisted=${this._persisted}
+          .message=${this._dataMessage}
+          message-kind=${this._dataMessageKind}
+          @backup-export=${this._export}
+          @backup-import=${this._import}
+          @csv-export=${this._csv}
+          @fill-csv-export=${this._fillCsv}
+          @demo-clear=${this._clearDemo}
+          @data-clear=${this._clearAll}
+        ></backup-panel>`;
       case 'not-found':
         return html`<div data-testid="not-found">
           <h2>Nothing here</h2>
@@ -772,7 +769,9 @@ export class TanksideApp extends LitElement {
         </header>
         <main tabindex="-1">
           ${this._fatal ? html`<p class="error" role="alert" data-testid="app-error">${this._fatal}</p>` : nothing}
+          ${this._ready ? syncAddOns(this._route, this._settings, 'before') : nothing}
           ${this._ready ? this._screen() : html`<p>Loading…</p>`}
+          ${this._ready ? syncAddOns(this._route, this._settings, 'after') : nothing}
         </main>
         <div
           class="notices"
