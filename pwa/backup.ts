@@ -56,7 +56,8 @@ export function makeBackup(data: DataSet, now = new Date()): BackupFile {
 
 export type ParseResult = { ok: true; data: DataSet } | { ok: false; reason: string };
 
-class Invalid extends Error {}
+/** A refusal naming where and what (exported for the team server's record check). */
+export class Invalid extends Error {}
 
 type Obj = Record<string, unknown>;
 
@@ -122,7 +123,7 @@ function date(o: Obj, key: string, where: string): void {
   if (Number.isNaN(Date.parse(v))) fail(where, `“${key}” must be a date`);
 }
 
-function validateTank(t: unknown, i: number): TankRecord {
+export function validateTank(t: unknown, i: number): TankRecord {
   const where = `Tank ${i + 1}`;
   if (!isObj(t)) fail(where, 'is not an object');
   const name = str(t, 'name', where, true, TEXT_LIMITS.name);
@@ -224,12 +225,13 @@ function validateSummary(s: unknown, where: string): CheckSummary {
   return s as unknown as CheckSummary;
 }
 
-function validateCheck(c: unknown, i: number, tankIds: Set<string>): CheckRecord {
+/** `tankIds` null: the tank is not checked (a synced check may arrive before its tank). */
+export function validateCheck(c: unknown, i: number, tankIds: Set<string> | null): CheckRecord {
   const where = `Check ${i + 1}`;
   if (!isObj(c)) fail(where, 'is not an object');
   str(c, 'id', where, true, TEXT_LIMITS.id);
   const tankId = str(c, 'tankId', where, true, TEXT_LIMITS.id);
-  if (!tankIds.has(tankId)) fail(where, 'belongs to a tank that is not in the file');
+  if (tankIds && !tankIds.has(tankId)) fail(where, 'belongs to a tank that is not in the file');
   date(c, 'at', where);
   str(c, 'productLabel', where, false, TEXT_LIMITS.product);
   bool(c, 'demo', where);

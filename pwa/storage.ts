@@ -21,23 +21,18 @@
  * Every write that must be all-or-nothing (delete a tank with its checks, import a backup,
  * clear) runs in a single transaction, so a failure leaves the stored data as it was.
  */
-import type { IDBPDatabase } from 'idb';
-import type {
-  CheckBrief,
-  CheckRecord,
-  DraftRecord,
-  Settings,
-  TankRecord,
-} from '../components/types.js';
+import type { CheckRecord, DraftRecord, Settings, TankRecord } from '../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
-import type { FillDraft, FillRecord } from '../components/fill-types.js';
+import type { FillRecord } from '../components/fill-types.js';
 import { isClearableDemo } from './demo-own.js';
-import { DEFAULT_META, openAtVersion, type Meta, type TanksideDB } from './storage-schema.js';
+import { openAtVersion } from './storage-schema.js';
 import { DB_NAME, DB_VERSION } from './storage-schema.js';
 import { noteCheck, refreshTank } from './storage-latest.js';
+import { SHARED_STORE, StoreBase, type SharedKind, type SharedRecord } from './storage-base.js';
 
 export { DB_NAME, DB_VERSION, DEFAULT_META, UPGRADES, openAtVersion } from './storage-schema.js';
 export type { Meta, TanksideDB } from './storage-schema.js';
+export type { RemovedTank, SharedKind, SharedRecord, StoreWatcher } from './storage-base.js';
 
 /** All the user's data, as exported and imported. */
 export interface DataSet {
@@ -52,205 +47,9 @@ export interface DataSet {
   fills?: FillRecord[];
 }
 
-export class Store {
-  private constructor(private readonly db: IDBPDatabase<TanksideDB>) {
-    // A newer tab wants to upgrade: let it, rather than block it forever.
-    db.addEventListener('versionchange', () => db.close());
-  }
-
+export class Store extends StoreBase {
   static async open(name: string = DB_NAME): Promise<Store> {
     return new Store(await openAtVersion(name, DB_VERSION));
-  }
-
-  close(): void {
-    this.db.close();
-  }
-
-  // ── tanks ──────────────────────────────────────────────────────────────────────────────
-  async listTanks(): Promise<TankRecord[]> {
-    return this.db.getAll('tanks');
-  }
-
-  async getTank(id: string): Promise<TankRecord | undefined> {
-    return this.db.get('tanks', id);
-  }
-
-  async putTank(tank: TankRecord): Promise<void> {
-    await this.db.put('tanks', tank);
-  }
-
-  /**
-   * Deletes a tank with its checks, fills and drafts; returns what was removed so it can be
-   * restored (undo).
-   */
-  async deleteTank(id: string): Promise<RemovedTank | null> {
-    const names = ['tanks', 'checks', 'latestChecks', 'drafts', 'fills', 'fillDrafts'] as const;
-    const tx = this.db.transaction([...names], 'readwrite');
-    const tank = await tx.objectStore('tanks').get(id);
-    if (!tank) {
-      await tx.done;
-      return null;
-    }
-    const checks = await tx.objectStore('checks').index('tankId').getAll(id);
-    const fills = await tx.objectStore('fills').index('tankId').getAll(id);
-    const draft = await tx.objectStore('drafts').get(id);
-    const fillDraft = await tx.objectStore('fillDrafts').get(id);
-    await tx.objectStore('tanks').delete(id);
-    for (const c of checks) await tx.objectStore('checks').delete(c.id);
-    await tx.objectStore('latestChecks').delete(id);
-    for (const f of fills) await tx.objectStore('fills').delete(f.id);
-    await tx.objectStore('drafts').delete(id);
-    await tx.objectStore('fillDrafts').delete(id);
-    await tx.done;
-    return { tank, checks, draft, fills, fillDraft };
-  }
-
-  /** Puts back what `deleteTank` removed. */
-  async restoreTank(removed: RemovedTank): Promise<void> {
-    const names = ['tanks', 'checks', 'latestChecks', 'drafts', 'fills', 'fillDrafts'] as const;
-    const tx = this.db.transaction([...names], 'readwrite');
-    await tx.objectStore('tanks').put(removed.tank);
-    for (const c of removed.checks) await tx.objectStore('checks').put(c);
-    await refreshTank(tx, removed.tank.id);
-    for (const f of removed.fills ?? []) await tx.objectStore('fills').put(f);
-    if (removed.draft) await tx.objectStore('drafts').put(removed.draft);
-    if (removed.fillDraft) await tx.objectStore('fillDrafts').put(removed.fillDraft);
-    await tx.done;
-  }
-
-  // ── checks ─────────────────────────────────────────────────────────────────────────────
-  /** Checks of one tank (or all), newest first. */
-  async listChecks(tankId?: string): Promise<CheckRecord[]> {
-    const list =
-      tankId === undefined
-        ? await this.db.getAll('checks')
-        : await this.db.getAllFromIndex('checks', 'tankId', tankId);
-    return list.sort((a, b) => (a.at < b.at ? 1 : a.at > b.at ? -1 : 0));
-  }
-
-  /** The newest saved check of every tank, in brief (one per tank, in no particular order). */
-  async latestChecks(): Promise<CheckBrief[]> {
-    return this.db.getAll('latestChecks');
-  }
-
-  /** Up to `count` checks in key order after the key `after` (all from the first if null). */
-  async checksAfter(after: string | null, count: number): Promise<CheckRecord[]> {
-    const range = after === null ? null : IDBKeyRange.lowerBound(after, true);
-    return this.db.getAll('checks', range, count);
-  }
-
-  async putCheck(check: CheckRecord): Promise<void> {
-    const tx = this.db.transaction(['checks', 'latestChecks'], 'readwrite');
-    await tx.objectStore('checks').put(check);
-    await noteCheck(tx, check);
-    await tx.done;
-  }
-
-  async deleteCheck(id: string): Promise<void> {
-    const tx = this.db.transaction(['checks', 'latestChecks'], 'readwrite');
-    const check = await tx.objectStore('checks').get(id);
-    await tx.objectStore('checks').delete(id);
-    if (check) await refreshTank(tx, check.tankId);
-    await tx.done;
-  }
-
-  // ── drafts ─────────────────────────────────────────────────────────────────────────────
-  async getDraft(tankId: string): Promise<DraftRecord | undefined> {
-    return this.db.get('drafts', tankId);
-  }
-
-  async putDraft(draft: DraftRecord): Promise<void> {
-    await this.db.put('drafts', draft);
-  }
-
-  async deleteDraft(tankId: string): Promise<void> {
-    await this.db.delete('drafts', tankId);
-  }
-
-  // ── site forecasts and walkdowns ───────────────────────────────────────────────────────
-  async getSite(site: string): Promise<SiteForecast | undefined> {
-    return this.db.get('sites', site);
-  }
-
-  async putSite(forecast: SiteForecast): Promise<void> {
-    await this.db.put('sites', forecast);
-  }
-
-  /** Walkdowns of one site (or all), newest first. */
-  async listWalkdowns(site?: string): Promise<WalkdownRecord[]> {
-    const list =
-      site === undefined
-        ? await this.db.getAll('walkdowns')
-        : await this.db.getAllFromIndex('walkdowns', 'site', site);
-    return list.sort((a, b) =>
-      a.startedAt < b.startedAt ? 1 : a.startedAt > b.startedAt ? -1 : 0,
-    );
-  }
-
-  async getWalkdown(id: string): Promise<WalkdownRecord | undefined> {
-    return this.db.get('walkdowns', id);
-  }
-
-  async putWalkdown(w: WalkdownRecord): Promise<void> {
-    await this.db.put('walkdowns', w);
-  }
-
-  async deleteWalkdown(id: string): Promise<void> {
-    await this.db.delete('walkdowns', id);
-  }
-
-  // ── fills ──────────────────────────────────────────────────────────────────────────────
-  /** Fill records of one tank (or all), newest first (by the time the after-readings were saved). */
-  async listFills(tankId?: string): Promise<FillRecord[]> {
-    const list =
-      tankId === undefined
-        ? await this.db.getAll('fills')
-        : await this.db.getAllFromIndex('fills', 'tankId', tankId);
-    return list.sort((a, b) =>
-      a.finishedAt < b.finishedAt ? 1 : a.finishedAt > b.finishedAt ? -1 : 0,
-    );
-  }
-
-  /** Saves a fill record and removes the tank's fill under way, in one transaction. */
-  async putFill(fill: FillRecord): Promise<void> {
-    const tx = this.db.transaction(['fills', 'fillDrafts'], 'readwrite');
-    await tx.objectStore('fills').put(fill);
-    await tx.objectStore('fillDrafts').delete(fill.tankId);
-    await tx.done;
-  }
-
-  async deleteFill(id: string): Promise<void> {
-    await this.db.delete('fills', id);
-  }
-
-  async getFillDraft(tankId: string): Promise<FillDraft | undefined> {
-    return this.db.get('fillDrafts', tankId);
-  }
-
-  async putFillDraft(draft: FillDraft): Promise<void> {
-    await this.db.put('fillDrafts', draft);
-  }
-
-  async deleteFillDraft(tankId: string): Promise<void> {
-    await this.db.delete('fillDrafts', tankId);
-  }
-
-  // ── settings and meta ──────────────────────────────────────────────────────────────────
-  async getSettings(): Promise<Settings | null> {
-    return ((await this.db.get('settings', 'settings')) as Settings | undefined) ?? null;
-  }
-
-  async putSettings(settings: Settings): Promise<void> {
-    await this.db.put('settings', settings, 'settings');
-  }
-
-  async getMeta(): Promise<Meta> {
-    const m = (await this.db.get('settings', 'meta')) as Partial<Meta> | undefined;
-    return { ...DEFAULT_META, ...m };
-  }
-
-  async putMeta(meta: Meta): Promise<void> {
-    await this.db.put('settings', meta, 'meta');
   }
 
   // ── whole data set ─────────────────────────────────────────────────────────────────────
@@ -283,6 +82,17 @@ export class Store {
    * everything else is kept. Settings are replaced when the set has them.
    */
   async importAll(data: DataSet): Promise<void> {
+    const records: SharedRecord[] = [
+      ...data.tanks.map((t): SharedRecord => ({ kind: 'tank', key: t.id })),
+      ...data.checks.map((c): SharedRecord => ({ kind: 'check', key: c.id })),
+      ...(data.sites ?? []).map((f): SharedRecord => ({ kind: 'site', key: f.site })),
+      ...(data.walkdowns ?? []).map((w): SharedRecord => ({ kind: 'walkdown', key: w.id })),
+      ...(data.fills ?? []).map((f): SharedRecord => ({ kind: 'fill', key: f.id })),
+    ];
+    await this.noted(records, () => this.importOnly(data));
+  }
+
+  private async importOnly(data: DataSet): Promise<void> {
     const tx = this.db.transaction(
       ['tanks', 'checks', 'latestChecks', 'settings', 'sites', 'walkdowns', 'fills'],
       'readwrite',
@@ -301,6 +111,57 @@ export class Store {
       tx.abort();
       await tx.done.catch(() => undefined);
       throw error;
+    }
+    await tx.done;
+  }
+
+  // ── team sync (pwa/sync/): reads and writes that do not go back to the outbox ─────────────
+  async getShared(kind: SharedKind, key: string): Promise<unknown> {
+    return this.db.get(SHARED_STORE[kind], key);
+  }
+
+  async getSharedMany(kind: SharedKind, keys: string[]): Promise<unknown[]> {
+    if (keys.length === 0) return [];
+    const tx = this.db.transaction(SHARED_STORE[kind], 'readonly');
+    const out = await Promise.all(keys.map((k) => tx.store.get(k)));
+    await tx.done;
+    return out;
+  }
+
+  async listShared(kind: SharedKind): Promise<unknown[]> {
+    return this.db.getAll(SHARED_STORE[kind]);
+  }
+
+  /**
+   * Writes what the team sync brought, in one transaction, without telling the watcher. A
+   * deleted tank takes its drafts along (its checks and fills arrive as deletions of their own).
+   */
+  async applyShared(puts: { kind: SharedKind; record: unknown }[], dels: SharedRecord[]) {
+    const names = [
+      'tanks',
+      'checks',
+      'latestChecks',
+      'fills',
+      'walkdowns',
+      'sites',
+      'drafts',
+      'fillDrafts',
+    ] as const;
+    const tx = this.db.transaction([...names], 'readwrite');
+    for (const p of puts) {
+      await tx.objectStore(SHARED_STORE[p.kind]).put(p.record as never);
+      // The list's newest check per tank follows every check that arrives.
+      if (p.kind === 'check') await noteCheck(tx, p.record as CheckRecord);
+    }
+    for (const d of dels) {
+      const gone = d.kind === 'check' ? await tx.objectStore('checks').get(d.key) : undefined;
+      await tx.objectStore(SHARED_STORE[d.kind]).delete(d.key);
+      if (gone) await refreshTank(tx, gone.tankId);
+      if (d.kind === 'tank') {
+        await tx.objectStore('drafts').delete(d.key);
+        await tx.objectStore('fillDrafts').delete(d.key);
+        await tx.objectStore('latestChecks').delete(d.key);
+      }
     }
     await tx.done;
   }
@@ -360,15 +221,6 @@ export class Store {
     for (const d of removed.drafts) await tx.objectStore('drafts').put(d);
     await tx.done;
   }
-}
-
-/** A tank taken out with everything of it, kept so it can be put back. */
-export interface RemovedTank {
-  tank: TankRecord;
-  checks: CheckRecord[];
-  draft: DraftRecord | undefined;
-  fills?: FillRecord[];
-  fillDraft?: FillDraft | undefined;
 }
 
 /** Records taken out together, kept so they can be put back. */

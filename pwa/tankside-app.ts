@@ -42,6 +42,8 @@ import { appHeader } from './app-header.js';
 import { siteRulesOf } from '../components/site-rules.js';
 import { table } from './lookups.js';
 import { loadChecksLater, loadRegisterHead } from './register-load.js';
+import { syncAddOns } from './sync/shell-hooks.js';
+import { syncHub } from './sync/hub.js';
 
 export class TanksideApp extends LitElement {
   static override properties = {
@@ -55,7 +57,6 @@ export class TanksideApp extends LitElement {
   };
 
   static override styles = appStyles;
-
   /** IndexedDB database name (tests use their own). */
   declare dbName: string;
   declare _ready: boolean;
@@ -141,6 +142,7 @@ export class TanksideApp extends LitElement {
     }
     await this._reload(false);
     this._ready = true;
+    void syncHub.start(store, this.dbName, () => void this._reload());
     await this._router.go(this._router.route);
     void this._askPersistence();
   }
@@ -379,7 +381,9 @@ export class TanksideApp extends LitElement {
         ${appHeader(this._router.route.name)}
         <main tabindex="-1">
           ${this._fatal ? html`<p class="error" role="alert" data-testid="app-error">${this._fatal}</p>` : nothing}
+          ${this._ready ? syncAddOns(this._router.route, this._settings, 'before') : nothing}
           ${this._ready ? this._screen() : html`<p>Loading…</p>`}
+          ${this._ready ? syncAddOns(this._router.route, this._settings, 'after') : nothing}
         </main>
         ${this._notices.render()}
       </div>

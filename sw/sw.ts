@@ -6,7 +6,8 @@
  *   fresh cache; on activate every older `tankside-*` cache is deleted.
  * - Navigations fall back to the precached index.html, so deep links open offline.
  * - Requests to any other origin are refused: the app is meant to make none, and the worker
- *   makes sure a stray one cannot leave the phone.
+ *   makes sure a stray one cannot leave the phone. The one exception is the team server this
+ *   phone was set up with (team sync, sw/team-origin.ts).
  * - A new version waits until the page asks for it (`{ type: 'SKIP_WAITING' }`), which the page
  *   only sends after the user agrees to reload: a half-filled check is never thrown away.
  * - On activate the worker claims open pages, so the very first install already controls the page
@@ -15,6 +16,7 @@
  * Workbox is bundled into this file at build time; nothing is fetched from elsewhere.
  */
 import { cacheNames, setCacheNameDetails } from 'workbox-core';
+import { setTeamOrigin, teamOrigin } from './team-origin.js';
 import {
   cleanupOutdatedCaches,
   createHandlerBoundToURL,
@@ -62,10 +64,12 @@ precacheAndRoute(manifest);
 
 registerRoute(new NavigationRoute(createHandlerBoundToURL('index.html')));
 
-// Anything aimed at another origin fails here instead of going out on the network.
+// Anything aimed at another origin fails here instead of going out on the network — except
+// the team server this phone was set up with (sw/team-origin.ts).
 registerRoute(
   ({ url }) => url.origin !== self.location.origin,
-  () => Promise.resolve(Response.error()),
+  async ({ request, url }) =>
+    url.origin === (await teamOrigin()) ? fetch(request) : Response.error(),
 );
 
 self.addEventListener('message', (event: ExtendableMessageEvent) => {
@@ -76,6 +80,14 @@ self.addEventListener('message', (event: ExtendableMessageEvent) => {
     (data as { type?: unknown }).type === 'SKIP_WAITING'
   ) {
     void self.skipWaiting();
+  }
+  if (
+    typeof data === 'object' &&
+    data !== null &&
+    (data as { type?: unknown }).type === 'TEAM_ORIGIN'
+  ) {
+    const origin = (data as { origin?: unknown }).origin;
+    setTeamOrigin(typeof origin === 'string' ? origin : null);
   }
 });
 

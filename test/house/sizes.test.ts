@@ -4,7 +4,6 @@ import { join } from 'node:path';
 import { describe as suite, expect, it } from 'vitest';
 import { describe, measureSizes } from '../../scripts/house-sizes.mjs';
 
-
 /** A function whose text spans exactly `lines` lines, first to last. */
 function fn(name: string, lines: number): string {
   const body = Array.from({ length: lines - 2 }, (_, i) => `  const v${i} = ${i};`);

@@ -1,0 +1,56 @@
+/** Plainly invented records for the sync tests (not check values of any kind). */
+import type { CheckRecord, TankRecord } from '../../../components/types.js';
+
+export function tank(id: string, over: Partial<TankRecord> = {}): TankRecord {
+  return {
+    id,
+    site: 'Invented Yard',
+    name: `Test tank ${id}`,
+    notes: '',
+    nameplate: { waterCapacity: 1.9, designPressure: 1.72e6 },
+    productId: 'propane',
+    demo: false,
+    createdAt: '2026-06-01T08:00:00.000Z',
+    updatedAt: '2026-06-01T08:00:00.000Z',
+    ...over,
+  };
+}
+
+export function check(id: string, tankId: string, at = '2026-06-02T09:00:00.000Z'): CheckRecord {
+  return {
+    id,
+    tankId,
+    at,
+    readings: {
+      liquidTemperature: 293.15,
+      contentsMode: 'gaugePercent',
+      gaugePercent: 40,
+      levelHeight: null,
+      netMass: null,
+      gaugePressure: null,
+      peakAirTemperature: 308.15,
+      sunAllowance: 8,
+    },
+    productLabel: 'Propane',
+    summary: {
+      phase: 'two-phase',
+      pressure: 7e5,
+      totalMass: 400,
+      liquidVolume: 0.76,
+      fillingDensity: 0.2,
+      maxMass: 800,
+      roomLeftMass: 400,
+      stopAtGaugePercent: 80,
+      binding: 'weight',
+      peakTemperature: 316,
+      peakPressure: 1.3e6,
+      peakLiquidFraction: 0.45,
+      headroomToDesign: 4e5,
+      headroomToRelief: 3e5,
+      liquidFullTemperature: 340,
+      topLevel: null,
+      cautions: [],
+    },
+    demo: false,
+  };
+}
