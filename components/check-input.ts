@@ -199,7 +199,7 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
     binding: result.fillLimit.binding,
     peakTemperature: result.peak.temperature,
     peakPressure: result.peak.pGauge,
-    peakPressureUpper: result.peak.pGaugeUpper,
+    peakGaugeUpper: result.peak.pGaugeUpper,
     peakAllowance: result.peak.allowance,
     peakLiquidFraction: result.peak.liquidFraction,
     headroomToDesign: result.peak.headroomToDesign,

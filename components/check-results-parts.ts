@@ -230,8 +230,7 @@ export class ResultView {
           <dt>Peak pressure, absolute</dt>
           <dd>${d.format('pressure', p.pAbs, 'up')}</dd>
           <dt>
-            Relief setting${assumed ? ' (assumed)' : ''} reached at (pressure with the model's
-            allowance)
+            Relief setting${assumed ? ' (assumed)' : ''} reached at (with the model's allowance)
           </dt>
           <dd>
             ${

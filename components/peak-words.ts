@@ -45,9 +45,9 @@ export function upperSentence(u: UpperPeak, d: DisplayUnits): string {
   return `up to ${d.format('gaugePressure', u.upper, 'up')} allowing for the model's uncertainty${why}`;
 }
 
-/** The board's short form: "Up to 1788 psig with the model's 10 % margin". */
+/** The board's short form: "Up to 1788 psig allowing 10 % for model error". */
 export function upperShort(u: UpperPeak, d: DisplayUnits): string {
   if (u.upper === undefined) return '';
   const pct = u.allowance === undefined ? '' : ` ${Number((u.allowance * 100).toFixed(1))} %`;
-  return `Up to ${d.format('gaugePressure', u.upper, 'up')} with the model's${pct} margin`;
+  return `Up to ${d.format('gaugePressure', u.upper, 'up')} allowing${pct} for model error`;
 }

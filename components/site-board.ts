@@ -259,7 +259,7 @@ export class SiteBoard extends LitElement {
       data-tank-id=${row.tank.id}
       data-level=${row.level}
       data-si-headroom-relief=${relief}
-      data-si-peak-upper=${String(row.summary?.peakPressureUpper ?? '')}
+      data-si-peak-upper=${String(row.summary?.peakGaugeUpper ?? '')}
       data-si-liquid-full-margin=${full}
     >
       <button

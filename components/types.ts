@@ -91,7 +91,7 @@ export interface CheckSummary {
    * Pa gauge (rounded up): the peak raised by the model's allowance, the figure both headrooms are
    * measured from (`PeakResult.pGaugeUpper`). Absent in checks saved before it was kept.
    */
-  peakPressureUpper?: number;
+  peakGaugeUpper?: number;
   /** The allowance that raised it, fraction of the absolute pressure. Absent in older checks. */
   peakAllowance?: number;
   /** fraction 0…1 */

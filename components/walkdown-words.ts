@@ -69,16 +69,16 @@ export function upperOf(r: WalkResult): UpperPeak {
   const s = r.summary;
   return {
     peak: s.peakPressure,
-    upper: s.peakPressureUpper,
+    upper: s.peakGaugeUpper,
     allowance: s.peakAllowance,
     phase: r.peakPhase,
   };
 }
 
-/** "Up to 1788 psig with the model's 10 % margin: " when that shows apart from the peak, else ''. */
+/** "Up to 1788 psig allowing 10 % for model error: to" when that shows apart from the peak, else "To". */
 function upperLead(r: WalkResult, d: DisplayUnits): string {
   const u = upperOf(r);
-  return upperDiffers(u, d) ? `${upperShort(u, d)}: ` : '';
+  return upperDiffers(u, d) ? `${upperShort(u, d)}: to` : 'To';
 }
 
 /**
@@ -89,7 +89,7 @@ export function resultLines(r: WalkResult, d: DisplayUnits): string[] {
   const s = r.summary;
   return [
     `Peak ${d.format('gaugePressure', s.peakPressure, 'up')} at ${d.format('temperature', r.peakTemperature)} liquid`,
-    `${upperLead(r, d)}To relief ${headroomText(s.headroomToRelief, d)} · to design ${headroomText(s.headroomToDesign, d)}`,
+    `${upperLead(r, d)} relief ${headroomText(s.headroomToRelief, d)} · to design ${headroomText(s.headroomToDesign, d)}`,
     r.peakPhase === 'supercritical' || r.peakPhase === 'vapour-only'
       ? `No liquid surface at the peak (${r.peakPhase === 'supercritical' ? 'above the critical temperature' : 'vapour only'}) · liquid-full ${marginText(r.liquidFullMargin, d)}`
       : `Liquid ${formatPercent(r.peakLiquidPercent, 'up')} at the peak · liquid-full ${marginText(r.liquidFullMargin, d)}`,

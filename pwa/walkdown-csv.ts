@@ -82,7 +82,7 @@ function entryRow(w: WalkdownRecord, e: WalkEntry, rank: number, d: DisplayUnits
         .map((c) => `${c.level}: ${cautionText(c, d)}`)
         .join(' | '),
     ),
-    n('gaugePressure', s?.peakPressureUpper, 'up'),
+    n('gaugePressure', s?.peakGaugeUpper, 'up'),
   ];
 }
 

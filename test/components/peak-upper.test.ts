@@ -107,7 +107,7 @@ describe('peak and its raised figure', () => {
     expect(Number(li.dataset.siPeakUpper)).to.equal(row.result!.peak.pGaugeUpper);
     const text = li.textContent!.replace(/\s+/g, ' ');
     const peak = /Peak (\d+) psig/.exec(text);
-    const up = /Up to (\d+) psig with the model's 10 % margin: To relief/.exec(text);
+    const up = /Up to (\d+) psig allowing 10 % for model error: to relief/.exec(text);
     expect(peak, text).to.not.equal(null);
     expect(up, text).to.not.equal(null);
     expect(Number(up![1])).to.be.greaterThan(Number(peak![1]));
