@@ -102,7 +102,7 @@ export function checksToCsv(tanks: TankRecord[], checks: CheckRecord[], d: Displ
         n('temperature', s.liquidFullTemperature, 'down'),
         cell(top ? `${top.level}: ${top.message}` : ''),
         c.demo ? 'yes' : 'no',
-        n('gaugePressure', s.peakGaugeUpper, 'up'),
+        n('gaugePressure', s.peakGaugeUpper ?? null, 'up'),
       ];
     });
   return [head.map(cell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';
