@@ -199,6 +199,8 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
     binding: result.fillLimit.binding,
     peakTemperature: result.peak.temperature,
     peakPressure: result.peak.pGauge,
+    peakGaugeUpper: result.peak.pGaugeUpper,
+    peakAllowance: result.peak.allowance,
     peakLiquidFraction: result.peak.liquidFraction,
     headroomToDesign: result.peak.headroomToDesign,
     headroomToRelief: result.peak.headroomToRelief,

@@ -3,6 +3,7 @@
  * the gauge diagnosis. They render inside the element's shadow root, so every data-testid and
  * heading id is the element's own.
  */
+import { allowanceText } from './peak-words.js';
 import { html, nothing, type TemplateResult } from 'lit';
 import { formatPercent, type DisplayUnits, type Quantity, type Rounding } from './display.js';
 import type { Caution, TankCheckResult } from '../thermo/check/types.js';
@@ -118,6 +119,14 @@ export class ResultView {
           <p>
             at a liquid temperature of ${this.fig('peak-temperature', 'temperature', p.temperature)}
           </p>
+          <p class="note">
+            Up to
+            <strong
+              >${this.fig('peak-pressure-upper', 'gaugePressure', p.pGaugeUpper, 'up')}</strong
+            >
+            allowing for the model's uncertainty (${allowanceText(p.allowance, p.phase)}): both
+            headrooms are measured from this figure.
+          </p>
           <dl>
             <dt>
               Headroom to relief
@@ -220,7 +229,9 @@ export class ResultView {
           <dd>${phaseWords(p.phase, p.full)}</dd>
           <dt>Peak pressure, absolute</dt>
           <dd>${d.format('pressure', p.pAbs, 'up')}</dd>
-          <dt>Relief setting${assumed ? ' (assumed)' : ''} reached at</dt>
+          <dt>
+            Relief setting${assumed ? ' (assumed)' : ''} reached at (with the model's allowance)
+          </dt>
           <dd>
             ${
               r.cautions.some((c) => c.code === 'relief-now')

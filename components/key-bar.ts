@@ -13,6 +13,7 @@ import { LitElement, html, css, nothing, type TemplateResult } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
+import { upperDiffers } from './peak-words.js';
 import { baseLabel, keyFigures, keyWords } from './key-figures.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
 
@@ -146,7 +147,16 @@ export class KeyBar extends LitElement {
         </div>
       </div>
       <p class="peak" data-testid="key-peak" data-si=${String(k.headroomToRelief)}>
-        Peak ${d.format('gaugePressure', k.peakPressure, 'up')} · ${relief}
+        Peak
+        ${
+          upperDiffers(k.peakUpper, d)
+            ? html`${d.number('gaugePressure', k.peakPressure, 'up')}, up to
+                <span data-testid="key-peak-upper" data-si=${String(k.peakUpper.upper)}
+                  >${d.format('gaugePressure', k.peakUpper.upper!, 'up')}</span
+                >`
+            : d.format('gaugePressure', k.peakPressure, 'up')
+        }
+        · ${relief}
         ${
           top
             ? html`<span class="level ${top.level}" data-testid="key-level">${top.level}</span

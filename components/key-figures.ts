@@ -4,6 +4,7 @@
  * (60 °F, or 15 °C when temperatures are shown in °C) and as mass, and the peak-day headroom.
  * Rounded toward safety: the stop-at percent and the room left down, an excess up.
  */
+import { upperDiffers, upperSentence, type UpperPeak } from './peak-words.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
 import { T_15C_K, T_60F_K } from '../thermo/constants.js';
 import { formatPercent, type DisplayUnits } from './display.js';
@@ -28,6 +29,8 @@ export interface KeyFigures {
   /** Peak-day pressure, Pa gauge; headroom to the relief setting, Pa (negative when exceeded). */
   peakPressure: number;
   headroomToRelief: number;
+  /** The peak raised by the model's allowance, the figure the headroom is measured from (Pa gauge, its allowance and the phase at the peak). */
+  peakUpper: UpperPeak;
 }
 
 /** The base temperature of liquid volumes in the user's units: 15 °C in °C, else 60 °F. */
@@ -54,6 +57,12 @@ export function keyFigures(r: TankCheckResult, d: DisplayUnits): KeyFigures {
     reliefAssumed: r.cautions.some((c) => c.code === 'relief-assumed'),
     peakPressure: r.peak.pGauge,
     headroomToRelief: r.peak.headroomToRelief,
+    peakUpper: {
+      peak: r.peak.pGauge,
+      upper: r.peak.pGaugeUpper,
+      allowance: r.peak.allowance,
+      phase: r.peak.phase,
+    },
   };
 }
 
@@ -63,7 +72,7 @@ export interface KeyWords {
   stop: string;
   /** "Room left 112 US gal as liquid at 60 °F (470.5 lb)" or "Over the limit by 55 US gal as liquid at 60 °F (231 lb)" */
   room: string;
-  /** "Peak day 205 psig; headroom to relief 45 psi" or "…; relief setting exceeded by 12 psi" */
+  /** "Peak day 205 psig; headroom to relief 45 psi" or "…; relief setting exceeded by 12 psi"; with "up to …" after the peak when the raised figure shows differently. */
   peak: string;
 }
 
@@ -75,9 +84,11 @@ export function keyWords(k: KeyFigures, d: DisplayUnits): KeyWords {
   const room = k.over
     ? `Over the limit by ${d.format('volume', -k.roomLeftVolume, 'up')} as liquid at ${base} (${d.format('mass', -k.roomLeftMass, 'up')})`
     : `Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at ${base} (${d.format('mass', k.roomLeftMass, 'down')})`;
+  const upper = upperDiffers(k.peakUpper, d) ? `, ${upperSentence(k.peakUpper, d)}` : '';
+  const peakDay = `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}${upper}`;
   const peak =
     k.headroomToRelief < 0
-      ? `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; relief setting${k.reliefAssumed ? ' (assumed)' : ''} exceeded by ${d.format('pressureDifference', -k.headroomToRelief, 'up')}`
-      : `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}; headroom to relief${k.reliefAssumed ? ' (assumed)' : ''} ${d.format('pressureDifference', k.headroomToRelief, 'down')}`;
+      ? `${peakDay}; relief setting${k.reliefAssumed ? ' (assumed)' : ''} exceeded by ${d.format('pressureDifference', -k.headroomToRelief, 'up')}`
+      : `${peakDay}; headroom to relief${k.reliefAssumed ? ' (assumed)' : ''} ${d.format('pressureDifference', k.headroomToRelief, 'down')}`;
   return { stop, room, peak };
 }

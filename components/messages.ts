@@ -40,8 +40,8 @@ export const CAUTION_WORDS: Record<CautionCode, Entry> = {
     `The tank is liquid-full now at ${f('temperature')}: there is no vapour space, and the pressure rises steeply with any warming. The contents are ${f('fillingDensity')} of the water weight capacity.`,
   'dense-fluid-now': (f) =>
     `The tank is full of dense fluid now. At ${f('temperature')} the product is above its critical temperature (${f('criticalTemperature')}), and the contents (${f('fillingDensity')} of the water weight capacity) are too dense to leave any vapour space: the pressure rises as steeply with warming as in a liquid-full tank.`,
-  'relief-now': (f) =>
-    `The expected pressure now, ${f('pressure')}, is at or near the relief valve setting ${f('relief')}: the relief valve may be discharging.`,
+  'relief-now': (f, p) =>
+    `The expected pressure now, ${f('pressure')}${p['upper'] ? ` (up to ${f('upper')} allowing for the model's uncertainty)` : ''}, is at or near the relief valve setting ${f('relief')}: the relief valve may be discharging.`,
   'supercritical-now': (f) =>
     `At ${f('temperature')} the product is above its critical temperature (${f('criticalTemperature')}): there is no liquid surface, so a level or float gauge means nothing; only the weight tells the contents.`,
   'co2-below-triple-point': (f) =>

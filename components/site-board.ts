@@ -14,7 +14,8 @@
  * @fires walk-open - `CustomEvent<{ id: string }>`: show a past walkdown's record.
  *
  * data-testid: `walkdown-forecast-air`, `walkdown-sun`, `walkdown-add-day`, `walkdown-row` (with
- * `data-tank-id`, `data-level`, `data-si-headroom-relief` (Pa), `data-si-liquid-full-margin` (K,
+ * `data-tank-id`, `data-level`, `data-si-headroom-relief` (Pa), `data-si-peak-upper` (Pa gauge, the
+ * raised peak the headrooms are measured from), `data-si-liquid-full-margin` (K,
  * empty when none)), `walkdown-row-pending` (a tank still being worked out, with
  * `data-tank-id`), `walkdown-board-unranked`, `walkdown-board-progress`, `walkdown-begin`,
  * `walkdown-begin-route` (when a route is set), `walkdown-route-edit`, `walkdown-resume`;
@@ -258,6 +259,7 @@ export class SiteBoard extends LitElement {
       data-tank-id=${row.tank.id}
       data-level=${row.level}
       data-si-headroom-relief=${relief}
+      data-si-peak-upper=${String(row.summary?.peakGaugeUpper ?? '')}
       data-si-liquid-full-margin=${full}
     >
       <button

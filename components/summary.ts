@@ -9,6 +9,7 @@ import { stopPlace } from './fill-words.js';
 import { cautionText } from './messages.js';
 import type { Readings, TankRecord } from './types.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
+import { upperSentence } from './peak-words.js';
 import { keyFigures, keyWords } from './key-figures.js';
 import { whenText } from './reopen.js';
 
@@ -58,7 +59,7 @@ export function summaryText(
     `Fill limit: ${d.format('mass', f.maxMass, 'down')}`,
     `Where the stop is read: ${stopPlace(f)}`,
     ...(f.bindingNote ? [`Why: ${f.bindingNote}`] : []),
-    `Peak day (${d.format('temperature', p.temperature)}): ${d.format('gaugePressure', p.pGauge, 'up')}; headroom to relief ${headroom(p.headroomToRelief, d)}, to design ${headroom(p.headroomToDesign, d)}`,
+    `Peak day (${d.format('temperature', p.temperature)}): ${d.format('gaugePressure', p.pGauge, 'up')}, ${upperSentence({ peak: p.pGauge, upper: p.pGaugeUpper, allowance: p.allowance, phase: p.phase }, d)}; measured from that, headroom to relief ${headroom(p.headroomToRelief, d)}, to design ${headroom(p.headroomToDesign, d)}`,
     `Liquid-full at: ${result.liquidFullTemperature === null ? 'not reached' : d.format('temperature', result.liquidFullTemperature, 'down')}`,
     '',
     ranked.length ? 'Cautions:' : 'No further cautions from these figures.',

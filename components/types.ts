@@ -87,6 +87,13 @@ export interface CheckSummary {
   peakTemperature: number;
   /** Pa gauge (rounded up) */
   peakPressure: number;
+  /**
+   * Pa gauge (rounded up): the peak raised by the model's allowance, the figure both headrooms are
+   * measured from (`PeakResult.pGaugeUpper`). Absent in checks saved before it was kept.
+   */
+  peakGaugeUpper?: number;
+  /** The allowance that raised it, fraction of the absolute pressure. Absent in older checks. */
+  peakAllowance?: number;
   /** fraction 0…1 */
   peakLiquidFraction: number;
   /** Pa (negative when exceeded) */

@@ -8,11 +8,12 @@
  * data-testid: `walkdown-report`, `walkdown-report-row` (with `data-tank-id`), `walkdown-print`,
  * `walkdown-share`, `walkdown-csv`, `walkdown-share-done`.
  */
+import { upperDiffers } from './peak-words.js';
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent } from './display.js';
 import { DEFAULT_SETTINGS } from './types.js';
-import { progress, type WalkdownRecord } from './walkdown-types.js';
+import { progress, type WalkResult, type WalkdownRecord } from './walkdown-types.js';
 import {
   LEVEL_SHAPES,
   LEVEL_WORDS,
@@ -21,6 +22,7 @@ import {
   forecastText,
   rankedEntries,
   resultLines,
+  upperOf,
   walkdownText,
 } from './walkdown-words.js';
 import { formatDate } from './format-date.js';
@@ -185,7 +187,9 @@ export class WalkdownReport extends LitElement {
     return html`<div class="wrap">
       <table>
         <caption>
-          Tanks, worst first at the forecast (liquid and degrees to liquid-full at the peak)
+          Tanks, worst first at the forecast (liquid and degrees to liquid-full at the peak; the
+          headroom is measured from the peak with the model's allowance, "up to" where it shows
+          apart)
         </caption>
         <thead>
           <tr>
@@ -208,7 +212,7 @@ export class WalkdownReport extends LitElement {
               ${
                 r
                   ? html` <td class="n">
-                        ${d.number('gaugePressure', r.summary.peakPressure, 'up')}
+                        ${d.number('gaugePressure', r.summary.peakPressure, 'up')}${upperCell(r, d)}
                       </td>
                       <td class="n">${shortHeadroom(r.summary.headroomToRelief, d)}</td>
                       <td class="n">
@@ -314,6 +318,15 @@ export class WalkdownReport extends LitElement {
 /** No liquid surface at the peak: the liquid percent means nothing there. */
 function noLiquid(phase: string | undefined): boolean {
   return phase === 'supercritical' || phase === 'vapour-only';
+}
+
+/** "up to N" under the peak when the raised figure the headroom is taken from shows apart. */
+function upperCell(r: WalkResult, d: DisplayUnits) {
+  const u = upperOf(r);
+  if (!upperDiffers(u, d)) return nothing;
+  return html`<br /><span data-testid="report-peak-upper" data-si=${String(u.upper)}
+      >up to ${d.number('gaugePressure', u.upper!, 'up')}</span
+    >`;
 }
 
 /** A headroom as a bare number (rounded down), or "over N" (rounded up) when exceeded. */

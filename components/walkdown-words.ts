@@ -3,6 +3,7 @@
  * alone), the figures of a row in the user's units rounded toward safety, the age of readings,
  * and the walkdown as shareable text. Plain module; the elements and the CSV use it.
  */
+import { upperDiffers, upperShort, type UpperPeak } from './peak-words.js';
 import type { DisplayUnits } from './display.js';
 import { formatPercent } from './display.js';
 import type { BoardLevel } from './walkdown-board.js';
@@ -63,12 +64,32 @@ export function cautionText(c: Caution, d: DisplayUnits): string {
   return messageText(c, d);
 }
 
-/** The figure lines of one projected tank. */
+/** The peak as a walkdown keeps it, with its raised figure (absent in older records). */
+export function upperOf(r: WalkResult): UpperPeak {
+  const s = r.summary;
+  return {
+    peak: s.peakPressure,
+    upper: s.peakGaugeUpper,
+    allowance: s.peakAllowance,
+    phase: r.peakPhase,
+  };
+}
+
+/** "Up to 1788 psig allowing 10 % for model error: to" when that shows apart from the peak, else "To". */
+function upperLead(r: WalkResult, d: DisplayUnits): string {
+  const u = upperOf(r);
+  return upperDiffers(u, d) ? `${upperShort(u, d)}: to` : 'To';
+}
+
+/**
+ * The figure lines of one projected tank. The headrooms are measured from the peak raised by the
+ * model's allowance; that figure leads the headroom line whenever it shows apart from the peak.
+ */
 export function resultLines(r: WalkResult, d: DisplayUnits): string[] {
   const s = r.summary;
   return [
     `Peak ${d.format('gaugePressure', s.peakPressure, 'up')} at ${d.format('temperature', r.peakTemperature)} liquid`,
-    `To relief ${headroomText(s.headroomToRelief, d)} · to design ${headroomText(s.headroomToDesign, d)}`,
+    `${upperLead(r, d)} relief ${headroomText(s.headroomToRelief, d)} · to design ${headroomText(s.headroomToDesign, d)}`,
     r.peakPhase === 'supercritical' || r.peakPhase === 'vapour-only'
       ? `No liquid surface at the peak (${r.peakPhase === 'supercritical' ? 'above the critical temperature' : 'vapour only'}) · liquid-full ${marginText(r.liquidFullMargin, d)}`
       : `Liquid ${formatPercent(r.peakLiquidPercent, 'up')} at the peak · liquid-full ${marginText(r.liquidFullMargin, d)}`,

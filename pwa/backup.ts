@@ -213,6 +213,8 @@ function validateSummary(s: unknown, where: string): CheckSummary {
     num(s, k, w, -1e12, 1e12);
   }
   str(s, 'binding', w);
+  if (s.peakGaugeUpper !== undefined) num(s, 'peakGaugeUpper', w, -1e12, 1e12);
+  if (s.peakAllowance !== undefined) num(s, 'peakAllowance', w, 0, 1);
   nullableNum(s, 'liquidFullTemperature', w, 0, 1000);
   if (s.topLevel !== null) oneOf(s, 'topLevel', w, LEVELS);
   if (!Array.isArray(s.cautions)) fail(w, '“cautions” must be a list');

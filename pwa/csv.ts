@@ -66,6 +66,7 @@ export function checksToCsv(tanks: TankRecord[], checks: CheckRecord[], d: Displ
     `liquid-full at (${L('temperature')})`,
     'most severe caution',
     'demo',
+    `peak raised by the model allowance, the headrooms measured from it (${L('gaugePressure')}, rounded up)`,
   ];
   const rows = [...checks]
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
@@ -101,6 +102,7 @@ export function checksToCsv(tanks: TankRecord[], checks: CheckRecord[], d: Displ
         n('temperature', s.liquidFullTemperature, 'down'),
         cell(top ? `${top.level}: ${top.message}` : ''),
         c.demo ? 'yes' : 'no',
+        n('gaugePressure', s.peakGaugeUpper ?? null, 'up'),
       ];
     });
   return [head.map(cell), ...rows].map((r) => r.join(',')).join('\r\n') + '\r\n';

@@ -41,6 +41,7 @@ function header(d: DisplayUnits): string[] {
     `margin to liquid-full (${L('temperatureDifference')}, rounded down)`,
     'level',
     'cautions',
+    `peak raised by the model allowance, the headrooms measured from it (${L('gaugePressure')}, rounded up)`,
   ];
 }
 
@@ -81,6 +82,7 @@ function entryRow(w: WalkdownRecord, e: WalkEntry, rank: number, d: DisplayUnits
         .map((c) => `${c.level}: ${cautionText(c, d)}`)
         .join(' | '),
     ),
+    n('gaugePressure', s?.peakGaugeUpper, 'up'),
   ];
 }
 

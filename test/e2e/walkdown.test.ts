@@ -109,6 +109,7 @@ interface Row {
   id: string;
   level: string;
   relief: string;
+  upper: string;
   full: string;
 }
 
@@ -118,6 +119,7 @@ function rows(page: Page): Promise<Row[]> {
       id: (e as HTMLElement).dataset.tankId!,
       level: (e as HTMLElement).dataset.level!,
       relief: (e as HTMLElement).dataset.siHeadroomRelief!,
+      upper: (e as HTMLElement).dataset.siPeakUpper!,
       full: (e as HTMLElement).dataset.siLiquidFullMargin!,
     })),
   );
@@ -147,6 +149,11 @@ describe('site walkdown', () => {
       expect(
         Math.abs(Number(row.relief) - e.res.peak.headroomToRelief),
         `${t.name}: headroom to relief`,
+      ).toBeLessThanOrEqual(100);
+      // The raised peak the headroom is measured from (rounded up to 100 Pa; same one step).
+      expect(
+        Math.abs(Number(row.upper) - e.res.peak.pGaugeUpper),
+        `${t.name}: raised peak`,
       ).toBeLessThanOrEqual(100);
       if (e.full === null) expect(row.full).toBe('');
       // Identity within the solvers' convergence: the board's worker and this process reach the
@@ -193,6 +200,19 @@ describe('site walkdown', () => {
     await byTestId(page, 'walkdown-report').waitFor();
     expect(await byTestId(page, 'walkdown-report-row').count()).toBe(siteTanks.length);
     const text = await byTestId(page, 'walkdown-report').textContent();
+    // Where the report prints "up to" under a peak, it is that tank's raised peak.
+    const uppers = await page
+      .locator('[data-testid="walkdown-report-row"]:has([data-testid="report-peak-upper"])')
+      .evaluateAll((els) =>
+        els.map((e) => ({
+          id: (e as HTMLElement).dataset.tankId!,
+          si: Number(e.querySelector<HTMLElement>('[data-testid="report-peak-upper"]')!.dataset.si),
+        })),
+      );
+    for (const u of uppers) {
+      const w = want.find((x) => x.row.id === u.id)!;
+      expect(Math.abs(u.si - w.e.res.peak.pGaugeUpper), w.t.name).toBeLessThanOrEqual(100);
+    }
     for (const { t } of want) expect(text).toContain(t.name);
     expect(text).toContain('Gate locked');
     expect(text).toContain('Test Walker');

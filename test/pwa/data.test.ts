@@ -48,6 +48,7 @@ function check(id: string, tankId: string): CheckRecord {
       binding: 'rule',
       peakTemperature: 303.15,
       peakPressure: 9e5,
+      peakGaugeUpper: 9.045e5,
       peakLiquidFraction: 0.55,
       headroomToDesign: 1e5,
       headroomToRelief: -2e4,
@@ -265,6 +266,9 @@ describe('checksToCsv', () => {
     expect(lines[1]).to.contain('"warning: A warning, with ""quotes"""');
     expect(lines[1]).to.contain(',20.0,'); // 293.15 K = 20.0 °C
     expect(lines[1]).to.contain(',-20,'); // headroom to relief, kPa, rounded down
+    // Last column: the raised peak the headrooms are measured from, gauge, rounded up (904.5 → 905).
+    expect(lines[0]).to.match(/peak raised by the model allowance.*\(kPa g, rounded up\)"$/);
+    expect(lines[1]).to.match(/,905$/);
     expect(csv).not.to.contain('NaN');
   });
 });

@@ -34,8 +34,8 @@ describe('checkTank peak headroom', () => {
     const r = checkTank(input(60, 100));
     expect(r.peak.phase).toBe('two-phase');
     const raised = r.peak.pAbs * (1 + VAPOUR_PRESSURE_ALLOWANCE) - P_ATM_Pa;
-    // floored to the engine's pressure step (at most 100 Pa here): identity within that step.
-    expect(Math.abs(250 * PSI - raised - r.peak.headroomToDesign)).toBeLessThan(100);
+    // raised peak rounded up, headroom rounded down (100 Pa steps): identity within two steps.
+    expect(Math.abs(250 * PSI - raised - r.peak.headroomToDesign)).toBeLessThan(200);
     expect(r.peak.headroomToDesign).toBeLessThanOrEqual(250 * PSI - raised);
   });
 

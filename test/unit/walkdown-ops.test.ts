@@ -156,6 +156,18 @@ describe('walkdown CSV', () => {
       r.summary.headroomToRelief + 1e-6,
     );
     expect(Number(col('peak pressure')) * PSI - r.summary.peakPressure).toBeLessThan(PSI);
+    // The raised peak, last column, names gauge; shown rounded up, and the headroom to design
+    // shown (rounded down) reconciles with design − raised peak as printed, within 1 psi.
+    expect(head[head.length - 1]).toMatch(
+      /^peak raised by the model allowance.*\(psig, rounded up\)$/,
+    );
+    const upper = Number(row[row.length - 1]);
+    expect(upper * PSI).toBeGreaterThanOrEqual(r.summary.peakGaugeUpper! - 1e-6);
+    expect(upper * PSI - r.summary.peakGaugeUpper!).toBeLessThan(PSI);
+    expect(upper).toBeGreaterThanOrEqual(Number(col('peak pressure')));
+    const fromUpper = Number(col('design pressure')) - upper;
+    expect(Number(col('headroom to design'))).toBeLessThanOrEqual(fromUpper + 1e-9);
+    expect(Number(col('headroom to design'))).toBeGreaterThan(fromUpper - 2);
     expect(csv).toContain("'=SUM(A1)");
     expect(csv).toContain('Locked gate');
   });

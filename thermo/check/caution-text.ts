@@ -48,7 +48,7 @@ const TEXT: Record<CautionCode, (f: Fmt, p: MessageParams) => string> = {
   'dense-fluid-now': (f) =>
     `The tank is full of dense fluid now: at ${f('temperature')}, above the critical temperature ${f('criticalTemperature')}, the contents (${f('fillingDensity')} of the water weight capacity) are denser than the critical density. There is no vapour space, and the pressure rises as steeply with warming as in a liquid-full tank.`,
   'relief-now': (f) =>
-    `The expected pressure now, ${f('pressure')}, is at or near the relief set pressure ${f('relief')} (with the model allowance): the relief valve may be discharging.`,
+    `The expected pressure now, ${f('pressure')} (up to ${f('upper')} with the model allowance), is at or near the relief set pressure ${f('relief')}: the relief valve may be discharging.`,
   'supercritical-now': (f) =>
     `The liquid temperature ${f('temperature')} is above the critical temperature ${f('criticalTemperature')}: there is no liquid surface, so a level or float gauge means nothing; only the weight tells the contents.`,
   'co2-below-triple-point': (f) =>

@@ -87,7 +87,11 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
     });
   // Reached now: the expected pressure, or the same raised by its allowance (relief temperature).
   if (r.pGauge >= c.reliefSetPressure || r.reliefTemperature === c.T)
-    add('danger', 'relief-now', { pressure: G(r.pGauge, 'up'), relief: G(c.reliefSetPressure) });
+    add('danger', 'relief-now', {
+      pressure: G(r.pGauge, 'up'),
+      upper: G(r.pGaugeUpper, 'up'),
+      relief: G(c.reliefSetPressure),
+    });
   if (r.phase === 'supercritical')
     add('warning', 'supercritical-now', { temperature: T(c.T), criticalTemperature: Tc });
   const readingAbs = c.gaugePressure === null ? null : c.gaugePressure + baro;

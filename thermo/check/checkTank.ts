@@ -115,6 +115,7 @@ function check(input: TankCheckInput): TankCheckResult {
     full: fullKind(now, rho, b.rhoc),
     pGauge: ceilTo(now.pAbs - c.baro, P_STEP),
     pAbs: now.pAbs,
+    pGaugeUpper: ceilTo(now.pAbs * (1 + pressureAllowance(now, rho, b.rhoc)) - c.baro, P_STEP),
     barometricPressure: c.baro,
     product: productSummary(b, lpGas, sg, c.specificGravity === null),
     contents: contentsOf(now, c, rho, shape, b.rho60),
@@ -126,8 +127,9 @@ function check(input: TankCheckInput): TankCheckResult {
     cautions: [],
     standingCaution: STANDING_CAUTION,
   };
-  const peakAllowance = pressureAllowance(peakState, rho, b.rhoc);
-  const peakRaised = peakState.pAbs * (1 + peakAllowance) - c.baro;
+  // The cautions quote the same raised peak the headrooms are measured from.
+  const peakAllowance = peak.allowance;
+  const peakRaised = peak.pGaugeUpper;
   result.cautions = buildCautions(result, {
     input,
     clean: c,
@@ -304,15 +306,19 @@ function netMassCap(model: ProductModel, c: CleanInput): number {
 }
 
 function buildPeak(s: State, c: CleanInput, rho: number, rhoc: number): PeakResult {
-  const raised = s.pAbs * (1 + pressureAllowance(s, rho, rhoc)) - c.baro;
+  const allowance = pressureAllowance(s, rho, rhoc);
+  // Both headrooms are taken from the rounded-up raised peak, so design − pGaugeUpper is exact.
+  const pGaugeUpper = ceilTo(s.pAbs * (1 + allowance) - c.baro, P_STEP);
   return {
     temperature: c.Tpeak,
     phase: s.phase,
     full: fullKind(s, rho, rhoc),
     pGauge: ceilTo(s.pAbs - c.baro, P_STEP),
     pAbs: s.pAbs,
+    pGaugeUpper,
+    allowance,
     liquidFraction: s.lf,
-    headroomToDesign: floorTo(c.designPressure - raised, P_STEP),
-    headroomToRelief: floorTo(c.reliefSetPressure - raised, P_STEP),
+    headroomToDesign: floorTo(c.designPressure - pGaugeUpper, P_STEP),
+    headroomToRelief: floorTo(c.reliefSetPressure - pGaugeUpper, P_STEP),
   };
 }

@@ -263,13 +263,24 @@ export interface PeakResult {
   full: FullKind | null;
   /** Expected pressure at the peak, Pa gauge (rounded up to 100 Pa). */
   pGauge: number;
-  /** Same, Pa absolute. */
+  /** Same, Pa absolute (not rounded). */
   pAbs: number;
+  /**
+   * The peak raised by the model's allowance, the figure both headrooms are measured from, Pa
+   * gauge (rounded up to 100 Pa): `pAbs × (1 + allowance) −` barometric pressure. A reader who
+   * sees the peak and a headroom needs this figure to reconcile them.
+   */
+  pGaugeUpper: number;
+  /**
+   * The allowance the peak was raised by, fraction of the absolute pressure (rules/allowance.ts):
+   * `liquidFullPressure` when full (liquid or dense fluid) at the peak, else `vapourPressure`.
+   */
+  allowance: number;
   /** Liquid volume ÷ tank volume at the peak, fraction 0…1. */
   liquidFraction: number;
-  /** Design pressure − peak pressure raised by the model's vapour-pressure allowance, Pa (rounded down; negative when exceeded). */
+  /** Design pressure − `pGaugeUpper`, Pa (rounded down to 100 Pa; negative when exceeded). */
   headroomToDesign: number;
-  /** Relief set pressure − the same raised peak pressure, Pa (rounded down; negative when exceeded). */
+  /** Relief set pressure − `pGaugeUpper`, Pa (rounded down to 100 Pa; negative when exceeded). */
   headroomToRelief: number;
 }
 
@@ -306,6 +317,11 @@ export interface TankCheckResult {
   pGauge: number;
   /** Expected pressure now, Pa absolute. */
   pAbs: number;
+  /**
+   * Expected pressure now raised by the model's allowance (as `PeakResult.pGaugeUpper`), Pa gauge
+   * (rounded up to 100 Pa): the figure the `relief-now` caution and `reliefTemperature` use.
+   */
+  pGaugeUpper: number;
   /** The barometric pressure used, Pa absolute. */
   barometricPressure: number;
   product: ProductSummary;
