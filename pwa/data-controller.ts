@@ -6,7 +6,6 @@ import type { ReactiveController, ReactiveControllerHost } from 'lit';
 import { DisplayUnits } from '../components/display.js';
 import type { CheckRecord, Settings, TankRecord } from '../components/types.js';
 import type { FillRecord } from '../components/fill-types.js';
-import { BACKUP_MAX_BYTES, makeBackup, parseBackup } from './backup.js';
 import { checksToCsv } from './csv.js';
 import { fillsToCsv } from './fill-csv.js';
 import { download, stamp } from './download.js';
@@ -55,6 +54,8 @@ export class DataController implements ReactiveController {
   readonly exportBackup = async (): Promise<void> => {
     const store = this.app.store();
     if (!store) return;
+    // The backup module validates fills with the engine: loaded on use, not with the app shell.
+    const { makeBackup } = await import('./backup.js');
     const backup = makeBackup(await store.exportAll());
     download(
       `tankside-backup-${stamp()}.json`,
@@ -67,6 +68,7 @@ export class DataController implements ReactiveController {
   readonly importFile = async (file: File): Promise<void> => {
     const store = this.app.store();
     if (!store) return;
+    const { BACKUP_MAX_BYTES, parseBackup } = await import('./backup.js');
     if (file.size > BACKUP_MAX_BYTES) {
       this._say(
         'This file is too large to be a backup from this app. Nothing was changed.',
