@@ -255,4 +255,20 @@ describe('bisectBoundary', () => {
     // [1, 2] holds 2^52 doubles: 52 halvings bring it to one spacing.
     expect(r.iterations).toBe(52);
   });
+
+  it('stops when the midpoint of neighbouring doubles rounds up to the upper end (√5)', () => {
+    // Near √5 the last `lo` has an odd significand, so 0.5·(lo + hi) rounds (to even) onto hi.
+    const r = bisectBoundary((x) => x * x < 5, 1, 3, 0);
+    expect(r.x * r.x).toBeLessThan(5);
+    checkClose({
+      what: '√5 boundary at xTol 0',
+      input: 'x² < 5 on [1, 3]',
+      actual: r.x,
+      expected: Math.sqrt(5),
+      atol: 9e-16,
+      kind: 'published',
+      source: 'closed form √5 (Math.sqrt is correctly rounded, IEEE 754)',
+      why: 'two units in the last place at 2.2',
+    });
+  });
 });
