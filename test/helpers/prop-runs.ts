@@ -7,3 +7,11 @@ export function propRuns(full: number): number {
   const cap = Number(process.env.PROP_RUNS);
   return Number.isInteger(cap) && cap > 0 ? Math.min(full, cap) : full;
 }
+
+/**
+ * A floor on how many of a property's cases reached some state, scaled to the cases actually run:
+ * `floor` out of `full` when the count is not capped.
+ */
+export function propShare(full: number, floor: number): number {
+  return (floor * propRuns(full)) / full;
+}
