@@ -102,7 +102,7 @@ describe('bracketedRoot', () => {
     for (const [a, b] of [
       [1, -3],
       [-3, 1],
-    ]) {
+    ] as const) {
       const r = bracketedRoot((x) => x - 0.75, a, b, { name: 'end', fTol: 0.25 });
       expect(r.x).toBe(1);
       expect(r.iterations).toBe(0);

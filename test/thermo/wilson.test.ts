@@ -63,21 +63,22 @@ describe('wilsonK', () => {
         { id: 'n-butane', moleFraction: 0.4 },
       ],
     });
-    const T = 0.7 * product.components[0].Tc;
-    const K = wilsonK(product, T, product.components[0].pc);
+    const propane = product.components[0]!;
+    const T = 0.7 * propane.Tc;
+    const K = wilsonK(product, T, propane.pc);
     expect(K).toHaveLength(2);
     checkClose({
       what: 'K of propane at its 0.7 Tc and pc',
       input: T,
-      actual: K[0],
-      expected: 10 ** -(1 + product.components[0].omega),
+      actual: K[0]!,
+      expected: 10 ** -(1 + propane.omega),
       rtol: WILSON_ROUNDING,
       kind: 'published',
       source: 'acentric factor definition, Pitzer et al. 1955',
       why: '5.373 is (7/3)·ln 10 rounded',
     });
     // n-butane is heavier: a smaller K than propane's at the same state.
-    expect(K[1]).toBeLessThan(K[0]);
+    expect(K[1]).toBeLessThan(K[0]!);
     expect(K[1]).toBeGreaterThan(0);
   });
 });

@@ -183,11 +183,15 @@ describe('site rule and rule set: bad input names the field and its range', () =
 
 describe('validateSiteRule: the ranges as documented (1…100 % by volume; 0.01…1.25 of the water weight, the highest any rule prints being chlorine’s 125 %, 49 CFR 173.314(c))', () => {
   it('accepts each end of each range and keeps only the fields given', () => {
-    expect(validateSiteRule({ maxFillPercent: 1 })).toEqual({ maxFillPercent: 1 });
-    expect(validateSiteRule({ maxFillPercent: 100 })).toEqual({ maxFillPercent: 100 });
-    expect(validateSiteRule({ maxFillingDensity: 0.01 })).toEqual({ maxFillingDensity: 0.01 });
-    expect(validateSiteRule({ maxFillingDensity: 1.25 })).toEqual({ maxFillingDensity: 1.25 });
-    expect(validateSiteRule({ maxFillPercent: 80, maxFillingDensity: 0.4 })).toEqual({
+    expect(validateSiteRule({ maxFillPercent: 1 })).toStrictEqual({ maxFillPercent: 1 });
+    expect(validateSiteRule({ maxFillPercent: 100 })).toStrictEqual({ maxFillPercent: 100 });
+    expect(validateSiteRule({ maxFillingDensity: 0.01 })).toStrictEqual({
+      maxFillingDensity: 0.01,
+    });
+    expect(validateSiteRule({ maxFillingDensity: 1.25 })).toStrictEqual({
+      maxFillingDensity: 1.25,
+    });
+    expect(validateSiteRule({ maxFillPercent: 80, maxFillingDensity: 0.4 })).toStrictEqual({
       maxFillPercent: 80,
       maxFillingDensity: 0.4,
     });
