@@ -13,7 +13,6 @@ import { base60, fillLimitDetail } from './results-limit.js';
 import { phaseWords } from './phase-words.js';
 import { T_CHECK_MAX_K } from '../thermo/limits.js';
 
-
 /** The result's figures in the user's units, with the thermometer tolerance shown beside temperatures. */
 export class ResultView {
   constructor(
