@@ -82,10 +82,14 @@ describe('site route order', () => {
   });
 
   it('every move button is at least 48 × 48 CSS px at 360 px wide', async () => {
+    // A 360 px box as the parent, so the fixture waits for the element's own update (a plain
+    // div wrapper would wait for an animation frame, which a background test page may not get).
+    const box = document.createElement('div');
+    box.style.width = '360px';
+    document.body.append(box);
     const el = await fixture<SiteRoute>(
-      html`<div style="width: 360px">
-        <site-route site="Yard" .tanks=${TANKS}></site-route>
-      </div>`,
+      html`<site-route site="Yard" .tanks=${TANKS}></site-route>`,
+      { parentNode: box },
     );
     const buttons = deepAll(el, '[data-testid="route-up"], [data-testid="route-down"]');
     expect(buttons.length).to.equal(8);

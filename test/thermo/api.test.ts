@@ -14,6 +14,7 @@ import {
   saturation,
   type Product,
 } from '../../thermo/index.js';
+import { propRuns } from '../helpers/prop-runs.js';
 
 const FLUIDS = listFluids();
 const ids = FLUIDS.map((f) => f.id);
@@ -164,7 +165,7 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
           s.rhoV > 0
         );
       }),
-      { numRuns: 400 },
+      { numRuns: propRuns(400) },
     );
   });
 
@@ -190,7 +191,7 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
           );
         },
       ),
-      { numRuns: 400 },
+      { numRuns: propRuns(400) },
     );
   });
 
@@ -206,7 +207,7 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
           return Number.isFinite(liquidDensity(f.id, T, p));
         },
       ),
-      { numRuns: 300 },
+      { numRuns: propRuns(300) },
     );
   });
 
@@ -249,7 +250,7 @@ describe('property: valid input never gives NaN, Infinity or an exception', () =
           );
         },
       ),
-      { numRuns: 150 },
+      { numRuns: propRuns(150) },
     );
   });
 });

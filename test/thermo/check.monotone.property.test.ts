@@ -20,6 +20,7 @@ import {
   type TankCheckResult,
 } from '../../thermo/index.js';
 import { LPG_PRESETS } from '../../thermo/rules/presets.js';
+import { propRuns, propShare } from '../helpers/prop-runs.js';
 
 const RANK = { danger: 0, warning: 1, caution: 2, notice: 3 } as const;
 const worst = (r: TankCheckResult) =>
@@ -127,12 +128,12 @@ describe('checkTank is never milder when hotter (fast-check, peaks across Tc)', 
         const what = JSON.stringify(input(p2).product) + ` T ${T} peaks ${p1} → ${p2}`;
         neverMilder(r1, r2, what);
       }),
-      { numRuns: 160, seed: 20261202 },
+      { numRuns: propRuns(160), seed: 20261202 },
     );
     // The property must have crossed the critical temperature often, and seen dense fluid.
-    expect(tally.pairs, JSON.stringify(tally)).toBeGreaterThan(100);
-    expect(tally.crossing, JSON.stringify(tally)).toBeGreaterThan(20);
-    expect(tally.dense, JSON.stringify(tally)).toBeGreaterThan(5);
+    expect(tally.pairs, JSON.stringify(tally)).toBeGreaterThan(propShare(160, 100));
+    expect(tally.crossing, JSON.stringify(tally)).toBeGreaterThan(propShare(160, 20));
+    expect(tally.dense, JSON.stringify(tally)).toBeGreaterThan(propShare(160, 5));
   });
 
   it('every fluid and preset, peaks stepped across Tc, at fills either side of ρc', () => {
@@ -167,7 +168,7 @@ describe('checkTank is never milder when hotter (fast-check, peaks across Tc)', 
         }
       }
     }
-    expect(steps).toBeGreaterThan(200);
+    expect(steps).toBeGreaterThan(propShare(80, 200));
   });
 
   it('the relief temperature agrees with the headroom to relief', () => {
@@ -185,7 +186,7 @@ describe('checkTank is never milder when hotter (fast-check, peaks across Tc)', 
           expect(Tr, what).toBeGreaterThan(r.peak.temperature - 0.05);
         if (Tr !== null) expect(Tr, what).toBeGreaterThanOrEqual(T);
       }),
-      { numRuns: 80, seed: 11 },
+      { numRuns: propRuns(80), seed: 11 },
     );
   });
 });

@@ -6,6 +6,7 @@ import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { checkTank, InputError, listFluids, type TankCheckInput } from '../../thermo/index.js';
 import { LPG_PRESETS } from '../../thermo/rules/presets.js';
+import { propRuns, propShare } from '../helpers/prop-runs.js';
 
 function nonFinitePaths(x: unknown, path = 'result', out: string[] = []): string[] {
   if (typeof x === 'number') {
@@ -143,13 +144,13 @@ describe('checkTank property', () => {
   it('checkTank on random valid input returns only finite numbers or an InputError', () => {
     fc.assert(
       fc.property(valid, (input) => run(input)),
-      { numRuns: 400, seed: 20261201 },
+      { numRuns: propRuns(400), seed: 20261201 },
     );
     // Most random valid inputs must reach a full result, or the property proves little.
     expect(
       tally.ok,
       `results ${tally.ok}, input errors ${tally.input}: ${JSON.stringify([...tally.fields])}`,
-    ).toBeGreaterThan(200);
+    ).toBeGreaterThan(propShare(400, 200));
   });
 
   it('checkTank names contents.netMass for more product than the model can hold above Tc', () => {
@@ -203,7 +204,7 @@ describe('checkTank property', () => {
         o[parts[parts.length - 1]!] = value;
         run(copy);
       }),
-      { numRuns: 300, seed: 7 },
+      { numRuns: propRuns(300), seed: 7 },
     );
     expect(() => checkTank(undefined as unknown as TankCheckInput)).toThrow(InputError);
   });

@@ -17,6 +17,7 @@ import {
   type TankCheckInput,
 } from '../../thermo/index.js';
 import { LPG_PRESETS } from '../../thermo/rules/presets.js';
+import { propRuns } from '../helpers/prop-runs.js';
 
 const blends = fc.oneof(
   fc.constantFrom(...LPG_PRESETS.map((p) => p.product as Product)),
@@ -42,7 +43,7 @@ describe('checkTank states and refusals (fast-check)', () => {
         expect(r.phase, JSON.stringify(product)).toBe('liquid-full');
         expect(r.cautions[0]!.level).toBe('danger');
       }),
-      { numRuns: 25, seed: 5 },
+      { numRuns: propRuns(25), seed: 5 },
     );
   });
 
@@ -79,7 +80,7 @@ describe('checkTank states and refusals (fast-check)', () => {
           }
         },
       ),
-      { numRuns: 25, seed: 9 },
+      { numRuns: propRuns(25), seed: 9 },
     );
   });
 
@@ -122,7 +123,7 @@ describe('checkTank states and refusals (fast-check)', () => {
         expect(err, `${field} = ${String(value)}`).toBeInstanceOf(InputError);
         expect((err as InputError).field).toBe(field);
       }),
-      { numRuns: 100, seed: 3 },
+      { numRuns: propRuns(100), seed: 3 },
     );
   });
 
@@ -142,7 +143,7 @@ describe('checkTank states and refusals (fast-check)', () => {
           expect(() => maxDensity(id, T as unknown as number)).toThrow(InputError);
         },
       ),
-      { numRuns: 60, seed: 4 },
+      { numRuns: propRuns(60), seed: 4 },
     );
   });
 });

@@ -20,6 +20,7 @@ import {
 } from '../../thermo/index.js';
 import { tankHeight } from '../../thermo/tank/geometry.js';
 import { toSI, UNITS } from '../../thermo/units.js';
+import { propRuns } from '../helpers/prop-runs.js';
 
 const F = (x: number) => toSI('temperature', x, 'F');
 const psig = (x: number) => toSI('gaugePressure', x, 'psig');
@@ -261,7 +262,7 @@ describe('checkTank limits', () => {
           );
         },
       ),
-      { numRuns: 200, seed: 20261201 },
+      { numRuns: propRuns(200), seed: 20261201 },
     );
   });
 });

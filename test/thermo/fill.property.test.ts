@@ -18,6 +18,7 @@ import {
 } from '../../thermo/index.js';
 import { LPG_PRESETS } from '../../thermo/rules/presets.js';
 import { checkClose } from '../helpers/check.js';
+import { propRuns, propShare } from '../helpers/prop-runs.js';
 
 const products = fc.oneof(
   {
@@ -85,7 +86,7 @@ describe('reconcileFill properties', () => {
         expect(r.verdict).toBe('consistent');
         expect(r.overMass).toBe(0);
       }),
-      { numRuns: 25, seed: 11 },
+      { numRuns: propRuns(25), seed: 11 },
     );
   });
 
@@ -127,10 +128,10 @@ describe('reconcileFill properties', () => {
         expect(r.findings.map((f) => f.code)).toContain('fill-gauge-low');
         expect(['gauge-low', 'over-limit']).toContain(r.verdict);
       }),
-      { numRuns: 30, seed: 7 },
+      { numRuns: propRuns(30), seed: 7 },
     );
     // The property must have been exercised, not skipped.
-    expect(tested).toBeGreaterThan(10);
+    expect(tested).toBeGreaterThan(propShare(30, 10));
   });
 
   it('random input gives finite figures or an InputError', () => {
@@ -158,7 +159,7 @@ describe('reconcileFill properties', () => {
           expect((e as InputError).field).toMatch(/^(delivered|after|start)\./);
         }
       }),
-      { numRuns: 40, seed: 3 },
+      { numRuns: propRuns(40), seed: 3 },
     );
   });
 });

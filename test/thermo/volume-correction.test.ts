@@ -3,7 +3,12 @@
  * the wrong length is reported, not padded with zeros; values worked by hand.
  */
 import { describe, expect, it } from 'vitest';
-import { NO_CORRECTION, correctionAtT } from '../../thermo/eos/volumeCorrection.js';
+import {
+  NO_CORRECTION,
+  correctedVolume,
+  correctionAtT,
+  vapourBump,
+} from '../../thermo/eos/volumeCorrection.js';
 import { checkClose } from '../helpers/check.js';
 
 const params = { cc: 1e-5, d: [1e-5, 0, 0, 0, 2e-5], delta: 3e-6, eps: [0.1, 0.2, 0.3] };
@@ -51,4 +56,56 @@ describe('correctionAtT', () => {
     );
     expect(() => correctionAtT({ ...params, eps: [0.1] }, 400, 2e-4, 300)).toThrow(/got 5 and 1/);
   });
+});
+
+describe('vapourBump', () => {
+  it('is r(1 − r)² below 1 and 0 from 1 up (worked by hand)', () => {
+    const cases: [number, number][] = [
+      [0, 0],
+      [0.25, 0.140625], // 0.25 · 0.75²
+      [1 / 3, 4 / 27], // its maximum
+      [0.5, 0.125],
+      [1, 0],
+      [2, 0],
+    ];
+    for (const [r, s] of cases) {
+      checkClose({
+        what: 's(r)',
+        input: r,
+        actual: vapourBump(r),
+        expected: s,
+        atol: 1e-15,
+        kind: 'identity',
+        source: 's(r) = r(1 − r)², worked by hand',
+        why: 'floating point',
+      });
+    }
+  });
+});
+
+describe('correctedVolume', () => {
+  // v = vCub − c − δ·κ/(κ + max(d, 0)) − vCub·s(vcCub/vCub)·ε, κ = 0.35; values worked by hand.
+  const k = { c: 1e-6, delta: 2e-6, eps: 0.1, vcCub: 2e-4 };
+  const cases: [string, number, number, number][] = [
+    // vapour side: r = 0.5, s = 0.125; d = κ → g = 1/2: 4e-4 − 1e-6 − 1e-6 − 5e-6
+    ['vapour, d = κ', 4e-4, 0.35, 3.93e-4],
+    // a negative distance counts as 0 → g = 1: 4e-4 − 1e-6 − 2e-6 − 5e-6
+    ['vapour, d < 0', 4e-4, -1, 3.92e-4],
+    // liquid side: r = 2, no bump; d = 3·κ → g = 1/4: 1e-4 − 1e-6 − 0.5e-6
+    ['liquid, d = 3κ', 1e-4, 1.05, 0.985e-4],
+  ];
+  for (const [what, vCub, d, v] of cases) {
+    it(`subtracts the shift, the distance term and the vapour bump (${what})`, () => {
+      checkClose({
+        what: `v (${what})`,
+        input: { vCub, d },
+        actual: correctedVolume(k, vCub, d),
+        expected: v,
+        rtol: 1e-12,
+        kind: 'identity',
+        source: 'the correction as written in volumeCorrection.ts, worked by hand',
+        why: 'floating point',
+      });
+    });
+  }
 });

@@ -10,6 +10,7 @@ import { checkTank, InputError } from '../../../thermo/index.js';
 import type { TankCheckInput } from '../../../thermo/check/types.js';
 import { fromSI, toSI, LB_KG } from '../../../thermo/units.js';
 import { WATER_FD_KG_M3 } from '../../../thermo/rules/water.js';
+import { validateSiteRule } from '../../../thermo/rules/siteRule.js';
 import { expectRel, expectWithin } from '../check-helpers.js';
 
 const F = (x: number) => toSI('temperature', x, 'F');
@@ -177,5 +178,58 @@ describe('site rule and rule set: bad input names the field and its range', () =
   it('the tank’s own rule set choice overrides the site’s', () => {
     const tank = { ...byWeight().tank, ruleSet: 'us-federal' };
     expect(checkTank(byWeight({ tank })).fillLimit.ruleSet).toBe('us-federal');
+  });
+});
+
+describe('validateSiteRule: the ranges as documented (1…100 % by volume; 0.01…1.25 of the water weight, the highest any rule prints being chlorine’s 125 %, 49 CFR 173.314(c))', () => {
+  it('accepts each end of each range and keeps only the fields given', () => {
+    expect(validateSiteRule({ maxFillPercent: 1 })).toStrictEqual({ maxFillPercent: 1 });
+    expect(validateSiteRule({ maxFillPercent: 100 })).toStrictEqual({ maxFillPercent: 100 });
+    expect(validateSiteRule({ maxFillingDensity: 0.01 })).toStrictEqual({
+      maxFillingDensity: 0.01,
+    });
+    expect(validateSiteRule({ maxFillingDensity: 1.25 })).toStrictEqual({
+      maxFillingDensity: 1.25,
+    });
+    expect(validateSiteRule({ maxFillPercent: 80, maxFillingDensity: 0.4 })).toStrictEqual({
+      maxFillPercent: 80,
+      maxFillingDensity: 0.4,
+    });
+  });
+
+  it('absent or empty is no rule', () => {
+    expect(validateSiteRule(undefined)).toBeNull();
+    expect(validateSiteRule(null)).toBeNull();
+    expect(validateSiteRule({})).toBeNull();
+  });
+
+  it('refuses a figure just outside a range, naming the field and the range', () => {
+    const cases: [object, string, RegExp][] = [
+      [{ maxFillPercent: 0.99 }, 'siteRule.maxFillPercent', /a percent from 1 to 100/],
+      [{ maxFillPercent: 100.01 }, 'siteRule.maxFillPercent', /a percent from 1 to 100/],
+      [
+        { maxFillingDensity: 0.009 },
+        'siteRule.maxFillingDensity',
+        /a fraction of the water weight from 0.01 to 1.25/,
+      ],
+      [
+        { maxFillingDensity: 1.26 },
+        'siteRule.maxFillingDensity',
+        /a fraction of the water weight from 0.01 to 1.25/,
+      ],
+    ];
+    for (const [rule, field, range] of cases) {
+      try {
+        validateSiteRule(rule);
+        expect.unreachable(`${JSON.stringify(rule)} accepted`);
+      } catch (e) {
+        expect(e).toBeInstanceOf(InputError);
+        expect((e as InputError).field).toBe(field);
+        expect((e as InputError).message).toMatch(range);
+      }
+    }
+    expect(() => validateSiteRule([40])).toThrow(
+      /an object \{ maxFillPercent\?, maxFillingDensity\? \}/,
+    );
   });
 });
