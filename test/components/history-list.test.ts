@@ -11,7 +11,9 @@ import '../../components/check-history.js';
 import '../../components/fill-history.js';
 import type { CheckHistory } from '../../components/check-history.js';
 import type { FillHistory } from '../../components/fill-history.js';
-import { check } from '../../scripts/sync/records.mjs';
+import { check, tank } from '../../scripts/sync/records.mjs';
+import { buildCheckInput } from '../../components/check-input.js';
+import { DEFAULT_SETTINGS } from '../../components/types.js';
 import { makeFillRecord, startFill } from '../../thermo/fill/index.js';
 import { deepAll } from './dom.js';
 
@@ -51,17 +53,9 @@ describe('saved-record lists', () => {
   });
 
   it('<fill-history> shows the fills newest first; only the fill itself is a card', async () => {
-    const start = startFill(
-      {
-        tank: { waterCapacity: 3.8, designPressure: 1.72e6 },
-        product: 'propane',
-        liquidTemperature: 288.7,
-        contents: { gaugePercent: 20 },
-        peakTemperature: 300,
-      },
-      undefined,
-      new Date('2026-03-01T09:00:00Z'),
-    );
+    // The invented sync tank and its check's readings, as the check screen would send them.
+    const built = buildCheckInput(tank('t'), check('c', 't').readings, DEFAULT_SETTINGS);
+    const start = startFill(built.input!, undefined, new Date('2026-03-01T09:00:00Z'));
     const one = makeFillRecord({
       id: 'f',
       tankId: 't',
