@@ -6,10 +6,11 @@
  *
  * data-testid: `history`, `history-item` (with `data-check-id`), `history-empty`, `check-delete`.
  */
-import { LitElement, html, css, nothing } from 'lit';
+import { LitElement, html, nothing } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent } from './display.js';
 import { formatDate } from './format-date.js';
+import { historyStyles, newestFirst } from './history-list.js';
 import { PHASE_WORDS } from './phase-words.js';
 import { DEFAULT_SETTINGS, type CheckRecord } from './types.js';
 
@@ -30,41 +31,11 @@ export class CheckHistory extends LitElement {
     this.display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
   }
 
-  static override styles = [
-    baseStyles,
-    levelStyles,
-    css`
-      ol {
-        list-style: none;
-        padding: 0;
-        margin: 0;
-      }
-      li {
-        border: var(--border-width) solid var(--line);
-        border-radius: 0.5rem;
-        padding: 0.6rem;
-        margin-bottom: 0.6rem;
-        background: var(--paper);
-      }
-      .when {
-        font-weight: 800;
-      }
-      summary {
-        min-height: 48px;
-        display: flex;
-        align-items: center;
-        cursor: pointer;
-        font-weight: 600;
-      }
-      .figs {
-        margin: 0.25rem 0;
-      }
-    `,
-  ];
+  static override styles = [baseStyles, levelStyles, historyStyles('li')];
 
   override render() {
     const d = this.display;
-    const list = [...this.checks].sort((a, b) => (a.at < b.at ? 1 : a.at > b.at ? -1 : 0));
+    const list = newestFirst(this.checks, (c) => c.at);
     if (list.length === 0)
       return html`<p data-testid="history-empty" class="muted">
         No saved checks for this tank yet.

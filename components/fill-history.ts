@@ -5,10 +5,11 @@
  * data-testid: `fill-history`, `fill-record-item` (with `data-fill-id` and `data-verdict`),
  * `fill-history-empty`.
  */
-import { LitElement, html, css } from 'lit';
+import { LitElement, html } from 'lit';
 import { baseStyles, levelStyles } from './styles.js';
 import { DisplayUnits, formatPercent } from './display.js';
 import { formatDate } from './format-date.js';
+import { historyStyles, newestFirst } from './history-list.js';
 import { fillFindingText } from './messages.js';
 import { DEFAULT_SETTINGS } from './types.js';
 import type { FillRecord } from './fill-types.js';
@@ -42,43 +43,11 @@ export class FillHistory extends LitElement {
     this.display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
   }
 
-  static override styles = [
-    baseStyles,
-    levelStyles,
-    css`
-      ol {
-        list-style: none;
-        padding: 0;
-        margin: 0;
-      }
-      li.fill {
-        border: var(--border-width) solid var(--line);
-        border-radius: 0.5rem;
-        padding: 0.6rem;
-        margin-bottom: 0.6rem;
-        background: var(--paper);
-      }
-      .when {
-        font-weight: 800;
-      }
-      .figs {
-        margin: 0.25rem 0;
-      }
-      summary {
-        min-height: 48px;
-        display: flex;
-        align-items: center;
-        cursor: pointer;
-        font-weight: 600;
-      }
-    `,
-  ];
+  static override styles = [baseStyles, levelStyles, historyStyles('li.fill')];
 
   override render() {
     const d = this.display;
-    const list = [...this.fills].sort((a, b) =>
-      a.finishedAt < b.finishedAt ? 1 : a.finishedAt > b.finishedAt ? -1 : 0,
-    );
+    const list = newestFirst(this.fills, (f) => f.finishedAt);
     if (list.length === 0)
       return html`<p data-testid="fill-history-empty" class="muted">No saved fills yet.</p>`;
     return html`<ol data-testid="fill-history" aria-label="Saved fills, newest first">

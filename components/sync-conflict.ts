@@ -13,6 +13,7 @@ import type { DisplayUnits } from './display.js';
 import type { TankRecord } from './types.js';
 import { productLabel } from './products.js';
 import { syncHub } from '../pwa/sync/hub.js';
+import { SyncHubController } from './sync-hub-controller.js';
 
 interface Version {
   rev: string;
@@ -34,10 +35,6 @@ export class SyncConflict extends LitElement {
   declare _tick: number;
   declare _error: string;
   private _loadedFor = '';
-  private readonly _onChange = () => {
-    this._loadedFor = '';
-    this._tick++;
-  };
 
   constructor() {
     super();
@@ -46,16 +43,10 @@ export class SyncConflict extends LitElement {
     this._versions = [];
     this._tick = 0;
     this._error = '';
-  }
-
-  override connectedCallback(): void {
-    super.connectedCallback();
-    syncHub.addEventListener('change', this._onChange);
-  }
-
-  override disconnectedCallback(): void {
-    super.disconnectedCallback();
-    syncHub.removeEventListener('change', this._onChange);
+    new SyncHubController(this, () => {
+      this._loadedFor = '';
+      this._tick++;
+    });
   }
 
   static override styles = [

@@ -97,6 +97,12 @@ export class TankForm extends LitElement {
     this._draft = { ...this._draft, nameplate };
   }
 
+  /** The handler of a text input, select or text area that puts its value in the draft's `key`. */
+  private _text(key: 'site' | 'name' | 'productId' | 'notes') {
+    return (e: Event) =>
+      (this._draft = { ...this._draft, [key]: (e.target as HTMLInputElement).value });
+  }
+
   private _number(key: string, apply: (v: number | null) => void) {
     return (e: CustomEvent<NumberFieldChange>) => {
       const invalid = new Set(this._invalid);
@@ -219,6 +225,7 @@ export class TankForm extends LitElement {
 
   override render() {
     const d = this._draft;
+    const nameMissing = this._nameMissing && d.name.trim() === '';
     return html`
       <form @submit=${this._save} novalidate>
         <h2>${this.heading}</h2>
@@ -231,7 +238,7 @@ export class TankForm extends LitElement {
             autocomplete="off"
             maxlength=${TEXT_LIMITS.site}
             .value=${d.site}
-            @input=${(e: Event) => (this._draft = { ...this._draft, site: (e.target as HTMLInputElement).value })}
+            @input=${this._text('site')}
           />
           <datalist id="sites">
             ${this.sites.map((s) => html`<option value=${s}></option>`)}
@@ -246,19 +253,15 @@ export class TankForm extends LitElement {
             autocomplete="off"
             maxlength=${TEXT_LIMITS.name}
             .value=${d.name}
-            aria-invalid=${this._nameMissing && d.name.trim() === '' ? 'true' : 'false'}
-            aria-describedby=${this._nameMissing && d.name.trim() === '' ? 'name-err' : nothing}
-            @input=${(e: Event) => (this._draft = { ...this._draft, name: (e.target as HTMLInputElement).value })}
+            aria-invalid=${nameMissing ? 'true' : 'false'}
+            aria-describedby=${nameMissing ? 'name-err' : nothing}
+            @input=${this._text('name')}
           />
-          ${this._nameMissing && d.name.trim() === '' ? html`<p class="error" id="name-err">Name is needed: the name you know this tank by (at most ${TEXT_LIMITS.name} characters).</p>` : nothing}
+          ${nameMissing ? html`<p class="error" id="name-err">Name is needed: the name you know this tank by (at most ${TEXT_LIMITS.name} characters).</p>` : nothing}
         </div>
         <div class="field">
           <label for="product">Product</label>
-          <select
-            id="product"
-            data-testid="tank-product"
-            @change=${(e: Event) => (this._draft = { ...this._draft, productId: (e.target as HTMLSelectElement).value })}
-          >
+          <select id="product" data-testid="tank-product" @change=${this._text('productId')}>
             ${this._productOptions()}
           </select>
           ${
@@ -280,7 +283,7 @@ export class TankForm extends LitElement {
             rows="2"
             maxlength=${TEXT_LIMITS.notes}
             .value=${d.notes}
-            @input=${(e: Event) => (this._draft = { ...this._draft, notes: (e.target as HTMLTextAreaElement).value })}
+            @input=${this._text('notes')}
           ></textarea>
         </div>
         ${this._message ? html`<p class="error" role="alert">${this._message}</p>` : nothing}

@@ -10,6 +10,7 @@
 import { LitElement, html, css, nothing } from 'lit';
 import { baseStyles } from './styles.js';
 import { syncHub, type SyncStatus } from '../pwa/sync/hub.js';
+import { SyncHubController } from './sync-hub-controller.js';
 
 const SHAPE: Record<SyncStatus['state'], string> = {
   off: '○',
@@ -29,24 +30,13 @@ export class TeamPanel extends LitElement {
   declare _status: SyncStatus;
   declare _busy: boolean;
   declare _message: string;
-  private readonly _onChange = () => (this._status = syncHub.status);
 
   constructor() {
     super();
     this._status = syncHub.status;
     this._busy = false;
     this._message = '';
-  }
-
-  override connectedCallback(): void {
-    super.connectedCallback();
-    syncHub.addEventListener('change', this._onChange);
-    this._status = syncHub.status;
-  }
-
-  override disconnectedCallback(): void {
-    super.disconnectedCallback();
-    syncHub.removeEventListener('change', this._onChange);
+    new SyncHubController(this, () => (this._status = syncHub.status), { atConnect: true });
   }
 
   static override styles = [

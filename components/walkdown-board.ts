@@ -123,7 +123,8 @@ export function newestReadings(candidates: readonly LatestReadings[]): LatestRea
   return best;
 }
 
-function needsReading(
+/** The board's row of a tank that is not projected (no readings, too old or incomplete). */
+export function needsReading(
   tank: TankRecord,
   reason: string,
   latest: LatestReadings | null,

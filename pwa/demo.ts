@@ -12,6 +12,7 @@
  */
 import {
   DEFAULT_SETTINGS,
+  emptyReadings,
   newId,
   type CheckRecord,
   type DraftRecord,
@@ -53,17 +54,7 @@ export function buildDemo(settings: Settings = DEFAULT_SETTINGS, now = new Date(
       createdAt: iso,
       updatedAt: iso,
     };
-    const readings: Readings = {
-      liquidTemperature: null,
-      contentsMode: 'gaugePercent',
-      gaugePercent: null,
-      levelHeight: null,
-      netMass: null,
-      gaugePressure: null,
-      peakAirTemperature: null,
-      sunAllowance: settings.sunAllowance,
-      ...s.readings,
-    };
+    const readings: Readings = { ...emptyReadings(settings.sunAllowance), ...s.readings };
     tanks.push(tank);
     drafts.push({ tankId: tank.id, readings, updatedAt: iso });
   }

@@ -5,65 +5,13 @@
 // record in the phone's store.   node scripts/sync-first-time.mjs [N=5000]   (after npm run build)
 import { chromium } from 'playwright-core';
 import { preview } from 'vite';
+import { check, tank } from './sync/records.mjs';
 import { startSyncServer } from './sync/server.mjs';
 import { setupTeam } from './sync/team-setup.mjs';
 
 const N = Number(process.argv[2] ?? 5000);
 const ADMIN = 'measure:measure-pass';
 const auth = `Basic ${Buffer.from(ADMIN).toString('base64')}`;
-
-function tank(i) {
-  const id = `inv-tank-${i}`;
-  return {
-    id,
-    site: `Invented site ${i % 50}`,
-    name: `Invented tank ${i}`,
-    notes: '',
-    nameplate: { waterCapacity: 1.9, designPressure: 1.72e6 },
-    productId: 'propane',
-    demo: false,
-    createdAt: '2026-06-01T08:00:00.000Z',
-    updatedAt: '2026-06-01T08:00:00.000Z',
-  };
-}
-function check(i) {
-  return {
-    id: `inv-check-${i}`,
-    tankId: `inv-tank-${i}`,
-    at: '2026-06-02T09:00:00.000Z',
-    readings: {
-      liquidTemperature: 293.15,
-      contentsMode: 'gaugePercent',
-      gaugePercent: 40,
-      levelHeight: null,
-      netMass: null,
-      gaugePressure: null,
-      peakAirTemperature: 308.15,
-      sunAllowance: 8,
-    },
-    productLabel: 'Propane',
-    summary: {
-      phase: 'two-phase',
-      pressure: 7e5,
-      totalMass: 400,
-      liquidVolume: 0.76,
-      fillingDensity: 0.2,
-      maxMass: 800,
-      roomLeftMass: 400,
-      stopAtGaugePercent: 80,
-      binding: 'weight',
-      peakTemperature: 316,
-      peakPressure: 1.3e6,
-      peakLiquidFraction: 0.45,
-      headroomToDesign: 4e5,
-      headroomToRelief: 3e5,
-      liquidFullTemperature: 340,
-      topLevel: null,
-      cautions: [],
-    },
-    demo: false,
-  };
-}
 
 const sync = await startSyncServer({ port: 0, admin: ADMIN });
 const dbUrl = await setupTeam({
@@ -76,8 +24,11 @@ let t0 = Date.now();
 for (let start = 0; start < N; start += 500) {
   const docs = [];
   for (let i = start; i < Math.min(N, start + 500); i++) {
-    docs.push({ _id: `tank:inv-tank-${i}`, v: 1, kind: 'tank', record: tank(i) });
-    docs.push({ _id: `check:inv-check-${i}`, v: 1, kind: 'check', record: check(i) });
+    const id = `inv-tank-${i}`;
+    const record = tank(id, { site: `Invented site ${i % 50}`, name: `Invented tank ${i}` });
+    docs.push({ _id: `tank:${id}`, v: 1, kind: 'tank', record });
+    const c = check(`inv-check-${i}`, id);
+    docs.push({ _id: `check:${c.id}`, v: 1, kind: 'check', record: c });
   }
   const res = await fetch(`${dbUrl}/_bulk_docs`, {
     method: 'POST',

@@ -7,26 +7,14 @@
 import { expect, fixture, html } from '@open-wc/testing';
 import '../../components/site-board.js';
 import type { SiteBoard } from '../../components/site-board.js';
-import type { BoardRow, SiteForecast } from '../../components/walkdown-board.js';
+import { needsReading, type BoardRow, type SiteForecast } from '../../components/walkdown-board.js';
 import type { FillFlag } from '../../components/fill-flag.js';
 import { blankTank } from '../../components/blank-tank.js';
 import { deepAll } from './dom.js';
 
 function row(id: string, name: string): BoardRow {
-  return {
-    tank: { ...blankTank(id, '2026-01-01T00:00:00.000Z'), name, site: 'Yard' },
-    level: 'needs-reading',
-    reason: 'No readings',
-    readingsAt: null,
-    ageMs: null,
-    sunAllowance: 0,
-    result: null,
-    summary: null,
-    readings: null,
-    peakLiquidPercent: null,
-    liquidFullMargin: null,
-    reliefMargin: null,
-  };
+  const tank = { ...blankTank(id, '2026-01-01T00:00:00.000Z'), name, site: 'Yard' };
+  return needsReading(tank, 'No readings', null, null, 0);
 }
 
 const FORECAST: SiteForecast = {
