@@ -18,16 +18,12 @@ import { describe, it, expect } from 'vitest';
 import { fileURLToPath } from 'node:url';
 import { readCsv } from '../../../scripts/lib/csv.js';
 import {
-  CYLINDER_DIP_TUBE_MIN_M3,
   FILL_METHODS,
   T_30F_K,
-  T_40F_K,
-  T_50F_K,
   volumeRules,
   type VolumeRuleChoice,
   type VolumeRuleContext,
 } from '../../../thermo/rules/volumeLimits.js';
-import type { RuleChoice } from '../../../thermo/rules/gases.js';
 import { toSI } from '../../../thermo/units.js';
 import { expectWithin } from '../check-helpers.js';
 
@@ -55,13 +51,6 @@ function h29(T: number): number | null {
   if (Math.abs(T - F(60)) < 1e-9) return 1;
   return null;
 }
-
-const weight = (pct: number): RuleChoice => ({
-  id: 'w',
-  description: 'weight rule',
-  citation: 'c',
-  fillingDensity: pct / 100,
-});
 
 function ctx(over: Partial<VolumeRuleContext>): VolumeRuleContext {
   return {
