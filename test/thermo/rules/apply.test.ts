@@ -88,8 +88,10 @@ describe('the weight rule’s words and the fixed dip tube', () => {
     const r = fillingRule(ctx({}))!;
     expect(r.id).toBe('h27-aboveground-small');
     expect(r.description).toContain('filling density 42 % of water weight (SG 0.504–0.510)');
-    expect(r.citation).toContain('Table H-27');
-    expect(r.description).not.toContain('dip tube');
+    expect(r.citation).toBe(
+      '29 CFR 1910.110(b)(12)(i) Table H-27, aboveground, 1,200 US gal or less (CFR 2015 ed.)',
+    );
+    expect(r.description).toMatch(/ filling density 42 % of water weight \(SG 0\.504–0\.510\)$/);
   });
   it('the open top band reads "and over" (173.315(b): 0.627 and over, 57 / 60 %)', () => {
     const small = fillingRule(ctx({ containerClass: 'cargo', specificGravity: 0.7 }))!;
@@ -117,8 +119,10 @@ describe('the weight rule’s words and the fixed dip tube', () => {
   it('storage with a fixed gauge keeps the H-27 weight figure (the gauge is set by volume, 1910.110(b)(19)(v))', () => {
     const r = fillingRule(ctx({ fixedDipTube: true }))!;
     pub(r.fillingDensity * 100, 42, 'H-27', 'storage dip tube');
-    expect(r.citation).not.toContain('Note 1');
-    expect(r.description).not.toContain('dip tube');
+    expect(r.citation).toBe(
+      '29 CFR 1910.110(b)(12)(i) Table H-27, aboveground, 1,200 US gal or less (CFR 2015 ed.)',
+    );
+    expect(r.description).toMatch(/ of water weight \(SG 0\.504–0\.510\)$/);
   });
   it('a printed percent without a dip-tube factor is the same with a fixed gauge (ammonia cargo 56 %, 173.315(a))', () => {
     for (const fixedDipTube of [false, true])
