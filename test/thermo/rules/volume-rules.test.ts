@@ -115,6 +115,7 @@ describe('anhydrous ammonia in storage containers: 29 CFR 1910.111(b)(11)', () =
     for (const t of [20, 72]) {
       const ins = only({ insulated: true, liquidTemperature: F(t) });
       expect(ins.id).toBe('nh3-storage-insulated-volume');
+      expect(ins.kind).toBe('volume');
       pub(
         ins.percent,
         printed('anhydrous ammonia', '(b)(11)(i)', 'aboveground insulated'),
@@ -126,6 +127,7 @@ describe('anhydrous ammonia in storage containers: 29 CFR 1910.111(b)(11)', () =
       expect(ins.description).toContain('insulated container: 83.5 % by volume');
       const ug = only({ placement: 'underground', liquidTemperature: F(t) });
       expect(ug.id).toBe('nh3-storage-underground-volume');
+      expect(ug.kind).toBe('volume');
       pub(
         ug.percent,
         printed('anhydrous ammonia', '(b)(11)(i)', 'underground uninsulated'),
@@ -181,6 +183,7 @@ describe('anhydrous ammonia in DOT cargo and portable tanks: 49 CFR 173.315(a)',
     for (const containerClass of ['cargo', 'portable'] as const) {
       const r = only({ containerClass, liquidTemperature: F(72) });
       expect(r.id).toBe('nh3-cargo-volume');
+      expect(r.kind).toBe('volume');
       pub(r.percent, 87.5, 0, '49 CFR 173.315(a) Note 5', containerClass);
       expect(r.citation).toBe('49 CFR 173.315(a) table and Note 5 (CFR 2015 ed.)');
       expect(r.description).toContain(
