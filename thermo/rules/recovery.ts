@@ -41,7 +41,8 @@ export function recoveryLimit(
     throw new InputError('tank.recovery', 'an object { fillFraction? } or absent', recovery);
   const f = recovery.fillFraction ?? RECOVERY_DEFAULT_FRACTION;
   const [lo, hi] = RECOVERY_FRACTION_RANGE;
-  if (typeof f !== 'number' || !Number.isFinite(f) || f < lo || f > hi)
+  // Number.isFinite is false for anything that is not a number (no coercion): no typeof needed.
+  if (!Number.isFinite(f) || f < lo || f > hi)
     throw new InputError('tank.recovery.fillFraction', `a fraction from ${lo} to ${hi}`, f, {
       min: lo,
       max: hi,
