@@ -253,6 +253,24 @@ describe('ammonia by gauge at 303.15 K: the 87.5 % volume column (29 CFR 1910.11
   });
 });
 
+describe('ammonia at 333.15 K: the 56 % weight limit lies past liquid-full', () => {
+  it('the volume column binds and the note caps the weight limit’s gauge figure at 100 %', () => {
+    // 56 % of the water weight is 0.56 × 997.95 = 558.9 kg/m³, denser than ammonia's saturated
+    // liquid at 333.15 K, 545.3 kg/m³ (test/reference/sat/ammonia.csv, Gao et al. 2020): the
+    // weight limit would be past liquid-full, so the printed 87.5 % by volume binds.
+    const T = 333.15;
+    const r = check(
+      { product: 'ammonia', liquidTemperature: T, peakTemperature: T },
+      { designPressure: psig(600) },
+    );
+    expect(r.fillLimit.binding).toBe('nh3-storage-aboveground-volume');
+    expect(entry(r, 'nh3-storage-aboveground').gaugePercent!).toBeGreaterThan(100);
+    expect(r.fillLimit.bindingNote).toContain(
+      'below its weight limit of 56 % of the water weight (100 % on the gauge now)',
+    );
+  });
+});
+
 describe('the site’s own rule against the rule set', () => {
   it('a site figure equal to the rule set’s names the rule set (it does not lower the limit)', () => {
     const r = check({ siteRule: { maxFillingDensity: 0.42 } });
@@ -289,5 +307,60 @@ describe('the not-liquid-full limit binds below the rule’s limits', () => {
     expect(r.fillLimit.bindingNote).toBe(
       'The not-liquid-full limit binds below the rule’s limits: the tank must not become liquid-full at the forecast peak liquid temperature.',
     );
+  });
+});
+
+describe('a reference temperature in the last half kelvin below the critical point', () => {
+  // propane: Tc = 369.89 K (Lemmon et al. 2009, test/reference/fluids.csv); the core's
+  // saturation curve ends 0.5 K below it (README "Limits of validity").
+  const Tc = 369.890009;
+  const run = (Tpeak: number) =>
+    checkTank({
+      tank: { waterCapacity: 1, designPressure: psig(900) },
+      product: 'propane',
+      liquidTemperature: 288.15,
+      contents: { gaugePercent: 5 },
+      peakTemperature: Tpeak,
+    });
+  const notices = (r: ReturnType<typeof run>) =>
+    r.cautions.filter((c) => c.code === 'reference-above-critical');
+
+  it('is not called "above the critical temperature" (bug: it was, at 205.4 °F against 206.1 °F)', () => {
+    for (const T of [369.5, 369.64, Tc - 0.01]) expect(notices(run(T))).toEqual([]);
+    const above = notices(run(Tc + 0.5));
+    expect(above).toHaveLength(1);
+    expect(above[0]!.value!).toBeGreaterThan(Tc);
+  });
+
+  it('its limit lies between the critical density and the last saturated liquid, falling as T rises', () => {
+    // critical density 220.48 kg/m³ (fluids.csv); no liquid can be denser near Tc than the
+    // saturated liquid 0.5 K below it (the core's saturation()).
+    const rhoc = 220.4781275;
+    const top = saturation('propane', 369.39).rhoL; // the model's Tc is 369.89 K
+    const rho = (T: number) =>
+      entry(run(T), 'not-liquid-full-at-peak').maxMass / (1 - MODEL_ALLOWANCE.liquidDensity);
+    let last = top;
+    for (const T of [369.5, 369.64, 369.8, Tc - 0.01]) {
+      const x = rho(T);
+      expect(x).toBeLessThan(last);
+      expect(x).toBeGreaterThan(rhoc * 0.995);
+      last = x;
+    }
+    // the shape of the coexistence curve near Tc: ρL − ρc ∝ (Tc − T)^β, β ≈ 0.326 (3D Ising
+    // value, Sengers & Levelt Sengers 1986); halfway through the last 0.5 K:
+    const mid = rhoc + (top - rhoc) * 0.5 ** 0.326;
+    expectRel(rho(Tc - 0.25), mid, 0.003, {
+      input: 'propane at Tc − 0.25 K',
+      source: 'critical scaling with β = 0.326 (Sengers & Levelt Sengers 1986)',
+      kind: 'published',
+      why: 'the check uses β = 1/3; the two differ by 0.5 % of ρL − ρc here',
+    });
+    // at and past Tc: the critical density itself
+    expectRel(rho(Tc + 0.5), rhoc, 0.005, {
+      input: 'propane above Tc',
+      source: 'test/reference/fluids.csv critical density',
+      kind: 'published',
+      why: 'the model holds the reference critical density (README)',
+    });
   });
 });
