@@ -226,6 +226,32 @@ describe('notices on the nameplate and the readings', () => {
   });
 });
 
+describe('a vacuum: read on the gauge, or expected at the liquid temperature', () => {
+  it('a gauge below zero on propane at 60 °F (92 psig expected) is a vacuum read, not expected', () => {
+    // propane at 60 °F: 92.4 psig (test/reference/trade/saturation_properties.csv)
+    const r = propane({ gaugePressure: -1000 });
+    const w = find(r, 'vacuum')!;
+    expect(w.level).toBe('warning');
+    expect(w.params['source']).toBe('reading');
+    expect(w.value).toBe(-1000);
+    expect(w.message).toContain('The tank is under vacuum (-0.1 psig (-1 kPa g), gauge reading)');
+    expect(codes(propane({ gaugePressure: 0 }))).not.toContain('vacuum');
+  });
+  it('n-butane at 0 °F is expected below atmospheric (−7.46 psig, FACTS.md case 14)', () => {
+    const r = checkTank({
+      tank: { waterCapacity: V, designPressure: psig(250) },
+      product: 'n-butane',
+      liquidTemperature: F(0),
+      contents: { gaugePercent: 50 },
+      peakTemperature: F(0),
+    });
+    const w = find(r, 'vacuum')!;
+    expect(w.params['source']).toBe('expected');
+    expect(w.message).toContain(', expected at 0.0 °F (-17.8 °C))');
+    expect(w.message).toMatch(/under vacuum \(-7\.[3-6] psig/);
+  });
+});
+
 describe('over the fill limit: by more than the 0.01 kg the limit is rounded to', () => {
   const at = (mass: number) => propane({ contents: { netMass: mass } });
   const limit = propane().fillLimit.maxMass;
