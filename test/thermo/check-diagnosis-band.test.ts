@@ -196,3 +196,35 @@ describe('propaneSplit: the ends of the propane/n-butane line (Raoult’s law)',
     expect(propaneSplit(380, 2e6)).toBeNull();
   });
 });
+
+describe('a zeotropic blend: a composition shift is named after the first cause', () => {
+  // R-407C glides about 5 K at 298.15 K (bubble 1,174 kPa, dew 1,000 kPa absolute in
+  // test/reference/blends/r407c.csv, Lemmon & Jacobsen 2004): its composition can shift.
+  const run = (reading: number, product = 'r407c') =>
+    checkTank({
+      tank: { waterCapacity: 0.0227, designPressure: psig(400), containerClass: 'cylinder' },
+      product,
+      liquidTemperature: 298.15,
+      contents: { netMass: 10 },
+      gaugePressure: reading,
+      pressureGauge: { accuracy: 0.005 },
+      peakTemperature: 305,
+    }).diagnosis!;
+  const pb = () => saturation('r407c', 298.15).pAbs - BARO;
+  it('high: air first, then a blend richer in its volatile components', () => {
+    const d = run(pb() + psig(40) - psig(0));
+    expect(d.verdict).toBe('high');
+    expect(d.causeCodes).toEqual(['non-condensable', 'composition-shift-high', ...HIGH.slice(1)]);
+    expect(d.causes[1]).toMatch(/zeotropic blend.*richer in R-32 and R-125/);
+  });
+  it('low: colder liquid first, then a liquid left richer in its heavy component', () => {
+    const d = run(pb() - psig(40) + psig(0));
+    expect(d.verdict).toBe('low');
+    expect(d.causeCodes).toEqual(['liquid-colder', 'composition-shift-low', ...LOW.slice(1)]);
+    expect(d.causes[1]).toMatch(/vapour-only withdrawal or a vapour leak.*richer in R-134a/);
+  });
+  it('a pure fluid (R-134a) has no composition to shift', () => {
+    const p = saturation('r134a', 298.15).pAbs - BARO;
+    expect(run(p - psig(40), 'r134a').causeCodes).toEqual(LOW);
+  });
+});

@@ -107,6 +107,20 @@ describe('the site’s own limits', () => {
     });
   });
 
+  it('only the figures entered become limits; no site rule, no site limit', () => {
+    const ids = (r: ReturnType<typeof checkTank>) => r.fillLimit.limits.map((l) => l.id);
+    const none = checkTank(base({}));
+    expect(none.fillLimit.limits.every((l) => l.kind !== 'site' && typeof l.id === 'string')).toBe(
+      true,
+    );
+    const pct = ids(checkTank(base({ siteRule: { maxFillPercent: 80 } })));
+    expect(pct).toContain('site-max-fill-percent');
+    expect(pct).not.toContain('site-max-filling-density');
+    const fd = ids(checkTank(base({ siteRule: { maxFillingDensity: 0.4 } })));
+    expect(fd).toContain('site-max-filling-density');
+    expect(fd).not.toContain('site-max-fill-percent');
+  });
+
   it('past the critical temperature there is no level, so a percent limit is not applied', () => {
     // CO2 at 310 K, above Tc = 304.13 K: the filling-density figure still applies.
     const V2 = 0.0227;
