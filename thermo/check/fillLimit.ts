@@ -55,7 +55,7 @@ export interface FillLimitOutcome {
   fillLimit: FillLimitResult;
   /** A rule of the tables (weight or volume) covers this product in this container. */
   ruleFound: boolean;
-  /** Reference temperatures above the critical point (no not-liquid-full limit there), K. */
+  /** Reference temperatures at or above the critical temperature (the limit keeps the contents below the critical density there), K. */
   skippedRefs: number[];
 }
 
@@ -159,7 +159,7 @@ const rank = (l: LimitEntry) =>
           ? 3
           : 4;
 
-/** Never liquid-full up to each reference temperature; returns the ones above the critical point. */
+/** Never liquid-full up to each reference temperature; returns the ones at or above the critical temperature. */
 function physicalLimits(k: FillLimitContext, limits: LimitEntry[]): number[] {
   const { c, model } = k;
   const refs = referenceRules(k.product, c.containerClass, k.ruleSet);
@@ -178,7 +178,10 @@ function physicalLimits(k: FillLimitContext, limits: LimitEntry[]): number[] {
   if (recovery) refs.push({ ...recovery, kind: 'rule' });
   const skipped: number[] = [];
   for (const r of refs) {
-    if (!model.sat(r.referenceTemperature)) skipped.push(r.referenceTemperature);
+    // Named only at or past the critical temperature: in the last stretch below it (no
+    // saturation state, limit from the critical scaling) the product is not "above" it.
+    if (!model.sat(r.referenceTemperature) && r.referenceTemperature >= model.basics.Tc)
+      skipped.push(r.referenceTemperature);
     const rhoNotFull = notFullDensity(model, r.referenceTemperature);
     const share = r.id === 'recovery-cylinder' ? (recovery?.fraction ?? 1) : 1;
     const mass = floorTo(share * c.V * rhoNotFull * (1 - MODEL_ALLOWANCE.liquidDensity), 0.01);
