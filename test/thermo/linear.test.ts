@@ -166,6 +166,11 @@ describe('extrapolate', () => {
     const u0 = Float64Array.from([0]);
     const u1 = Float64Array.from([1]);
     expect(extrapolate(u0, u1, Float64Array.from([1.95]))).toBe(false);
+    // Steps 20 then 19: λ = 361/380, which rounds to the same double as 0.95.
+    expect(361 / 380).toBe(0.95);
+    expect(
+      extrapolate(Float64Array.from([0]), Float64Array.from([20]), Float64Array.from([39])),
+    ).toBe(false);
     expect(extrapolate(u0, u1, Float64Array.from([1]))).toBe(false); // λ = 0
     expect(extrapolate(u0, u0, Float64Array.from([1]))).toBe(false); // Δ1 = 0
   });

@@ -75,6 +75,38 @@ describe('pressureForVolume', () => {
     expect(() => pressureForVolume(flat, 0.5, 1e5)).toThrow(ConvergenceError);
   });
 
+  it('says which solver failed and why, with the smaller bracket residual', () => {
+    // Bounds [1e4, 1e6] Pa and the volume of 1e3 Pa: ln(v(p)/v) at the bounds is −ln 10 and
+    // −ln 1000 (ideal gas, by hand), so the residual reported is ln 10, after no expansion.
+    let err: unknown;
+    try {
+      pressureForVolume(ideal, ideal(1e3), 1e5, 1e4, 1e6);
+    } catch (e) {
+      err = e;
+    }
+    expect(err).toBeInstanceOf(ConvergenceError);
+    const e = err as ConvergenceError;
+    expect(e.solver).toBe('pressure from volume');
+    expect(e.message).toMatch(/could not bracket the pressure/);
+    expect(e.iterations).toBe(0);
+    checkClose({
+      what: 'residual of the failed bracket',
+      input: { lo: 1e4, hi: 1e6, target: 1e3 },
+      actual: e.residual,
+      expected: Math.log(10),
+      rtol: 1e-12,
+      kind: 'identity',
+      source: 'ideal gas, by hand',
+    });
+  });
+
+  it('a volume function that fails inside the bracket is reported under this solver’s name', () => {
+    const broken = (p: number) => (p > 2e4 && p < 5e5 ? NaN : ideal(p));
+    expect(() => pressureForVolume(broken, ideal(1e5), 1e5, 1e4, 1e6)).toThrow(
+      /^pressure from volume did not converge/,
+    );
+  });
+
   it('accepts a bound that is itself the root', () => {
     const r = pressureForVolume(ideal, ideal(1e5), 3e5, 1e5, 1e6);
     expect(Math.abs(r.p / 1e5 - 1)).toBeLessThan(1e-11);
