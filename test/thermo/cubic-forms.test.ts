@@ -97,6 +97,32 @@ describe('compressibilityRoots against the textbook cubics', () => {
     });
   });
 
+  it('at zero pressure (B = 0) the root Z = 0 = B is not returned', () => {
+    // Z³ − Z² + A·Z = Z(Z² − Z + A) for SRK with B = 0: roots 0 and (1 ± √(1 − 4A))/2.
+    const A = 0.1;
+    const roots = compressibilityRoots(SOAVE_REDLICH_KWONG, A, 0);
+    const s = Math.sqrt(1 - 4 * A);
+    expect(roots).toHaveLength(2);
+    checkClose({
+      what: 'small root',
+      input: { A },
+      actual: roots[0]!,
+      expected: (1 - s) / 2,
+      rtol: 1e-14,
+      kind: 'identity',
+      source: SRK_SRC + ' eq. 5 with B = 0, factored by hand',
+    });
+    checkClose({
+      what: 'large root',
+      input: { A },
+      actual: roots[1]!,
+      expected: (1 + s) / 2,
+      rtol: 1e-14,
+      kind: 'identity',
+      source: SRK_SRC + ' eq. 5 with B = 0, factored by hand',
+    });
+  });
+
   it('tends to the ideal gas (Z → 1) as A and B vanish', () => {
     // Ideal-gas limit: Z = 1 + (B − A)·… to first order (second virial coefficient B − A).
     for (const fam of [PENG_ROBINSON, SOAVE_REDLICH_KWONG]) {
@@ -157,6 +183,36 @@ describe('cubicRealRoots: every branch of the closed form', () => {
       kind: 'identity',
       source: 'factored by hand',
     });
+  });
+
+  it.each([
+    ['q > 0', 1, -1],
+    ['q < 0', -1, 1],
+  ] as const)(
+    'one real root with a tiny linear term (%s): Cardano taken on the side without cancellation',
+    (_, c0, root) => {
+      // x³ + 1e-9·x + c0: the root is −cbrt(c0) − 1e-9/(3·cbrt(c0)²)·… ≈ ∓1 ± 3.3e-10. With
+      // the other sign, −q/2 ± √disc cancels to 0 and the closed form returns 0 instead.
+      const got = cubicRealRoots(0, 1e-9, c0);
+      expect(got).toHaveLength(1);
+      checkClose({
+        what: 'root of x³ + 1e-9·x ± 1',
+        input: { c0 },
+        actual: got[0]!,
+        expected: root + (root > 0 ? -1 : 1) * (1e-9 / 3),
+        atol: 1e-15,
+        kind: 'identity',
+        source: 'first-order expansion about ∓1, by hand',
+      });
+    },
+  );
+
+  it('keeps a root of −1e-13 next to negative roots of order 1 (the mirror image)', () => {
+    const r = [-2.5, -0.4, -1e-13];
+    const [c2, c1, c0] = fromRoots(r);
+    const got = cubicRealRoots(c2, c1, c0);
+    expect(got).toHaveLength(3);
+    got.forEach((x, i) => expect(Math.abs(x / r[i]! - 1), `root ${r[i]}`).toBeLessThan(1e-12));
   });
 
   it('polishes each root to the last digits (Newton on the original cubic)', () => {

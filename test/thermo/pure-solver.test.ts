@@ -145,6 +145,28 @@ describe('pureSaturation against the reference equations', () => {
     }
   });
 
+  it('converges from any start in a bounded number of steps, near Tc and near the triple point too', () => {
+    // The answer must not depend on the start; the steps are bounded because the check calls
+    // this inside its own loops (measured: at most 24 steps on this grid; bound 30).
+    const m = componentModel(fluidById('propane')!, 'tuned');
+    for (const T of [90, 120, 200, 300, m.Tc - 0.5, m.Tc - 0.02]) {
+      const want = pureSaturation(m, T).p;
+      for (const guess of [1, 1e3, 5e5, 2e6, m.pc * 0.99, m.pc * 1.2, m.pc * 3, 1e12]) {
+        const s = pureSaturation(m, T, guess);
+        expect(Math.abs(s.p / want - 1), `T ${T}, guess ${guess}`).toBeLessThan(1e-10);
+        expect(s.iterations, `T ${T}, guess ${guess}`).toBeLessThanOrEqual(30);
+      }
+    }
+  });
+
+  it('propane at 90 K (near its 85.5 K triple point): a vapour pressure of a few mPa', () => {
+    // Lemmon, McLinden & Wagner 2009 give p_triple = 1.7e-4 Pa at 85.525 K (from memory);
+    // at 90 K the reference equation gives about 1e-3 Pa: check the order of magnitude only.
+    const s = pureSaturation(componentModel(fluidById('propane')!, 'tuned'), 90);
+    expect(s.p).toBeGreaterThan(2e-4);
+    expect(s.p).toBeLessThan(5e-3);
+  });
+
   it('near the critical point: converges to within 0.01 K of Tc, p below pc, ρ_L > ρ_V', () => {
     const m = componentModel(fluidById('propane')!, 'tuned');
     const s = pureSaturation(m, m.Tc - 0.01);
@@ -157,6 +179,7 @@ describe('pureSaturation against the reference equations', () => {
     const m = componentModel(fluidById('propane')!, 'PR');
     expect(() => pureSaturation(m, m.Tc + 1)).toThrow(ConvergenceError);
     expect(() => pureSaturation(m, m.Tc * 1.5)).toThrow(/pure saturation/);
+    expect(() => pureSaturation(m, 400)).toThrow('no equal-fugacity pressure found at T = 400 K');
   });
 });
 
@@ -207,6 +230,17 @@ describe('pureZ and pureVolume', () => {
     const roots = compressibilityRoots(m.family, A, B);
     expect(z.Z).toBe(roots.at(-1));
     expect(pureZ(m, k, T, p, 'liquid').Z).toBe(roots[0]);
+  });
+
+  it('`liquid` and `vapour` return the named root even where the other one is stable', () => {
+    for (const p of [ref.p * 0.85, ref.p * 1.15]) {
+      const A = (k.a * p) / (R * R * T * T);
+      const B = (k.b * p) / (R * T);
+      const roots = compressibilityRoots(m.family, A, B);
+      expect(roots).toHaveLength(3);
+      expect(pureZ(m, k, T, p, 'liquid').Z).toBe(roots[0]);
+      expect(pureZ(m, k, T, p, 'vapour').Z).toBe(roots[2]);
+    }
   });
 
   it('where one root exists it is returned whatever branch is asked', () => {
