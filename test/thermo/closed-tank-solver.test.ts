@@ -204,6 +204,7 @@ describe('closed tank, blend (propane/n-butane 50/50)', () => {
     });
     expect([c.liquidFraction, c.rhoL, c.rhoV, c.vapourMassFraction]).toEqual([1, rho, null, 0]);
     expect(c.x).toEqual([...blend.z]);
+    expect(c.y).toEqual([...blend.z]);
   });
 
   it.each([0.1, 0.5, 0.9])(
