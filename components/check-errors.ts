@@ -45,3 +45,23 @@ export function screenErrors(
   }
   return { fieldErrors, error };
 }
+
+/**
+ * `screenErrors` remembered: the same object back while the outcome, validity and units are the
+ * same, and while the words it gives are (so <check-form> is not drawn again for nothing).
+ */
+export function keptScreenErrors(): (
+  o: CheckOutcome | null,
+  valid: boolean,
+  display: DisplayUnits,
+) => ScreenErrors {
+  let last: { o: CheckOutcome | null; valid: boolean; d: DisplayUnits; e: ScreenErrors } | null =
+    null;
+  return (o, valid, d) => {
+    if (last && last.o === o && last.valid === valid && last.d === d) return last.e;
+    const e = screenErrors(o, valid, d);
+    const same = last !== null && JSON.stringify(last.e) === JSON.stringify(e);
+    last = { o, valid, d, e: same ? last!.e : e };
+    return last.e;
+  };
+}

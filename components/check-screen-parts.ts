@@ -2,6 +2,7 @@
 import { html, nothing, type TemplateResult } from 'lit';
 import type { TankCheckResult } from '../thermo/check/types.js';
 import type { HeatingCurve } from './chart-data.js';
+import { curveLater } from './curve-later.js';
 import { summarize, type CheckOutcome } from './check-input.js';
 import type { DisplayUnits } from './display.js';
 import { productLabel } from './products.js';
@@ -25,27 +26,58 @@ export function headPart(t: TankRecord, d: DisplayUnits, edit: () => void): Temp
           : html`relief ${d.format('gaugePressure', np.reliefSetPressure)}`
       }
     </p>
-    <p class="print-only">Printed ${new Date().toLocaleString()} from the readings below.</p>
+    <p class="print-only">Printed ${printedText()} from the readings below.</p>
   </div>`;
 }
 
-/** The heating chart with its heading. */
-export function chartPart(
-  t: TankRecord,
-  d: DisplayUnits,
-  curve: HeatingCurve,
-  result: TankCheckResult,
-  nowTemperature: number,
-): TemplateResult {
+/** The time the head's "Printed …" line gives, to the minute (one call to the locale a minute). */
+let printed = { minute: NaN, text: '' };
+export function printedText(): string {
+  const minute = Math.floor(Date.now() / 60_000);
+  if (minute !== printed.minute) printed = { minute, text: new Date().toLocaleString() };
+  return printed.text;
+}
+
+/** The heating chart's series and the liquid and peak temperatures it was asked for, K. */
+export interface ShownCurve {
+  curve: HeatingCurve;
+  now: number;
+  peak: number;
+}
+
+/**
+ * Asks for the heating chart of a check's outcome a moment later (curve-later.ts); `show` gets
+ * it with the temperatures it was asked for, so the chart's markers move with its series, not on
+ * the keystroke. No result: no chart, at once. Returns the cancel.
+ */
+export function chartLater(
+  productId: string,
+  outcome: CheckOutcome,
+  show: (c: ShownCurve | null) => void,
+): () => void {
+  if (!outcome.result || !outcome.input) {
+    show(null);
+    return () => {};
+  }
+  const now = outcome.input.liquidTemperature;
+  const peak = outcome.result.peak.temperature;
+  return curveLater(productId, outcome, (c) => show(c ? { curve: c, now, peak } : null));
+}
+
+/**
+ * The heating chart with its heading. Its markers come with its series: a keystroke leaves the
+ * chart alone until the new series arrives (the chart is drawn again once, not twice).
+ */
+export function chartPart(t: TankRecord, d: DisplayUnits, c: ShownCurve): TemplateResult {
   const np = t.nameplate;
   return html`<h3>Heating</h3>
     <check-chart
-      .curve=${curve}
+      .curve=${c.curve}
       .display=${d}
       .designPressure=${np.designPressure}
       .reliefPressure=${np.reliefSetPressure ?? np.designPressure}
-      .nowTemperature=${nowTemperature}
-      .peakTemperature=${result.peak.temperature}
+      .nowTemperature=${c.now}
+      .peakTemperature=${c.peak}
     ></check-chart>`;
 }
 

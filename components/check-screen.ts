@@ -25,6 +25,7 @@
  * <check-results>, <check-chart>, <check-history> and <fill-history>.
  */
 import { LitElement, html, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { guard } from 'lit/directives/guard.js';
 import type { TankCheckResult } from '../thermo/check/types.js';
 import { checkScreenStyles } from './check-screen-styles.js';
 import { baseStyles } from './styles.js';
@@ -39,19 +40,20 @@ import './fill-history.js';
 import { fillStartButton } from './fill-start.js';
 import type { FillRecord } from './fill-types.js';
 import type { ReadingsChange } from './check-form.js';
-import { screenErrors, type ScreenErrors } from './check-errors.js';
+import { keptScreenErrors, type ScreenErrors } from './check-errors.js';
 import { buildCheckInput, minTemperatureFor, runCheck, type CheckOutcome } from './check-input.js';
 import { requestCheck } from './check-client.js';
 import type { SiteRules } from './site-rules.js';
-import type { HeatingCurve } from './chart-data.js';
-import { curveLater } from './curve-later.js';
 import {
   actionsPart,
   barPart,
+  chartLater,
   chartPart,
   checkRecordOf,
   headPart,
+  printedText,
   stalePart,
+  type ShownCurve,
 } from './check-screen-parts.js';
 import { summaryText } from './summary.js';
 import { shareText } from './share.js';
@@ -111,7 +113,8 @@ export class CheckScreen extends LitElement {
   declare _readings: Readings;
   declare _valid: boolean;
   declare _outcome: CheckOutcome | null;
-  declare _curve: HeatingCurve | null;
+  /** The heating chart's series with the temperatures it was computed for. */
+  declare _curve: ShownCurve | null;
   /** A check is under way and the figures shown are those of the previous readings. */
   declare _updating: boolean;
   declare _status: string;
@@ -125,6 +128,10 @@ export class CheckScreen extends LitElement {
   private _pending: Promise<void> | null = null;
   private _busyTimer: ReturnType<typeof setTimeout> | undefined;
   private _display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
+  /** Lowest liquid temperature of the tank's product, K (changes only with the tank). */
+  private _minT = minTemperatureFor('');
+  /** Refusals worded for the outcome on screen (the same object while they stay the same). */
+  private _errorsKept = keptScreenErrors();
 
   constructor() {
     super();
@@ -150,6 +157,7 @@ export class CheckScreen extends LitElement {
 
   protected override willUpdate(changed: PropertyValues<this>): void {
     if (changed.has('settings')) this._display = DisplayUnits.fromSettings(this.settings);
+    if (changed.has('tank')) this._minT = minTemperatureFor(this.tank.productId);
     if (changed.has('readings')) {
       this._readings = this.readings;
       this._valid = true;
@@ -163,9 +171,10 @@ export class CheckScreen extends LitElement {
       this._recompute();
   }
 
-  protected override updated(): void {
+  protected override updated(changed: PropertyValues<this>): void {
     // The engine input behind the figures on screen, for end-to-end tests and for anyone who
     // wants to re-run `checkTank` on exactly what the screen used (SI, as JSON).
+    if (!changed.has('_outcome') && !changed.has('_valid')) return;
     const input = this._outcome?.input;
     if (input && this._valid) this.dataset.checkInput = JSON.stringify(input);
     else delete this.dataset.checkInput;
@@ -234,8 +243,7 @@ export class CheckScreen extends LitElement {
     this._updating = false;
     this._outcome = outcome;
     this._cancelChart();
-    if (!outcome.result || !outcome.input) this._curve = null;
-    else this._cancelChart = curveLater(this.tank.productId, outcome, (c) => (this._curve = c));
+    this._cancelChart = chartLater(this.tank.productId, outcome, (c) => (this._curve = c));
   }
 
   private _onReadings(e: CustomEvent<ReadingsChange>): void {
@@ -313,7 +321,7 @@ export class CheckScreen extends LitElement {
 
   /** Engine refusals as per-field messages and one line for the results. */
   private _errors(): ScreenErrors {
-    return screenErrors(this._outcome, this._valid, this._display);
+    return this._errorsKept(this._outcome, this._valid, this._display);
   }
 
   /** "2 Dec 2026, 14:05, 4 days old" when the readings in use are old, else empty. */
@@ -334,7 +342,7 @@ export class CheckScreen extends LitElement {
     const last = hasMeasured(this._readings) ? null : lastReadings(this.last, this.checks);
     return html`
       <div data-testid="check-screen">
-        ${headPart(t, d, () => this._editTank())}
+        ${guard([t, d, printedText()], () => headPart(t, d, () => this._editTank()))}
         ${barPart({ result, display: d, outcome: o, error, stale, updating: this._updating })}
         <last-check .last=${last} .display=${d} @readings-reuse=${this._reuse}></last-check>
         ${stalePart(stale)}
@@ -342,7 +350,7 @@ export class CheckScreen extends LitElement {
           <check-form
             .readings=${this.readings}
             .display=${d}
-            .minTemperature=${minTemperatureFor(t.productId)}
+            .minTemperature=${this._minT}
             .hasShape=${np.shape !== undefined}
             .fieldErrors=${fieldErrors}
             @readings-change=${this._onReadings}
@@ -357,11 +365,7 @@ export class CheckScreen extends LitElement {
               ?peak-estimated=${o?.peakEstimated ?? false}
             ></check-results>
             ${this._actions(result)}
-            ${
-              result && this._curve
-                ? chartPart(t, d, this._curve, result, o?.input?.liquidTemperature ?? Number.NaN)
-                : nothing
-            }
+            ${result && this._curve ? chartPart(t, d, this._curve) : nothing}
             <h3>History</h3>
             <check-history .checks=${this.checks} .display=${d}></check-history>
             <h3>Fills</h3>

@@ -6,10 +6,14 @@
 // Figures go to stdout and to .reports/audit.json.
 //   npm run audit -- --latency-only            (skips the byte count and Lighthouse)
 //   npm run audit -- --no-build --dist DIR     (serves an existing build, e.g. of another commit)
+//   npm run audit -- --latency-only --compare DIR [--runs N] [--tank TEXT]
+//       before and after back to back: every demo tank is timed on DIR (another build, "before")
+//       and on this one ("after") in turn, N rounds (default 3), so both see the same machine
+//       load; prints each tank's median and p90 per round and their medians over the rounds.
 // Code inside page.evaluate() runs in the browser:
 /* global MutationObserver, requestAnimationFrame */
 import { execSync, spawnSync } from 'node:child_process';
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { gzipSync } from 'node:zlib';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
@@ -38,6 +42,9 @@ const args = process.argv.slice(2);
 const LATENCY_ONLY = args.includes('--latency-only');
 const NO_BUILD = args.includes('--no-build');
 const DIST = args.includes('--dist') ? args[args.indexOf('--dist') + 1] : 'dist';
+const COMPARE = args.includes('--compare') ? args[args.indexOf('--compare') + 1] : null;
+const RUNS = args.includes('--runs') ? Number(args[args.indexOf('--runs') + 1]) : 3;
+const TANK = args.includes('--tank') ? args[args.indexOf('--tank') + 1] : '';
 
 const chromePath =
   process.env.CHROME_PATH ||
@@ -51,13 +58,15 @@ if (!NO_BUILD) {
   if (build.status !== 0) process.exit(build.status ?? 1);
 }
 
-const server = await preview({
-  configFile: false,
-  logLevel: 'warn',
-  build: { outDir: DIST },
-  preview: { host: '127.0.0.1', port: 0, strictPort: true },
-});
-const url = server.resolvedUrls.local[0];
+const serve = (outDir) =>
+  preview({
+    configFile: false,
+    logLevel: 'warn',
+    build: { outDir },
+    preview: { host: '127.0.0.1', port: 0, strictPort: true },
+  });
+const server = await serve(DIST);
+let url = server.resolvedUrls.local[0];
 const report = {
   url,
   date: new Date().toISOString(),
@@ -69,6 +78,12 @@ const report = {
 
 const browser = await chromium.launch({ executablePath: chromePath, headless: true, args: FLAGS });
 report.chromium = browser.version();
+if (COMPARE) {
+  await compareBuilds();
+  await browser.close();
+  await server.close();
+  process.exit(0);
+}
 try {
   if (!LATENCY_ONLY) report.firstLoad = await measureFirstLoad();
   report.latency = await measureLatencyAll();
@@ -119,6 +134,47 @@ async function demoTankNames() {
   } finally {
     await context.close();
   }
+}
+
+/** `--compare`: before (COMPARE) and after (DIST) on every demo tank in turn, RUNS rounds. */
+async function compareBuilds() {
+  const other = await serve(COMPARE);
+  const urls = { before: other.resolvedUrls.local[0], after: server.resolvedUrls.local[0] };
+  url = urls.after;
+  const names = (await demoTankNames()).filter((n) => n.includes(TANK));
+  const rows = new Map(names.map((n) => [n, { before: [], after: [] }]));
+  for (let run = 1; run <= RUNS; run++) {
+    for (const name of names) {
+      for (const which of run % 2 ? ['before', 'after'] : ['after', 'before']) {
+        url = urls[which];
+        const load = loadAverage();
+        const r = await measureLatency(name);
+        const f = r.toNextFrameMs;
+        rows.get(name)[which].push(f ? { ...f, load } : { error: r.error, load });
+        console.log(
+          `round ${run} ${which.padEnd(6)} ${name.padEnd(36)} ${f ? `median ${f.median} ms, p90 ${f.p90} ms` : r.error} (load ${load})`,
+        );
+      }
+    }
+  }
+  await other.close();
+  const mid = (xs) => [...xs].sort((a, b) => a - b)[Math.floor((xs.length - 1) / 2)];
+  const span = (xs) => `${Math.min(...xs)}–${Math.max(...xs)}`;
+  console.log(`\nnext painted frame, median over ${RUNS} rounds (range), ms: before → after`);
+  for (const [name, { before, after }] of rows) {
+    const ok = (xs) => xs.filter((x) => x.median !== undefined);
+    const fmt = (xs, k) => `${mid(ok(xs).map((x) => x[k]))} (${span(ok(xs).map((x) => x[k]))})`;
+    console.log(
+      `  ${name.padEnd(36)} median ${fmt(before, 'median')} → ${fmt(after, 'median')}; p90 ${fmt(before, 'p90')} → ${fmt(after, 'p90')}`,
+    );
+  }
+  mkdirSync('.reports', { recursive: true });
+  writeFileSync('.reports/audit-compare.json', JSON.stringify([...rows], null, 2));
+}
+
+/** The 1-minute load average (what `uptime` shows first). */
+function loadAverage() {
+  return readFileSync('/proc/loadavg', 'utf8').split(' ')[0];
 }
 
 /** Latency on every demo tank, one fresh page each. */

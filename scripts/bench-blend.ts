@@ -6,22 +6,13 @@
  * before and after can be run back to back on one machine. Reported figures, not tests.
  */
 import { performance } from 'node:perf_hooks';
-import { resolve } from 'node:path';
-import { pathToFileURL } from 'node:url';
-
-const root = process.argv[2] ? resolve(process.argv[2]) : resolve(import.meta.dirname, '../thermo');
-const at = (p: string) => pathToFileURL(`${root}/${p}`).href;
-const { checkTank } = (await import(
-  at('check/checkTank.ts')
-)) as typeof import('../thermo/check/checkTank.js');
-const { LPG_PRESETS } = (await import(
-  at('rules/presets.ts')
-)) as typeof import('../thermo/rules/presets.js');
-const { closedTank } = (await import(at('api.ts'))) as typeof import('../thermo/api.js');
-const { toSI } = (await import(at('units.ts'))) as typeof import('../thermo/units.js');
+import { engineRoot, hd5Blend, loadEngine } from './bench/engine-copy.js';
 type Input = import('../thermo/check/types.js').TankCheckInput;
 
-const blend = LPG_PRESETS.find((p) => p.id === 'hd5-limit')!.product;
+const root = engineRoot();
+const engine = await loadEngine(root);
+const { checkTank, closedTank, toSI } = engine;
+const blend = hd5Blend(engine);
 
 function input(liquidC: number, gauge: number, peakC: number): Input {
   return {

@@ -34,7 +34,10 @@ function knownOf(product: ResolvedProduct, kind: 'bubble' | 'dew'): Known[] {
   if (!m) {
     // A blend the app offers starts with bubble points near the top of its curve (blendSeeds.ts).
     const seed = blendSeed(product)?.bubble ?? [];
-    const bubble = seed.map((s) => ({ T: s.T, start: { p: s.p, K: Float64Array.from(s.K) } }));
+    const bubble = seed.map(([T, p, ...K]) => ({
+      T: T!,
+      start: { p: p!, K: Float64Array.from(K) },
+    }));
     m = { bubble: bubble.sort((a, b) => a.T - b.T), dew: [] };
     memory.set(product, m);
   }
@@ -59,6 +62,23 @@ function remember(list: Known[], k: Known): void {
   else list.splice(i, 0, k);
   // Thin evenly when full, so the memory keeps covering the whole range.
   if (list.length > MEMORY) for (let j = list.length - 2; j > 0; j -= 2) list.splice(j, 1);
+}
+
+/**
+ * A start at T between the two known points either side of it, when both lie within NEAR: ln p
+ * and ln K linear in 1/T (nearly straight along a saturation curve), so the start is off by the
+ * curvature only, not by the slope — fewer steps to the same convergence test.
+ */
+function between(list: readonly Known[], T: number): Start | undefined {
+  const i = lowerBound(list, T);
+  const a = list[i - 1];
+  const b = list[i];
+  if (!a || !b || b.T === T || T - a.T >= NEAR || b.T - T >= NEAR) return undefined;
+  const w = (1 / T - 1 / a.T) / (1 / b.T - 1 / a.T);
+  const mix = (x: number, y: number) => Math.exp((1 - w) * Math.log(x) + w * Math.log(y));
+  const K = new Float64Array(a.start.K.length);
+  for (let j = 0; j < K.length; j++) K[j] = mix(a.start.K[j]!, b.start.K[j]!);
+  return { p: mix(a.start.p, b.start.p), K };
 }
 
 function nearest(list: readonly Known[], T: number): Known | undefined {
@@ -94,11 +114,15 @@ export function saturationPointAt(
   const attempt = (TT: number, st?: Start) =>
     saturationPressure(mixtureAtT(product, TT), product.z, kind, st);
   const near = nearest(list, T);
-  const first = start ?? (near && Math.abs(near.T - T) < NEAR ? near.start : undefined);
-  try {
-    return keep(attempt(T, first), T);
-  } catch (e) {
-    if (!(e instanceof ConvergenceError)) throw e;
+  const nearStart = near && Math.abs(near.T - T) < NEAR ? near.start : undefined;
+  // Tried in turn: the caller's start, else the one between known points, then the nearest.
+  const starts = start ? [start] : [between(list, T), nearStart].filter((s) => s !== undefined);
+  for (const st of starts.length ? starts : [undefined]) {
+    try {
+      return keep(attempt(T, st), T);
+    } catch (e) {
+      if (!(e instanceof ConvergenceError)) throw e;
+    }
   }
   // March up from the nearest point found below T, else from a cold start lower down.
   const below = list[lowerBound(list, T) - 1];
