@@ -99,7 +99,7 @@ describe('register loading', () => {
       },
     };
     await loadRegister(store, sink, true);
-    await waitUntil(() => checks.length === 3, 'every check read');
+    await waitUntil(() => checks.length === 3, 'every check read', { timeout: 30_000 });
     // First screen: No site (3), then Site 1 and Site 2 together (37): 40 ≥ 24.
     expect(log).to.deep.equal(['first 40', 'head 55', 'checks 3']);
     expect(tanks).to.equal(55);
