@@ -26,17 +26,17 @@ import { tankListStyles } from './tank-list-styles.js';
 import { DisplayUnits } from './display.js';
 import { productLabel } from './products.js';
 import { formatDate } from './format-date.js';
-import { groupBySite, rowsFor, searchText, type TankRow } from './tank-rows.js';
+import type { TankRow } from './tank-rows.js';
+import { TankFinder } from './tank-find.js';
+import { whenIdle } from './idle.js';
 import { DEFAULT_SETTINGS, type CheckBrief, type TankRecord } from './types.js';
 
 /**
- * Groups and search texts per `tanks` array, kept across visits to the list (the shell hands the
- * same array until the register changes), so reopening the list does not sort it again.
+ * The sorted rows and the search per `tanks` array, kept across visits to the list (the shell
+ * hands the same array until the register changes, and a new array after any change), so
+ * reopening the list neither sorts it nor builds its search again.
  */
-const memo = new WeakMap<
-  readonly TankRecord[],
-  { groups: [string, TankRecord[]][]; text: WeakMap<TankRecord, string> }
->();
+const finders = new WeakMap<readonly TankRecord[], TankFinder>();
 
 /** From this many tanks on, the list is virtualised. */
 export const VIRTUAL_FROM = 60;
@@ -50,6 +50,7 @@ export class TankList extends LitElement {
     tanks: { attribute: false },
     lastChecks: { attribute: false },
     display: { attribute: false },
+    partial: { type: Boolean },
     _query: { state: true },
   };
 
@@ -59,6 +60,8 @@ export class TankList extends LitElement {
   declare lastChecks: Record<string, CheckBrief | undefined>;
   /** The user's display units. */
   declare display: DisplayUnits;
+  /** Only the first sites of the register are read yet (the list's first screen, at start-up). */
+  declare partial: boolean;
   declare _query: string;
 
   constructor() {
@@ -66,6 +69,7 @@ export class TankList extends LitElement {
     this.tanks = [];
     this.lastChecks = {};
     this.display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
+    this.partial = false;
     this._query = '';
   }
 
@@ -75,20 +79,20 @@ export class TankList extends LitElement {
     this.dispatchEvent(new CustomEvent<T>(type, { detail, bubbles: true, composed: true }));
   }
 
-  /** The rows to show: sites with their tanks, after the search. */
-  private _rows(): TankRow[] {
-    let m = memo.get(this.tanks);
-    if (!m) {
-      m = { groups: groupBySite(this.tanks), text: new WeakMap() };
-      memo.set(this.tanks, m);
-    }
-    const text = m.text;
-    const textOf = (t: TankRecord) => {
-      let s = text.get(t);
-      if (s === undefined) text.set(t, (s = searchText(t)));
-      return s;
+  private _finder(): TankFinder {
+    let f = finders.get(this.tanks);
+    if (!f) finders.set(this.tanks, (f = new TankFinder(this.tanks)));
+    return f;
+  }
+
+  /** A new register: its search is built in idle moments, so the first keystroke finds at once. */
+  protected override updated(changed: Map<PropertyKey, unknown>): void {
+    if (!changed.has('tanks') || this.partial) return;
+    const f = this._finder();
+    const more = () => {
+      if (!f.prepare() && f === finders.get(this.tanks)) whenIdle(more);
     };
-    return rowsFor(m.groups, this._query, textOf);
+    if (!f.prepared) whenIdle(more);
   }
 
   private _site(site: string, count: number): TemplateResult {
@@ -105,8 +109,12 @@ export class TankList extends LitElement {
     </div>`;
   }
 
-  private _row = (r: TankRow): TemplateResult =>
-    r.kind === 'site' ? this._site(r.site, r.count) : this._tank(r.tank);
+  /**
+   * One row. The virtualiser can ask once more for a row of its last range after the rows got
+   * fewer (a search that no longer matches once a tank is deleted): nothing is drawn for it.
+   */
+  private _row = (r: TankRow | undefined): TemplateResult =>
+    r === undefined ? html`` : r.kind === 'site' ? this._site(r.site, r.count) : this._tank(r.tank);
 
   private _tank(t: TankRecord) {
     const d = this.display;
@@ -176,8 +184,7 @@ export class TankList extends LitElement {
 
   override render() {
     const hasDemo = this.tanks.some((t) => t.demo);
-    const rows = this.tanks.length ? this._rows() : [];
-    const shown = rows.reduce((n, r) => n + (r.kind === 'tank' ? 1 : 0), 0);
+    const { rows, shown } = this._finder().find(this._query);
     const virtual = this.tanks.length >= VIRTUAL_FROM;
     return html`
       <div class="head">
@@ -220,7 +227,13 @@ export class TankList extends LitElement {
         />
       </div>
       <p class="found" data-testid="tank-found" role="status">
-        ${q ? `${shown} of ${this.tanks.length} tanks match “${q}”.` : `${this.tanks.length} tanks.`}
+        ${
+          this.partial
+            ? 'Reading the rest of the register…'
+            : q
+              ? `${shown} of ${this.tanks.length} tanks match “${q}”.`
+              : `${this.tanks.length} tanks.`
+        }
       </p>`;
   }
 
@@ -237,7 +250,8 @@ export class TankList extends LitElement {
   }
 }
 
-const rowKey = (r: TankRow): string => (r.kind === 'site' ? `site:${r.site}` : r.tank.id);
+const rowKey = (r: TankRow | undefined, i: number): string =>
+  r === undefined ? `gone:${i}` : r.kind === 'site' ? `site:${r.site}` : r.tank.id;
 
 customElements.define('tank-list', TankList);
 

@@ -1,7 +1,8 @@
 /**
  * The tank register's rows, pure and DOM-free: tanks grouped by site (sites and names in a
- * natural order), a search over name, site and product, and the flat list of rows (a site's
- * heading, then its tanks) that <tank-list> shows, virtualised when long.
+ * natural order) and what a search looks in (name, site and product, folded). The flat list of
+ * rows (a site's heading, then its tanks) that <tank-list> shows, virtualised when long, and the
+ * search over it are components/tank-find.ts.
  */
 import { productLabel } from './products.js';
 import type { TankRecord } from './types.js';
@@ -11,8 +12,14 @@ export type TankRow =
 
 const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
 
+/** The order of sites and of names in the list (natural: "Site 2" before "Site 10"). */
+export const compareNames = (a: string, b: string): number => collator.compare(a, b);
+
+/** The heading a stored site is listed under. */
+export const siteLabel = (site: string): string => site.trim() || 'No site';
+
 /** The site a tank is listed under. */
-export const siteOf = (t: TankRecord): string => t.site.trim() || 'No site';
+export const siteOf = (t: TankRecord): string => siteLabel(t.site);
 
 /** Sites in natural order, each with its tanks by name. */
 export function groupBySite(tanks: readonly TankRecord[]): [string, TankRecord[]][] {
@@ -30,6 +37,8 @@ export function groupBySite(tanks: readonly TankRecord[]): [string, TankRecord[]
 
 /** Folds case and accents, so "pre" finds "Pré-Alpes" and "PROPANE" finds "Propane". */
 export function fold(text: string): string {
+  // Plain ASCII (most names) has no accents to strip: only the case is folded.
+  if (!/[\u0080-\uffff]/.test(text)) return text.toLowerCase();
   return text
     .normalize('NFD')
     .replace(/[\u0300-\u036f]/g, '')
@@ -39,26 +48,4 @@ export function fold(text: string): string {
 /** What a search looks in: the tank's name, its site and its product's label, folded. */
 export function searchText(t: TankRecord): string {
   return fold(`${t.name}\n${t.site}\n${productLabel(t.productId)}`);
-}
-
-/**
- * Rows for the groups, keeping only tanks whose search text holds every word of `query`
- * (words separated by spaces; an empty query keeps all). A site with no tank left is dropped.
- */
-export function rowsFor(
-  groups: readonly [string, TankRecord[]][],
-  query: string,
-  textOf: (t: TankRecord) => string,
-): TankRow[] {
-  const words = fold(query).split(/\s+/).filter(Boolean);
-  const rows: TankRow[] = [];
-  for (const [site, list] of groups) {
-    const kept = words.length
-      ? list.filter((t) => words.every((w) => textOf(t).includes(w)))
-      : list;
-    if (kept.length === 0) continue;
-    rows.push({ kind: 'site', site, count: kept.length });
-    for (const tank of kept) rows.push({ kind: 'tank', tank });
-  }
-  return rows;
 }

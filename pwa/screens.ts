@@ -18,7 +18,8 @@ import type { Store } from './storage.js';
 import type { OpenDraft } from './drafts.js';
 import type { FillController } from './fill-route.js';
 import type { DataController } from './data-controller.js';
-import '../components/tank-list.js';
+import type { RegisterHead } from './register-load.js';
+import { tanksScreen } from './tanks-screen.js';
 import '../components/tank-form.js';
 import '../components/settings-form.js';
 import '../components/backup-panel.js';
@@ -48,6 +49,8 @@ export interface ScreenContext {
   checks: CheckRecord[];
   /** Newest check per tank, for the list. */
   lastChecks: Record<string, CheckBrief | undefined>;
+  /** The list's first screen while the whole register is still being read (start-up), else null. */
+  first: RegisterHead | null;
   /** The blank tank of the "add a tank" screen. */
   newTank: TankRecord;
   draft: OpenDraft | null;
@@ -65,6 +68,8 @@ const loading = () => html`<p>Loading…</p>`;
 export function renderScreen(c: ScreenContext): TemplateResult {
   const r = c.route;
   const tank = (id: string) => c.tanks.find((t) => t.id === id);
+  // Until the whole register is read, only the list (its first screen) can be shown.
+  if (c.first && r.name !== 'tanks') return loading();
   switch (r.name) {
     case 'tanks':
       return tanksScreen(c);
@@ -100,22 +105,6 @@ export function renderScreen(c: ScreenContext): TemplateResult {
         <a class="button" href="#/">Go to the tanks</a>
       </div>`;
   }
-}
-
-function tanksScreen(c: ScreenContext): TemplateResult {
-  return html`<tank-list
-    .tanks=${c.tanks}
-    .lastChecks=${c.lastChecks}
-    .display=${DisplayUnits.fromSettings(c.settings)}
-    @tank-open=${(e: CustomEvent<TankIdDetail>) => c.navigate({ name: 'check', id: e.detail.id })}
-    @tank-edit=${(e: CustomEvent<TankIdDetail>) => c.navigate({ name: 'edit', id: e.detail.id })}
-    @tank-add=${() => c.navigate({ name: 'new' })}
-    @tank-duplicate=${c.on.duplicate}
-    @tank-delete=${c.on.deleteTank}
-    @demo-clear=${c.on.clearDemo}
-    @site-walk=${(e: CustomEvent<{ site: string }>) =>
-      c.navigate({ name: 'site', site: e.detail.site })}
-  ></tank-list>`;
 }
 
 function siteScreen(

@@ -78,6 +78,34 @@ export class StoreBase {
     return this.db.get('tanks', id);
   }
 
+  /** Every site tanks are filed under, as stored, in key order: read from the index, no tank read. */
+  async tankSites(): Promise<string[]> {
+    const sites: string[] = [];
+    const index = this.db.transaction('tanks').store.index('site');
+    for (let c = await index.openKeyCursor(null, 'nextunique'); c; c = await c.continue())
+      sites.push(c.key);
+    return sites;
+  }
+
+  /** The tanks filed under these sites (as stored) and each one's newest check in brief. */
+  async tanksAt(sites: string[]): Promise<{ tanks: TankRecord[]; latest: CheckBrief[] }> {
+    const tx = this.db.transaction(['tanks', 'latestChecks']);
+    const index = tx.objectStore('tanks').index('site');
+    const tanks = (await Promise.all(sites.map((s) => index.getAll(s)))).flat();
+    const found = await Promise.all(tanks.map((t) => tx.objectStore('latestChecks').get(t.id)));
+    return { tanks, latest: found.filter((b): b is CheckBrief => b !== undefined) };
+  }
+
+  /** Up to `count` records of `store` in key order after the key `after` (from the first if null). */
+  async recordsAfter<S extends 'tanks' | 'latestChecks'>(
+    store: S,
+    after: string | null,
+    count: number,
+  ): Promise<TanksideDB[S]['value'][]> {
+    const range = after === null ? null : IDBKeyRange.lowerBound(after, true);
+    return this.db.getAll(store, range, count);
+  }
+
   async putTank(tank: TankRecord): Promise<void> {
     await this.noted([{ kind: 'tank', key: tank.id }], () => this.db.put('tanks', tank));
   }

@@ -18,14 +18,7 @@ import type { CheckSaveDetail } from '../components/check-screen.js';
 import type { ReadingsChange } from '../components/check-form.js';
 import type { SettingsChange } from '../components/settings-form.js';
 import type { BackupImportDetail } from '../components/backup-panel.js';
-import {
-  DEFAULT_SETTINGS,
-  newId,
-  type CheckBrief,
-  type CheckRecord,
-  type Settings,
-  type TankRecord,
-} from '../components/types.js';
+import { DEFAULT_SETTINGS, newId, type Settings, type TankRecord } from '../components/types.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
 import { DB_NAME, Store, requestPersistentStorage, type Meta } from './storage.js';
 import type { Route } from './router.js';
@@ -40,8 +33,8 @@ import { RouteController } from './route-controller.js';
 import { renderScreen, type ScreenHandlers } from './screens.js';
 import { appHeader } from './app-header.js';
 import { siteRulesOf } from '../components/site-rules.js';
-import { table } from './lookups.js';
-import { loadChecksLater, loadRegisterHead } from './register-load.js';
+import { loadRegister } from './register-load.js';
+import { RegisterState } from './register-state.js';
 import { syncAddOns } from './sync/shell-hooks.js';
 import { syncHub } from './sync/hub.js';
 
@@ -51,8 +44,6 @@ export class TanksideApp extends LitElement {
     _ready: { state: true },
     _fatal: { state: true },
     _settings: { state: true },
-    _tanks: { state: true },
-    _checks: { state: true },
     _persisted: { state: true },
   };
 
@@ -62,10 +53,8 @@ export class TanksideApp extends LitElement {
   declare _ready: boolean;
   declare _fatal: string;
   declare _settings: Settings;
-  declare _tanks: TankRecord[];
-  declare _checks: CheckRecord[];
-  /** Newest check per tank, for the list (read without reading every check). */
-  private _last = table<CheckBrief>();
+  /** The tanks, their newest checks in brief, every check (pwa/register-state.ts). */
+  private readonly _reg = new RegisterState(this);
   declare _persisted: boolean | null;
 
   /** The blank tank of the "add a tank" screen, made once per visit so a re-render keeps the typing. */
@@ -88,8 +77,8 @@ export class TanksideApp extends LitElement {
     store: () => this._store,
     current: () => ({
       settings: this._settings,
-      tanks: this._tanks,
-      checks: this._checks,
+      tanks: this._reg.tanks,
+      checks: this._reg.checks,
       fills: this._fill.fills,
     }),
     importedSettings: (s) => this._applySettings(s),
@@ -102,8 +91,6 @@ export class TanksideApp extends LitElement {
     this._ready = false;
     this._fatal = '';
     this._settings = DEFAULT_SETTINGS;
-    this._tanks = [];
-    this._checks = [];
     this._persisted = null;
   }
 
@@ -140,7 +127,7 @@ export class TanksideApp extends LitElement {
       this._meta = { ...this._meta, demoSeeded: true };
       await store.putMeta(this._meta);
     }
-    await this._reload(false);
+    await this._reload(true);
     this._ready = true;
     void syncHub.start(store, this.dbName, () => void this._reload());
     await this._router.go(this._router.route);
@@ -156,17 +143,13 @@ export class TanksideApp extends LitElement {
     }
   }
 
-  /** Reads the register again; every check too, awaited unless `waitChecks` is false (start-up). */
-  private async _reload(waitChecks = true): Promise<void> {
+  /** Reads the register again, every check too (start-up: the list's first screen first, checks later). */
+  private async _reload(startUp = false): Promise<void> {
     if (!this._store) return;
-    const store = this._store;
-    const read = () => loadChecksLater(store, (c) => (this._checks = c), !waitChecks);
-    const all = waitChecks ? read() : null; // at start-up, after the list is shown
-    const [head] = await Promise.all([loadRegisterHead(store), this._fill.reload(store)]);
-    this._last = head.last;
-    this._tanks = head.tanks;
-    if (all) await all;
-    else void read();
+    await Promise.all([
+      loadRegister(this._store, this._reg, startUp),
+      this._fill.reload(this._store),
+    ]);
   }
 
   private _applyTheme(): void {
@@ -183,7 +166,7 @@ export class TanksideApp extends LitElement {
     if (!this._store) return;
     if (route.name === 'fill') await this._fill.open(this._store, route.id);
     if (route.name === 'check') {
-      const site = this._tanks.find((t) => t.id === route.id)?.site;
+      const site = this._tank(route.id)?.site;
       const [draft, siteRecord] = await Promise.all([
         this._store.getDraft(route.id),
         site !== undefined ? this._store.getSite(site) : undefined,
@@ -212,7 +195,7 @@ export class TanksideApp extends LitElement {
 
   // ── tanks ──────────────────────────────────────────────────────────────────────────────
   private _tank(id: string): TankRecord | undefined {
-    return this._tanks.find((t) => t.id === id);
+    return this._reg.tank(id);
   }
 
   private async _saveTank(e: CustomEvent<TankSaveDetail>): Promise<void> {
@@ -294,7 +277,7 @@ export class TanksideApp extends LitElement {
   private async _deleteCheck(e: CustomEvent<{ id: string }>): Promise<void> {
     if (!this._store) return;
     const store = this._store;
-    const check = this._checks.find((c) => c.id === e.detail.id);
+    const check = this._reg.checks.find((c) => c.id === e.detail.id);
     if (!check) return;
     await store.deleteCheck(check.id);
     await this._reload();
@@ -360,9 +343,10 @@ export class TanksideApp extends LitElement {
       route: router.route,
       store: this._store,
       settings: this._settings,
-      tanks: this._tanks,
-      checks: this._checks,
-      lastChecks: this._last,
+      tanks: this._reg.tanks,
+      checks: this._reg.checks,
+      lastChecks: this._reg.last,
+      first: this._reg.firstScreen,
       newTank: this._newTank,
       draft: this._drafts.current,
       fill: this._fill,
@@ -382,7 +366,7 @@ export class TanksideApp extends LitElement {
         <main tabindex="-1">
           ${this._fatal ? html`<p class="error" role="alert" data-testid="app-error">${this._fatal}</p>` : nothing}
           ${this._ready ? syncAddOns(this._router.route, this._settings, 'before') : nothing}
-          ${this._ready ? this._screen() : html`<p>Loading…</p>`}
+          ${this._ready || this._reg.firstScreen ? this._screen() : html`<p>Loading…</p>`}
           ${this._ready ? syncAddOns(this._router.route, this._settings, 'after') : nothing}
         </main>
         ${this._notices.render()}

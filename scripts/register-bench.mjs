@@ -6,25 +6,12 @@
 //   node scripts/register-bench.mjs [runs] [dist-dir]
 // (dist-dir: another build to time instead, e.g. of an earlier commit, for before and after.)
 // Reported figures, never a timed test (they depend on the machine and its load).
-import { preview } from 'vite';
-import { chromium } from 'playwright-core';
+import { serveAndLaunch } from './lib/bench-browser.mjs';
 import { saveOneCheck, seedRegister } from './lib/register-seed.mjs';
 
 const RUNS = Number(process.argv[2] ?? 3);
-const root = new URL('../', import.meta.url).pathname;
 const outDir = process.argv[3] ?? 'dist';
-const server = await preview({
-  configFile: false,
-  root,
-  build: { outDir },
-  preview: { port: 0, host: '127.0.0.1' },
-  logLevel: 'silent',
-});
-const url = server.resolvedUrls.local[0];
-const browser = await chromium.launch({
-  executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
-  args: ['--headless=new', '--no-sandbox', '--disable-gpu'],
-});
+const { url, browser, close } = await serveAndLaunch(outDir);
 const PHONE = { viewport: { width: 360, height: 740 }, deviceScaleFactor: 2, isMobile: true };
 const median = (xs) => xs.slice().sort((a, b) => a - b)[Math.floor((xs.length - 1) / 2)];
 const FIRST_ROW = '[data-testid=tank-item]';
@@ -141,5 +128,4 @@ console.log(
 console.log(
   `  search "tank 4321" typed → row painted:        ${f(median(r.search))} ms  [${r.search.map(f).join(', ')}]`,
 );
-await browser.close();
-await server.httpServer.close();
+await close();

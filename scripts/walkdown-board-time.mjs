@@ -6,23 +6,10 @@
 //   node scripts/walkdown-board-time.mjs [runs]
 // Never a timed test: the figures depend on the machine. The tanks are invented copies of the
 // demo tanks' nameplates and readings.
-import { preview } from 'vite';
-import { chromium } from 'playwright-core';
+import { serveAndLaunch } from './lib/bench-browser.mjs';
 
 const RUNS = Number(process.argv[2] ?? 3);
-const root = new URL('../', import.meta.url).pathname;
-const server = await preview({
-  configFile: false,
-  root,
-  build: { outDir: 'dist' },
-  preview: { port: 0, host: '127.0.0.1' },
-  logLevel: 'silent',
-});
-const url = server.resolvedUrls.local[0];
-const browser = await chromium.launch({
-  executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
-  args: ['--headless=new', '--no-sandbox', '--disable-gpu'],
-});
+const { url, browser, close } = await serveAndLaunch();
 
 /** Copies the demo tanks (with their demo readings) into a site of `n` tanks. */
 async function seed(page, site, n) {
@@ -123,5 +110,4 @@ for (const n of [6, 200]) {
   await context.close();
 }
 console.table(results);
-await browser.close();
-await server.close();
+await close();

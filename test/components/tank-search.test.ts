@@ -85,4 +85,34 @@ describe('tank-list at scale', () => {
     expect(items(el).length).to.equal(8);
     expect(found(el)).to.equal('8 tanks.');
   });
+
+  it('shows a first screen while the rest is read, then the whole register', async () => {
+    // The first screen as the shell reads it: every tank of the first site in the list's order
+    // (Yard A: tanks 0, 26, 52, …, 4992, i.e. 193 tanks; here the 4 of tanks(100): 0, 26, 52, 78).
+    const all = tanks(100);
+    const first = all.filter((t) => t.site === 'Yard A');
+    const el = await fixture<TankList>(
+      html`<tank-list .tanks=${first} .partial=${true}></tank-list>`,
+    );
+    expect(found(el)).to.equal('Reading the rest of the register…');
+    expect(items(el).map((i) => i.dataset.tankId)).to.deep.equal(['t0', 't26', 't52', 't78']);
+    el.tanks = all;
+    el.partial = false;
+    await waitUntil(() => found(el) === '100 tanks.', 'whole register');
+    typeText(search(el), 'yard z'); // tanks 25, 51, 77: not on the first screen
+    await waitUntil(() => found(el).startsWith('3 of 100'), 'a tank of the rest found');
+  });
+
+  it('finds a tank added and no longer finds one deleted (the search follows the register)', async () => {
+    const all = tanks(100);
+    const el = await fixture<TankList>(html`<tank-list .tanks=${all}></tank-list>`);
+    typeText(search(el), 'tank 99');
+    await waitUntil(() => found(el).startsWith('1 of 100'), 'tank 99');
+    // The shell hands a new array after every change.
+    el.tanks = [...all, { ...all[0]!, id: 't-new', name: 'Tank 990' }];
+    await waitUntil(() => found(el).startsWith('2 of 101'), 'added tank found');
+    el.tanks = all.filter((t) => t.id !== 't99');
+    await waitUntil(() => found(el).startsWith('0 of 99'), 'deleted tank gone');
+    expect(items(el)).to.have.length(0);
+  });
 });

@@ -1,10 +1,11 @@
-// The register's rows and search (components/tank-rows.ts): grouping by site in natural order
-// and a search by name, site or product, checked against hand-made expectations on invented
+// The register's rows and search (components/tank-rows.ts, components/tank-find.ts): grouping by
+// site in natural order and a search by name, site or product, also as it is typed and deleted a
+// letter at a time (the search narrows the last matches), checked against hand-made expectations on invented
 // placeholder tanks (not demo data). Product labels come from the app's product list
 // (components/products.ts): "Propane" and "Anhydrous ammonia" are how the trade names them
 // (common practice).
 import { describe, expect, it } from 'vitest';
-import { groupBySite, rowsFor, searchText } from '../../components/tank-rows.js';
+import { TankFinder } from '../../components/tank-find.js';
 import { productLabel } from '../../components/products.js';
 import type { TankRecord } from '../../components/types.js';
 
@@ -29,10 +30,10 @@ const tanks = [
   tank('d', 'Barn', 'Pré-Alpes', 'propane'),
   tank('e', 'Loose', '', 'r134a'),
 ];
-const memo = new Map(tanks.map((t) => [t, searchText(t)]));
-const text = (t: TankRecord) => memo.get(t)!;
-const ids = (q: string) =>
-  rowsFor(groupBySite(tanks), q, text).map((r) => (r.kind === 'site' ? `[${r.site}]` : r.tank.id));
+const shown = (finder: TankFinder, q: string) =>
+  finder.find(q).rows.map((r) => (r.kind === 'site' ? `[${r.site}]` : r.tank.id));
+// A fresh finder per query: nothing carried over from an earlier search.
+const ids = (q: string) => shown(new TankFinder(tanks), q);
 
 describe('tank rows', () => {
   it('groups by site in natural order (2 before 10), names in natural order, no site last-named', () => {
@@ -60,10 +61,47 @@ describe('tank rows', () => {
   });
 
   it('counts the tanks a search keeps under each site heading', () => {
-    const rows = rowsFor(groupBySite(tanks), 'tank 10 farm 2', text);
-    expect(rows).toEqual([
+    const found = new TankFinder(tanks).find('tank 10 farm 2');
+    expect(found.shown).toBe(1);
+    expect(found.rows).toEqual([
       { kind: 'site', site: 'Farm 2', count: 1 },
       { kind: 'tank', tank: tanks[0] },
     ]);
+  });
+
+  it('finds the same as it is typed, deleted and retyped a letter at a time', () => {
+    // One finder, as the list keeps it: each query after the first narrows or widens the last.
+    const finder = new TankFinder(tanks);
+    const expected: [string, string[]][] = [
+      // "a" is in every text (R-134a too); "ar" in "farm" and "barn", not in "loose … r-134a".
+      ['a', ['[Farm 2]', 'b', 'a', '[Farm 10]', 'c', '[No site]', 'e', '[Pré-Alpes]', 'd']],
+      ['ar', ['[Farm 2]', 'b', 'a', '[Farm 10]', 'c', '[Pré-Alpes]', 'd']],
+      ['tank 1', ['[Farm 2]', 'a', '[Farm 10]', 'c']], // "Tank 10"; "Nurse tank" at "Farm 10"
+      ['tank 10', ['[Farm 2]', 'a', '[Farm 10]', 'c']],
+      ['tank 10 f', ['[Farm 2]', 'a', '[Farm 10]', 'c']],
+      ['tank 10 farm 2', ['[Farm 2]', 'a']],
+      ['tank 10 farm', ['[Farm 2]', 'a', '[Farm 10]', 'c']], // a letter deleted: wider again
+      ['tank', ['[Farm 2]', 'b', 'a', '[Farm 10]', 'c']],
+      ['', ['[Farm 2]', 'b', 'a', '[Farm 10]', 'c', '[No site]', 'e', '[Pré-Alpes]', 'd']],
+      ['alpes', ['[Pré-Alpes]', 'd']],
+    ];
+    for (const [q, want] of expected) expect(shown(finder, q), q).toEqual(want);
+  });
+
+  it('keeps the same rows when a keystroke drops no tank, so the list is not laid out again', () => {
+    const finder = new TankFinder(tanks);
+    const farm = finder.find('farm').rows;
+    expect(finder.find('farm ').rows).toBe(farm); // a space: the same words
+    expect(finder.find('farm t').rows).toBe(farm); // every Farm tank holds a "t"
+    expect(finder.find('farm 9').rows).not.toBe(farm);
+    expect(finder.find('').rows).toBe(finder.find('').rows);
+  });
+
+  it('builds its texts a slice at a time and finds the same before and after', () => {
+    const finder = new TankFinder(tanks);
+    expect(finder.prepared).toBe(false);
+    while (!finder.prepare());
+    expect(finder.prepared).toBe(true);
+    expect(shown(finder, 'ammonia')).toEqual(['[Farm 10]', 'c']);
   });
 });
