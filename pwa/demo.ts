@@ -59,7 +59,7 @@ export function buildDemo(settings: Settings = DEFAULT_SETTINGS, now = new Date(
       gaugePercent: null,
       levelHeight: null,
       netMass: null,
-      gaugePressure: null,
+      pressureReadingGauge: null,
       peakAirTemperature: null,
       sunAllowance: settings.sunAllowance,
       ...s.readings,

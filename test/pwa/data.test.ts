@@ -24,7 +24,7 @@ function tank(id: string, name = `Tank ${id}`): TankRecord {
     ...blankTank(id, '2024-01-01T00:00:00.000Z'),
     site: 'S',
     name,
-    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1e6 },
   };
 }
 
@@ -38,7 +38,7 @@ function check(id: string, tankId: string): CheckRecord {
     readings: { ...emptyReadings(5), liquidTemperature: 293.15, gaugePercent: 50 },
     summary: {
       phase: 'two-phase',
-      pressure: 7e5,
+      pGauge: 7e5,
       totalMass: 200,
       liquidVolume: 0.4,
       fillingDensity: 0.2,
@@ -47,7 +47,7 @@ function check(id: string, tankId: string): CheckRecord {
       stopAtGaugePercent: 80,
       binding: 'rule',
       peakTemperature: 303.15,
-      peakPressure: 9e5,
+      peakGauge: 9e5,
       peakGaugeUpper: 9.045e5,
       peakLiquidFraction: 0.55,
       headroomToDesign: 1e5,
@@ -66,7 +66,7 @@ function check(id: string, tankId: string): CheckRecord {
 function fill(id: string, tankId: string): FillRecord {
   const start = startFill(
     {
-      tank: { waterCapacity: 1, designPressure: 1.7e6 },
+      tank: { waterCapacity: 1, designPressureGauge: 1.7e6 },
       product: 'propane',
       liquidTemperature: 290,
       contents: { gaugePercent: 20 },
@@ -203,7 +203,7 @@ describe('parseBackup', () => {
   it('parseBackup names the tank and the field that is wrong', () => {
     const bad = {
       ...tank('a', 'Broken one'),
-      nameplate: { waterCapacity: 'lots', designPressure: 1e6 },
+      nameplate: { waterCapacity: 'lots', designPressureGauge: 1e6 },
     };
     const r = parseBackup(
       JSON.stringify(

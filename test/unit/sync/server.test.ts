@@ -76,7 +76,7 @@ describe('team server', () => {
   });
 
   it('refuses a malformed record with the reason the backup import gives', async () => {
-    const bad = tank('t2', { nameplate: { waterCapacity: 1.9, designPressure: 5 } });
+    const bad = tank('t2', { nameplate: { waterCapacity: 1.9, designPressureGauge: 5 } });
     const verdict = importRefusal(bad);
     expect(verdict.ok).toBe(false);
     const r = await put(await login('ann', 'ann-pass'), {
@@ -86,9 +86,9 @@ describe('team server', () => {
       record: bad,
     } as never);
     expect(r.status).toBe(403);
-    expect(r.body.reason).toContain('“designPressure” must be a number from 10000 to 100000000');
+    expect(r.body.reason).toContain('“designPressureGauge” must be a number from 10000 to 100000000');
     expect(verdict.ok ? '' : verdict.reason).toContain(
-      '“designPressure” must be a number from 10000 to 100000000',
+      '“designPressureGauge” must be a number from 10000 to 100000000',
     );
   });
 
