@@ -44,7 +44,7 @@ function check(i) {
     productLabel: 'Propane',
     summary: {
       phase: 'two-phase',
-      pressure: 7e5,
+      pGauge: 7e5,
       totalMass: 400,
       liquidVolume: 0.76,
       fillingDensity: 0.2,
@@ -53,7 +53,7 @@ function check(i) {
       stopAtGaugePercent: 80,
       binding: 'weight',
       peakTemperature: 316,
-      peakPressure: 1.3e6,
+      peakGauge: 1.3e6,
       peakLiquidFraction: 0.45,
       headroomToDesign: 4e5,
       headroomToRelief: 3e5,
