@@ -86,8 +86,7 @@ export class CheckHistory extends LitElement {
           <div class="figs">
             Fill limit ${d.format('mass', s.maxMass, 'down')} (stop at
             ${formatPercent(s.stopAtGaugePercent, 'down')}) · contents
-            ${d.format('mass', s.totalMass)} · peak
-            ${d.format('gaugePressure', s.peakGauge, 'up')}
+            ${d.format('mass', s.totalMass)} · peak ${d.format('gaugePressure', s.peakGauge, 'up')}
           </div>
           <details>
             <summary>Cautions and readings</summary>

@@ -76,7 +76,9 @@ export function buildCheckInput(
     peakTemperature,
     pressureGauge: {
       accuracy: settings.gaugeAccuracy,
-      ...(settings.gaugeFullScaleGauge !== null ? { fullScaleGauge: settings.gaugeFullScaleGauge } : {}),
+      ...(settings.gaugeFullScaleGauge !== null
+        ? { fullScaleGauge: settings.gaugeFullScaleGauge }
+        : {}),
     },
   };
   if (r.pressureReadingGauge !== null) input.pressureReadingGauge = r.pressureReadingGauge;

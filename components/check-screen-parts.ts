@@ -15,8 +15,8 @@ export function headPart(t: TankRecord, d: DisplayUnits, edit: () => void): Temp
     <button class="quiet no-print" @click=${edit}>Edit tank</button>
     <p class="plate">
       ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
-      ${d.format('volume', np.waterCapacity)} · MAWP ${d.format('gaugePressure', np.designPressureGauge)}
-      ·
+      ${d.format('volume', np.waterCapacity)} · MAWP
+      ${d.format('gaugePressure', np.designPressureGauge)} ·
       ${
         np.reliefSetPressureGauge === undefined
           ? html`<span data-testid="relief-assumed"

@@ -91,7 +91,8 @@ export function buildFillInput(
   if (!draft.compensated && draft.meterTemperature !== null)
     input.delivered.meterTemperature = draft.meterTemperature;
   if (draft.afterTemperature !== null) input.after.liquidTemperature = draft.afterTemperature;
-  if (draft.afterPressureGauge !== null) input.after.pressureReadingGauge = draft.afterPressureGauge;
+  if (draft.afterPressureGauge !== null)
+    input.after.pressureReadingGauge = draft.afterPressureGauge;
   return { input, missing };
 }
 

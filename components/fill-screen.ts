@@ -28,7 +28,8 @@ import type { FillDraft, FillRecord } from './fill-types.js';
 import { makeFillRecord } from '../thermo/fill/index.js';
 import { STANDING_CAUTION } from '../thermo/check/standing.js';
 
-type NumKey = 'volume' | 'meterTemperature' | 'afterGauge' | 'afterTemperature' | 'afterPressureGauge';
+type NumKey =
+  'volume' | 'meterTemperature' | 'afterGauge' | 'afterTemperature' | 'afterPressureGauge';
 
 export class FillScreen extends LitElement {
   static override properties = {

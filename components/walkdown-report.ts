@@ -246,8 +246,8 @@ export class WalkdownReport extends LitElement {
         ${
           r
             ? html`<p>
-                  ${r.productLabel} · design ${d.format('gaugePressure', r.designPressureGauge)} · relief
-                  ${d.format('gaugePressure', r.reliefSetPressureGauge)}
+                  ${r.productLabel} · design ${d.format('gaugePressure', r.designPressureGauge)} ·
+                  relief ${d.format('gaugePressure', r.reliefSetPressureGauge)}
                 </p>
                 ${resultLines(r, d).map((l) => html`<span class="line">${l}</span>`)}`
             : nothing

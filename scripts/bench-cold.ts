@@ -20,7 +20,11 @@ const { LPG_PRESETS } = (await import(
 
 const PSI = 6894.757293168;
 const input = {
-  tank: { waterCapacity: 3.785411784, designPressureGauge: 250 * PSI, reliefSetPressureGauge: 220 * PSI },
+  tank: {
+    waterCapacity: 3.785411784,
+    designPressureGauge: 250 * PSI,
+    reliefSetPressureGauge: 220 * PSI,
+  },
   product: LPG_PRESETS.find((p) => p.id === 'hd5-limit')!.product,
   liquidTemperature: 294.15,
   contents: { gaugePercent: 62 },

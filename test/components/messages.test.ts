@@ -86,7 +86,9 @@ const SCENARIOS: TankCheckInput[] = [
     contents: { gaugePercent: 40 },
     peakTemperature: 290,
   },
-  propane({ tank: { waterCapacity: 1.9, designPressureGauge: 1.72e6, minDesignMetalTemperature: 240 } }),
+  propane({
+    tank: { waterCapacity: 1.9, designPressureGauge: 1.72e6, minDesignMetalTemperature: 240 },
+  }),
   propane({ pressureReadingGauge: 2e6 }),
   propane({ pressureReadingGauge: 3e5, specificGravity: 0.6 }),
   propane({ contents: { gaugePercent: 100 } }),
@@ -103,7 +105,9 @@ const SCENARIOS: TankCheckInput[] = [
     peakTemperature: 280,
   }),
   propane({ tank: { waterCapacity: 1.9, designPressureGauge: 1.2e6 }, peakTemperature: 320 }),
-  propane({ tank: { waterCapacity: 1.9, designPressureGauge: 1.2e6, reliefSetPressureGauge: 1.19e6 } }),
+  propane({
+    tank: { waterCapacity: 1.9, designPressureGauge: 1.2e6, reliefSetPressureGauge: 1.19e6 },
+  }),
   {
     ...propane(),
     product: LPG_PRESETS.find((p) => p.id === 'pb-50-50')!.product,

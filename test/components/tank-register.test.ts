@@ -208,7 +208,10 @@ describe('tank-form', () => {
     expect(t.site).to.equal('Bench');
     expect(t.productId).to.equal('n-butane');
     expect(t.nameplate.waterCapacity).to.be.closeTo(toSI('volume', 450, 'L'), 1e-12);
-    expect(t.nameplate.designPressureGauge).to.be.closeTo(toSI('gaugePressure', 17.2, 'barg'), 1e-6);
+    expect(t.nameplate.designPressureGauge).to.be.closeTo(
+      toSI('gaugePressure', 17.2, 'barg'),
+      1e-6,
+    );
     expect(t.nameplate.reliefSetPressureGauge).to.equal(undefined);
   });
 

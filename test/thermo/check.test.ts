@@ -112,7 +112,11 @@ describe('checkTank: peak pressure and headroom (FACTS cases 8, 9)', () => {
   const propane = (peakF: number) =>
     checkTank(
       base({
-        tank: { waterCapacity: gal(1000), designPressureGauge: psig(250), reliefSetPressureGauge: psig(220) },
+        tank: {
+          waterCapacity: gal(1000),
+          designPressureGauge: psig(250),
+          reliefSetPressureGauge: psig(220),
+        },
         peakTemperature: F(peakF),
         contents: { gaugePercent: 50 },
       }),

@@ -129,8 +129,16 @@ describe('checkTank limits', () => {
 
   // Each field refused with a value outside its range: the quantity its limits measure.
   const cases: [string, Partial<TankCheckInput>, InputLimits['quantity']][] = [
-    ['tank.waterCapacity', { tank: { waterCapacity: 0, designPressureGauge: psig(250) } }, 'volume'],
-    ['tank.designPressureGauge', { tank: { waterCapacity: 1, designPressureGauge: 5 } }, 'gaugePressure'],
+    [
+      'tank.waterCapacity',
+      { tank: { waterCapacity: 0, designPressureGauge: psig(250) } },
+      'volume',
+    ],
+    [
+      'tank.designPressureGauge',
+      { tank: { waterCapacity: 1, designPressureGauge: 5 } },
+      'gaugePressure',
+    ],
     [
       'tank.reliefSetPressureGauge',
       { tank: { waterCapacity: 1, designPressureGauge: psig(250), reliefSetPressureGauge: 2e8 } },

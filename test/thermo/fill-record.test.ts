@@ -90,7 +90,10 @@ describe('fill record', () => {
         'fill.start.before.totalMass',
         (r) => ((r.start.before as { totalMass: unknown }).totalMass = '12'),
       ],
-      ['fill.start.check.tank.designPressureGauge', (r) => (r.start.check.tank.designPressureGauge = 0)],
+      [
+        'fill.start.check.tank.designPressureGauge',
+        (r) => (r.start.check.tank.designPressureGauge = 0),
+      ],
       [
         'fill.start.check.product',
         (r) => ((r.start.check as { product: unknown }).product = 'unobtainium'),

@@ -204,11 +204,17 @@ describe('reconcileFill: worked cases (propane, 1,000 US gal)', () => {
   });
 
   it('case 7: an after-pressure on n-butane’s curve in a propane tank is flagged', () => {
-    const wrong = fill({ volume: gal(400) }, { gaugePercent: 61, pressureReadingGauge: psig(11.3) });
+    const wrong = fill(
+      { volume: gal(400) },
+      { gaugePercent: 61, pressureReadingGauge: psig(11.3) },
+    );
     const f = wrong.findings.find((x) => x.code === 'fill-pressure-off-curve');
     expect(f?.level).toBe('warning');
     expect(f?.message).toMatch(/different product/);
-    const right = fill({ volume: gal(400) }, { gaugePercent: 61, pressureReadingGauge: psig(93.0) });
+    const right = fill(
+      { volume: gal(400) },
+      { gaugePercent: 61, pressureReadingGauge: psig(93.0) },
+    );
     expect(right.findings.map((x) => x.code)).not.toContain('fill-pressure-off-curve');
   });
 });

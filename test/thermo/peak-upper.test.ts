@@ -90,7 +90,10 @@ describe('peak raised by the model allowance (pGaugeUpper)', () => {
   });
 
   it('is the pressure the design caution quotes', () => {
-    const low = checkTank({ ...input(), tank: { ...input().tank, designPressureGauge: 1000 * PSI } });
+    const low = checkTank({
+      ...input(),
+      tank: { ...input().tank, designPressureGauge: 1000 * PSI },
+    });
     expect(low.peak.headroomToDesign).toBeLessThan(0);
     const c = low.cautions.find((x) => x.code === 'design-at-peak');
     expect(c?.params.pressure).toMatchObject({ value: low.peak.pGaugeUpper });

@@ -42,7 +42,9 @@ function r410aCylinder(over: Partial<TankCheckInput> = {}): TankCheckInput {
 }
 
 describe('an R-410A recovery cylinder in a 140 °F van', () => {
-  const r = checkTank(r410aCylinder({ pressureReadingGauge: +row('r410a', 298.15).p_bubble_Pa! - ATM }));
+  const r = checkTank(
+    r410aCylinder({ pressureReadingGauge: +row('r410a', 298.15).p_bubble_Pa! - ATM }),
+  );
 
   it('gives the pressure now as the reference bubble pressure', () => {
     checkClose({

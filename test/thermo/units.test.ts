@@ -65,11 +65,16 @@ describe('toSI / fromSI', () => {
     });
     // identity: gauge = absolute − barometer at any site
     const baro = 84_000;
-    expectWithin(toSI('gaugePressure', 2, 'bara', { barometricPressureAbs: baro }), 2e5 - baro, 1e-9, {
-      input: '2 bar a at 84 kPa',
-      source: 'definition of gauge pressure',
-      kind: 'identity',
-    });
+    expectWithin(
+      toSI('gaugePressure', 2, 'bara', { barometricPressureAbs: baro }),
+      2e5 - baro,
+      1e-9,
+      {
+        input: '2 bar a at 84 kPa',
+        source: 'definition of gauge pressure',
+        kind: 'identity',
+      },
+    );
     expectWithin(toSI('pressure', 100, 'kPag', { barometricPressureAbs: baro }), 1e5 + baro, 1e-9, {
       input: '100 kPa g at 84 kPa',
       source: 'definition of gauge pressure',

@@ -149,9 +149,7 @@ describe('walkdown CSV', () => {
     expect(Number(col('design pressure'))).toBeCloseTo(250, 6);
     const r = x.entries[0]!.result!;
     // Peak pressure shown ≥ the SI figure, headroom shown ≤ it (NIST psi).
-    expect(Number(col('peak pressure')) * PSI).toBeGreaterThanOrEqual(
-      r.summary.peakGauge - 1e-6,
-    );
+    expect(Number(col('peak pressure')) * PSI).toBeGreaterThanOrEqual(r.summary.peakGauge - 1e-6);
     expect(Number(col('headroom to relief')) * PSI).toBeLessThanOrEqual(
       r.summary.headroomToRelief + 1e-6,
     );
