@@ -185,7 +185,7 @@ describe('checkTank property', () => {
       'liquidTemperature',
       'contents',
       'contents.gaugePercent',
-      'gaugePressure',
+      'pressureReadingGauge',
       'barometricPressureAbs',
       'elevation',
       'peakTemperature',

@@ -99,7 +99,7 @@ describe('checkTank states and refusals (fast-check)', () => {
       'tank.reliefSetPressureGauge',
       'liquidTemperature',
       'contents.gaugePercent',
-      'gaugePressure',
+      'pressureReadingGauge',
       'peakTemperature',
     ];
     const junk = fc.oneof(

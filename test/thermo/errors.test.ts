@@ -163,7 +163,7 @@ describe('checkTank limits', () => {
     ['peakTemperature', { peakTemperature: 500 }, 'temperature'],
     ['barometricPressureAbs', { barometricPressureAbs: 5000 }, 'pressure'],
     ['elevation', { elevation: 20_000 }, 'length'],
-    ['gaugePressure', { pressureReadingGauge: -2e5 }, 'gaugePressure'],
+    ['pressureReadingGauge', { pressureReadingGauge: -2e5 }, 'gaugePressure'],
     ['pressureGauge.fullScaleGauge', { pressureGauge: { fullScaleGauge: 1 } }, 'gaugePressure'],
     ['pressureGauge.accuracy', { pressureGauge: { accuracy: 0.5 } }, 'fraction'],
     ['specificGravity', { specificGravity: 5 }, undefined],
@@ -189,7 +189,7 @@ describe('checkTank limits', () => {
   it('checkTank bounds a full vacuum reading by this site’s barometric pressure', () => {
     const l = limitsOf(
       () => checkTank(base({ barometricPressureAbs: 80_000, pressureReadingGauge: -90_000 })),
-      'gaugePressure',
+      'pressureReadingGauge',
     );
     expect(l).toEqual({ min: -80_000, max: 1e8, quantity: 'gaugePressure' });
   });
@@ -243,7 +243,7 @@ describe('checkTank limits', () => {
   });
 
   it('checkTank: every numeric refusal’s limits hold finite bounds that exclude the value', () => {
-    const fields = ['liquidTemperature', 'peakTemperature', 'gaugePressure'] as const;
+    const fields = ['liquidTemperature', 'peakTemperature', 'pressureReadingGauge'] as const;
     fc.assert(
       fc.property(
         fc.constantFrom(...fields),
