@@ -1,6 +1,6 @@
 /**
  * The app's own records: what is kept about a tank, a saved check and the user's settings.
- * Every number is SI (K, Pa gauge unless the name ends in `Absolute`, kg, m³, m), exactly as the
+ * Every number is SI (K, Pa — a pressure's name ends in `Gauge` or `Abs` —, kg, m³, m), exactly as the
  * check engine takes it; display units live only in `Settings.units` and are applied through
  * `thermo/units.ts`.
  *

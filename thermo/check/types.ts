@@ -4,9 +4,10 @@
  *
  * Units: SI everywhere — K, Pa, kg, m³, m, kg/m³. Every pressure of the result says its
  * reference in its name: `pGauge`, `readingGauge`, `expectedGauge` (Pa above the site barometric
- * pressure) or `pAbs` (Pa absolute). Input fields keep the names stored records carry: the
- * tank's `designPressureGauge` and `reliefSetPressureGauge` and the reading `pressureReadingGauge` are gauge,
- * `barometricPressureAbs` is absolute, as each field's comment says.
+ * pressure) or `pAbs` (Pa absolute). Input fields say it the same way, and stored records carry
+ * these names since storage v5: the tank's `designPressureGauge` and `reliefSetPressureGauge`,
+ * the reading `pressureReadingGauge` and the gauge's `fullScaleGauge` are gauge,
+ * `barometricPressureAbs` is absolute.
  * Convert user units with `thermo/units.ts` only.
  */
 import type { Product } from '../product.js';
