@@ -29,7 +29,7 @@ export const READING_RANGES = {
   gaugePercent: { min: 0, max: 100 },
   netMass: { min: 0, max: 1e8 },
   levelHeight: { min: 0, max: 1e3 },
-  gaugePressureMax: 1e8,
+  pressureReadingGaugeMax: 1e8,
   /** A sun allowance beyond 40 K (72 °F) is not a forecast any more. */
   sunAllowance: { min: 0, max: 40 },
 } as const;
@@ -323,7 +323,7 @@ export class CheckForm extends LitElement {
           .display=${d}
           .value=${r.pressureReadingGauge}
           .min=${-baro}
-          .max=${READING_RANGES.gaugePressureMax}
+          .max=${READING_RANGES.pressureReadingGaugeMax}
           @value-change=${this._field('pressureReadingGauge')}
         ></number-field>
         ${this._engineError('pressureReadingGauge')}

@@ -212,7 +212,7 @@ export class WalkdownWalk extends LitElement {
         .display=${d}
         .value=${r.pressureReadingGauge}
         .min=${-d.barometricPressureAbs}
-        .max=${READING_RANGES.gaugePressureMax}
+        .max=${READING_RANGES.pressureReadingGaugeMax}
         @value-change=${this._field('pressureReadingGauge')}
       ></number-field>
       ${tank ? nothing : html`<p class="error">This tank was deleted; it can only be skipped.</p>`}`;
