@@ -11,7 +11,7 @@ export function blankTank(id: string, now = new Date().toISOString()): TankRecor
     // No guessed nameplate figures: NaN shows as an empty field and blocks saving until typed.
     nameplate: {
       waterCapacity: Number.NaN,
-      designPressure: Number.NaN,
+      designPressureGauge: Number.NaN,
       placement: 'aboveground',
       containerClass: 'storage',
     },

@@ -46,8 +46,8 @@ export class CheckChart extends LitElement {
   static override properties = {
     curve: { attribute: false },
     display: { attribute: false },
-    designPressure: { type: Number, attribute: 'design-pressure' },
-    reliefPressure: { type: Number, attribute: 'relief-pressure' },
+    designPressureGauge: { type: Number, attribute: 'design-pressure' },
+    reliefPressureGauge: { type: Number, attribute: 'relief-pressure' },
     nowTemperature: { type: Number, attribute: 'now-temperature' },
     peakTemperature: { type: Number, attribute: 'peak-temperature' },
   };
@@ -57,9 +57,9 @@ export class CheckChart extends LitElement {
   /** The user's display units. */
   declare display: DisplayUnits;
   /** Design pressure / MAWP, Pa gauge. */
-  declare designPressure: number;
+  declare designPressureGauge: number;
   /** Relief set pressure, Pa gauge. */
-  declare reliefPressure: number;
+  declare reliefPressureGauge: number;
   /** Today's liquid temperature, K. */
   declare nowTemperature: number;
   /** Forecast peak liquid temperature, K. */
@@ -69,8 +69,8 @@ export class CheckChart extends LitElement {
     super();
     this.curve = null;
     this.display = DisplayUnits.fromSettings(DEFAULT_SETTINGS);
-    this.designPressure = Number.NaN;
-    this.reliefPressure = Number.NaN;
+    this.designPressureGauge = Number.NaN;
+    this.reliefPressureGauge = Number.NaN;
     this.nowTemperature = Number.NaN;
     this.peakTemperature = Number.NaN;
   }
@@ -221,15 +221,15 @@ export class CheckChart extends LitElement {
           : null,
       ].filter((m): m is { x: number; y: number; kind: 'now' | 'peak' } => m !== null);
     const pLines: { y: number; cls: string; text: string }[] = [];
-    if (Number.isFinite(this.designPressure))
+    if (Number.isFinite(this.designPressureGauge))
       pLines.push({
-        y: d.fromSI('gaugePressure', this.designPressure),
+        y: d.fromSI('gaugePressure', this.designPressureGauge),
         cls: 'design',
         text: 'design (MAWP)',
       });
-    if (Number.isFinite(this.reliefPressure))
+    if (Number.isFinite(this.reliefPressureGauge))
       pLines.push({
-        y: d.fromSI('gaugePressure', this.reliefPressure),
+        y: d.fromSI('gaugePressure', this.reliefPressureGauge),
         cls: 'relief',
         text: 'relief setting',
       });

@@ -20,7 +20,7 @@ const FIELD_OF: Record<string, keyof Readings | 'peakTemperature'> = {
   'contents.gaugePercent': 'gaugePercent',
   'contents.netMass': 'netMass',
   'contents.levelHeight': 'levelHeight',
-  gaugePressure: 'gaugePressure',
+  pressureReadingGauge: 'pressureReadingGauge',
   peakTemperature: 'peakTemperature',
 };
 

@@ -29,7 +29,7 @@ export const READING_RANGES = {
   gaugePercent: { min: 0, max: 100 },
   netMass: { min: 0, max: 1e8 },
   levelHeight: { min: 0, max: 1e3 },
-  gaugePressureMax: 1e8,
+  pressureReadingGaugeMax: 1e8,
   /** A sun allowance beyond 40 K (72 °F) is not a forecast any more. */
   sunAllowance: { min: 0, max: 40 },
 } as const;
@@ -292,7 +292,7 @@ export class CheckForm extends LitElement {
   override render() {
     const r = this._readings;
     const d = this.display;
-    const baro = d.barometricPressure;
+    const baro = d.barometricPressureAbs;
     return html`
       <fieldset>
         <legend>Readings now</legend>
@@ -316,17 +316,17 @@ export class CheckForm extends LitElement {
 
         <number-field
           label="Pressure gauge (optional)"
-          name="gaugePressure"
+          name="pressureReadingGauge"
           quantity="gaugePressure"
           testid="gauge-pressure"
           hint="Leave empty if there is no gauge reading"
           .display=${d}
-          .value=${r.gaugePressure}
+          .value=${r.pressureReadingGauge}
           .min=${-baro}
-          .max=${READING_RANGES.gaugePressureMax}
-          @value-change=${this._field('gaugePressure')}
+          .max=${READING_RANGES.pressureReadingGaugeMax}
+          @value-change=${this._field('pressureReadingGauge')}
         ></number-field>
-        ${this._engineError('gaugePressure')}
+        ${this._engineError('pressureReadingGauge')}
       </fieldset>
 
       ${this._forecast(r)}

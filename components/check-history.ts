@@ -57,8 +57,7 @@ export class CheckHistory extends LitElement {
           <div class="figs">
             Fill limit ${d.format('mass', s.maxMass, 'down')} (stop at
             ${formatPercent(s.stopAtGaugePercent, 'down')}) · contents
-            ${d.format('mass', s.totalMass)} · peak
-            ${d.format('gaugePressure', s.peakPressure, 'up')}
+            ${d.format('mass', s.totalMass)} · peak ${d.format('gaugePressure', s.peakGauge, 'up')}
           </div>
           <details>
             <summary>Cautions and readings</summary>
@@ -67,7 +66,7 @@ export class CheckHistory extends LitElement {
             </ul>
             <p>
               Product: ${c.productLabel}. Pressure gauge:
-              ${r.gaugePressure === null ? 'not read' : d.format('gaugePressure', r.gaugePressure)}.
+              ${r.pressureReadingGauge === null ? 'not read' : d.format('gaugePressure', r.pressureReadingGauge)}.
               Peak liquid temperature: ${d.format('temperature', s.peakTemperature)}.
             </p>
             <button

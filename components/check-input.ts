@@ -76,14 +76,16 @@ export function buildCheckInput(
     peakTemperature,
     pressureGauge: {
       accuracy: settings.gaugeAccuracy,
-      ...(settings.gaugeFullScale !== null ? { fullScale: settings.gaugeFullScale } : {}),
+      ...(settings.gaugeFullScaleGauge !== null
+        ? { fullScaleGauge: settings.gaugeFullScaleGauge }
+        : {}),
     },
   };
-  if (r.gaugePressure !== null) input.gaugePressure = r.gaugePressure;
+  if (r.pressureReadingGauge !== null) input.pressureReadingGauge = r.pressureReadingGauge;
   if (rules.ruleSet !== undefined) input.ruleSet = rules.ruleSet;
   if (rules.siteRule !== undefined) input.siteRule = rules.siteRule;
   if (settings.barometer.mode === 'pressure')
-    input.barometricPressure = settings.barometer.pressure;
+    input.barometricPressureAbs = settings.barometer.pressureAbs;
   else if (settings.barometer.mode === 'elevation') input.elevation = settings.barometer.elevation;
   return { input, missing: [], peakEstimated };
 }
@@ -113,16 +115,16 @@ export const FIELD_LABELS: Record<string, string> = {
   'contents.gaugePercent': 'Float gauge',
   'contents.netMass': 'Net product mass',
   'contents.levelHeight': 'Liquid level height',
-  gaugePressure: 'Pressure gauge',
+  pressureReadingGauge: 'Pressure gauge',
   'tank.waterCapacity': 'Water capacity',
-  'tank.designPressure': 'Design pressure (MAWP)',
-  'tank.reliefSetPressure': 'Relief valve set pressure',
+  'tank.designPressureGauge': 'Design pressure (MAWP)',
+  'tank.reliefSetPressureGauge': 'Relief valve set pressure',
   'tank.minDesignMetalTemperature': 'Minimum design metal temperature',
   'tank.shape.diameter': 'Inside diameter',
   'tank.shape.shellLength': 'Shell length between head seams',
-  barometricPressure: 'Barometric pressure',
+  barometricPressureAbs: 'Barometric pressure',
   elevation: 'Site elevation',
-  'pressureGauge.fullScale': 'Pressure gauge full scale',
+  'pressureGauge.fullScaleGauge': 'Pressure gauge full scale',
   'pressureGauge.accuracy': 'Pressure gauge accuracy (of full scale)',
 };
 
@@ -189,7 +191,7 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
   const ranked = result.cautions.filter((c) => c.code !== 'standing');
   return {
     phase: result.phase,
-    pressure: result.pGauge,
+    pGauge: result.pGauge,
     totalMass: result.contents.totalMass,
     liquidVolume: result.contents.liquidVolume,
     fillingDensity: result.contents.fillingDensity,
@@ -198,7 +200,7 @@ export function summarize(result: TankCheckResult, display?: DisplayUnits): Chec
     stopAtGaugePercent: result.fillLimit.stopAtGaugePercent,
     binding: result.fillLimit.binding,
     peakTemperature: result.peak.temperature,
-    peakPressure: result.peak.pGauge,
+    peakGauge: result.peak.pGauge,
     peakGaugeUpper: result.peak.pGaugeUpper,
     peakAllowance: result.peak.allowance,
     peakLiquidFraction: result.peak.liquidFraction,

@@ -182,7 +182,7 @@ export class ResultView {
             <span class="muted">(${d.format('pressure', r.pAbs, 'up')})</span>
           </dd>
           <dt>Barometric pressure used</dt>
-          <dd>${d.format('pressure', r.barometricPressure)}</dd>
+          <dd>${d.format('pressure', r.barometricPressureAbs)}</dd>
         </dl>
       </section>
 

@@ -16,14 +16,14 @@ export function headPart(t: TankRecord, d: DisplayUnits, edit: () => void): Temp
     <button class="quiet no-print" @click=${edit}>Edit tank</button>
     <p class="plate">
       ${t.site ? html`${t.site} · ` : nothing}${productLabel(t.productId)} · W.C.
-      ${d.format('volume', np.waterCapacity)} · MAWP ${d.format('gaugePressure', np.designPressure)}
-      ·
+      ${d.format('volume', np.waterCapacity)} · MAWP
+      ${d.format('gaugePressure', np.designPressureGauge)} ·
       ${
-        np.reliefSetPressure === undefined
+        np.reliefSetPressureGauge === undefined
           ? html`<span data-testid="relief-assumed"
               >relief not entered (assumed at the design pressure)</span
             >`
-          : html`relief ${d.format('gaugePressure', np.reliefSetPressure)}`
+          : html`relief ${d.format('gaugePressure', np.reliefSetPressureGauge)}`
       }
     </p>
     <p class="print-only">Printed ${printedText()} from the readings below.</p>
@@ -74,8 +74,8 @@ export function chartPart(t: TankRecord, d: DisplayUnits, c: ShownCurve): Templa
     <check-chart
       .curve=${c.curve}
       .display=${d}
-      .designPressure=${np.designPressure}
-      .reliefPressure=${np.reliefSetPressure ?? np.designPressure}
+      .designPressureGauge=${np.designPressureGauge}
+      .reliefPressureGauge=${np.reliefSetPressureGauge ?? np.designPressureGauge}
       .nowTemperature=${c.now}
       .peakTemperature=${c.peak}
     ></check-chart>`;

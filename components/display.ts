@@ -75,7 +75,7 @@ export function fitPrecision(q: Quantity, x: number, decimals: number): number {
 
 export class DisplayUnits {
   /** Site barometric pressure used across gauge and absolute, Pa absolute. */
-  readonly barometricPressure: number;
+  readonly barometricPressureAbs: number;
 
   /**
    * The user's number format (decimal mark, digit groups). Without one, `format` and `range`
@@ -85,10 +85,10 @@ export class DisplayUnits {
 
   constructor(
     readonly units: UnitPrefs,
-    barometricPressure = P_ATM_Pa,
+    barometricPressureAbs = P_ATM_Pa,
     numberFormat?: NumberFormat,
   ) {
-    this.barometricPressure = barometricPressure;
+    this.barometricPressureAbs = barometricPressureAbs;
     this.numberFormat = numberFormat;
   }
 
@@ -139,19 +139,19 @@ export class DisplayUnits {
 
   /** SI → display number. */
   fromSI(q: Quantity, valueSI: number): number {
-    return fromSI(q, valueSI, this.unit(q), { barometricPressure: this.barometricPressure });
+    return fromSI(q, valueSI, this.unit(q), { barometricPressureAbs: this.barometricPressureAbs });
   }
 
   /** An absolute pressure (Pa) as a number in the user's gauge unit (psig, bar g, kPa g). */
   gaugeFromAbsolute(pAbsolute: number): number {
     return fromSI('pressure', pAbsolute, this.units.pressure, {
-      barometricPressure: this.barometricPressure,
+      barometricPressureAbs: this.barometricPressureAbs,
     });
   }
 
   /** Display number → SI. */
   toSI(q: Quantity, value: number): number {
-    return toSI(q, value, this.unit(q), { barometricPressure: this.barometricPressure });
+    return toSI(q, value, this.unit(q), { barometricPressureAbs: this.barometricPressureAbs });
   }
 
   /**
@@ -166,7 +166,7 @@ export class DisplayUnits {
   ): string {
     const unit = this.unit(q);
     const text = formatQuantity(q, valueSI, unit, {
-      barometricPressure: this.barometricPressure,
+      barometricPressureAbs: this.barometricPressureAbs,
       round,
       decimals: decimals ?? this._decimals(q, valueSI),
     });
@@ -229,7 +229,7 @@ export class DisplayUnits {
 export function siteBarometricPressure(settings: Settings): number {
   const b = settings.barometer;
   try {
-    if (b.mode === 'pressure' && Number.isFinite(b.pressure)) return b.pressure;
+    if (b.mode === 'pressure' && Number.isFinite(b.pressureAbs)) return b.pressureAbs;
     if (b.mode === 'elevation' && Number.isFinite(b.elevation))
       return barometricPressureAtElevation(b.elevation);
   } catch {

@@ -21,7 +21,7 @@ export type FillField =
   | 'meterTemperature'
   | 'afterGauge'
   | 'afterTemperature'
-  | 'afterPressure';
+  | 'afterPressureGauge';
 
 /** Engine field → screen field. */
 const FIELD: Record<string, FillField> = {
@@ -30,7 +30,7 @@ const FIELD: Record<string, FillField> = {
   'delivered.meterTemperature': 'meterTemperature',
   'after.gaugePercent': 'afterGauge',
   'after.liquidTemperature': 'afterTemperature',
-  'after.gaugePressure': 'afterPressure',
+  'after.pressureReadingGauge': 'afterPressureGauge',
 };
 
 /** The names the screen's labels use. */
@@ -40,7 +40,7 @@ export const FILL_FIELD_NAMES: Record<FillField, string> = {
   meterTemperature: 'Product temperature at the meter',
   afterGauge: 'Float gauge after',
   afterTemperature: 'Liquid temperature after',
-  afterPressure: 'Pressure gauge after',
+  afterPressureGauge: 'Pressure gauge after',
 };
 
 /** Why a range is what it is, per field, in plain words (added to the range). */
@@ -91,7 +91,8 @@ export function buildFillInput(
   if (!draft.compensated && draft.meterTemperature !== null)
     input.delivered.meterTemperature = draft.meterTemperature;
   if (draft.afterTemperature !== null) input.after.liquidTemperature = draft.afterTemperature;
-  if (draft.afterPressure !== null) input.after.gaugePressure = draft.afterPressure;
+  if (draft.afterPressureGauge !== null)
+    input.after.pressureReadingGauge = draft.afterPressureGauge;
   return { input, missing };
 }
 

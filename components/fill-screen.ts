@@ -28,7 +28,8 @@ import type { FillDraft, FillRecord } from './fill-types.js';
 import { makeFillRecord } from '../thermo/fill/index.js';
 import { STANDING_CAUTION } from '../thermo/check/standing.js';
 
-type NumKey = 'volume' | 'meterTemperature' | 'afterGauge' | 'afterTemperature' | 'afterPressure';
+type NumKey =
+  'volume' | 'meterTemperature' | 'afterGauge' | 'afterTemperature' | 'afterPressureGauge';
 
 export class FillScreen extends LitElement {
   static override properties = {
@@ -332,17 +333,17 @@ export class FillScreen extends LitElement {
       ${this._refusal('afterTemperature')}
       <number-field
         label="Pressure gauge after (optional)"
-        name="afterPressure"
+        name="afterPressureGauge"
         quantity="gaugePressure"
         testid="fill-after-pressure"
         hint="Compares the pressure with the product on record"
         .display=${d}
-        .value=${f.afterPressure}
+        .value=${f.afterPressureGauge}
         .min=${-120_000}
         .max=${1e8}
-        @value-change=${this._num('afterPressure')}
+        @value-change=${this._num('afterPressureGauge')}
       ></number-field>
-      ${this._refusal('afterPressure')}
+      ${this._refusal('afterPressureGauge')}
     </fieldset>`;
   }
 }

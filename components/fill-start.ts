@@ -27,7 +27,7 @@ export function newFillDraft(
     meterTemperature: null,
     afterGauge: null,
     afterTemperature: null,
-    afterPressure: null,
+    afterPressureGauge: null,
     interrupted: false,
     note: '',
     updatedAt: at.toISOString(),

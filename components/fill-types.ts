@@ -22,7 +22,7 @@ export interface FillDraft {
   /** After liquid temperature, K, or null (the temperature before). */
   afterTemperature: number | null;
   /** After pressure, Pa gauge, or null. */
-  afterPressure: number | null;
+  afterPressureGauge: number | null;
   /** The delivery was stopped before the intended amount. */
   interrupted: boolean;
   note: string;

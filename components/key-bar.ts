@@ -150,11 +150,11 @@ export class KeyBar extends LitElement {
         Peak
         ${
           upperDiffers(k.peakUpper, d)
-            ? html`${d.number('gaugePressure', k.peakPressure, 'up')}, up to
+            ? html`${d.number('gaugePressure', k.peakGauge, 'up')}, up to
                 <span data-testid="key-peak-upper" data-si=${String(k.peakUpper.upper)}
                   >${d.format('gaugePressure', k.peakUpper.upper!, 'up')}</span
                 >`
-            : d.format('gaugePressure', k.peakPressure, 'up')
+            : d.format('gaugePressure', k.peakGauge, 'up')
         }
         · ${relief}
         ${

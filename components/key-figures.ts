@@ -27,7 +27,7 @@ export interface KeyFigures {
   /** True when the relief setting was not entered and the design pressure stands in for it. */
   reliefAssumed: boolean;
   /** Peak-day pressure, Pa gauge; headroom to the relief setting, Pa (negative when exceeded). */
-  peakPressure: number;
+  peakGauge: number;
   headroomToRelief: number;
   /** The peak raised by the model's allowance, the figure the headroom is measured from (Pa gauge, its allowance and the phase at the peak). */
   peakUpper: UpperPeak;
@@ -55,7 +55,7 @@ export function keyFigures(r: TankCheckResult, d: DisplayUnits): KeyFigures {
     fixedGauge: f.stopAtFixedGauge,
     siteRule: f.boundBy === 'site-rule',
     reliefAssumed: r.cautions.some((c) => c.code === 'relief-assumed'),
-    peakPressure: r.peak.pGauge,
+    peakGauge: r.peak.pGauge,
     headroomToRelief: r.peak.headroomToRelief,
     peakUpper: {
       peak: r.peak.pGauge,
@@ -85,7 +85,7 @@ export function keyWords(k: KeyFigures, d: DisplayUnits): KeyWords {
     ? `Over the limit by ${d.format('volume', -k.roomLeftVolume, 'up')} as liquid at ${base} (${d.format('mass', -k.roomLeftMass, 'up')})`
     : `Room left ${d.format('volume', k.roomLeftVolume, 'down')} as liquid at ${base} (${d.format('mass', k.roomLeftMass, 'down')})`;
   const upper = upperDiffers(k.peakUpper, d) ? `, ${upperSentence(k.peakUpper, d)}` : '';
-  const peakDay = `Peak day ${d.format('gaugePressure', k.peakPressure, 'up')}${upper}`;
+  const peakDay = `Peak day ${d.format('gaugePressure', k.peakGauge, 'up')}${upper}`;
   const peak =
     k.headroomToRelief < 0
       ? `${peakDay}; relief setting${k.reliefAssumed ? ' (assumed)' : ''} exceeded by ${d.format('pressureDifference', -k.headroomToRelief, 'up')}`

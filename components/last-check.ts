@@ -22,7 +22,8 @@ export function readingsShort(r: Readings, d: DisplayUnits): string {
     parts.push(`level ${d.format('length', r.levelHeight)}`);
   if (r.contentsMode === 'netMass' && r.netMass !== null)
     parts.push(`scale ${d.format('mass', r.netMass)}`);
-  if (r.gaugePressure !== null) parts.push(`gauge ${d.format('gaugePressure', r.gaugePressure)}`);
+  if (r.pressureReadingGauge !== null)
+    parts.push(`gauge ${d.format('gaugePressure', r.pressureReadingGauge)}`);
   return parts.join(' · ');
 }
 

@@ -20,7 +20,7 @@ const MEASURED = [
   'gaugePercent',
   'levelHeight',
   'netMass',
-  'gaugePressure',
+  'pressureReadingGauge',
 ] as const;
 
 /** A previous set of readings, with when it was taken and, for a saved check, its key figures. */

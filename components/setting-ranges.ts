@@ -4,7 +4,7 @@ export const SETTING_RANGES = {
   elevation: { min: -500, max: 11_000 },
   /** Fraction of full scale. */
   gaugeAccuracy: { min: 0, max: 0.2 },
-  gaugeFullScale: { min: 1e4, max: 1e8 },
+  gaugeFullScaleGauge: { min: 1e4, max: 1e8 },
   thermometerTolerance: { min: 0, max: 10 },
   sunAllowance: { min: 0, max: 40 },
   /** Days after which readings no longer count on the site board. */

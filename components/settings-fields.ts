@@ -119,7 +119,7 @@ export function barometerFieldset(v: SettingsView): TemplateResult {
   // Elevations in feet or metres, following the length choice.
   const elevationUnits = new DisplayUnits(
     { ...s.units, length: s.units.length === 'in' ? 'ft' : 'm' },
-    d.barometricPressure,
+    d.barometricPressureAbs,
   );
   const b = s.barometer;
   return html`
@@ -157,10 +157,10 @@ export function barometerFieldset(v: SettingsView): TemplateResult {
               testid="baro-pressure"
               required
               .display=${new DisplayUnits(s.units)}
-              .value=${b.pressure}
+              .value=${b.pressureAbs}
               .min=${SETTING_RANGES.baroPressure.min}
               .max=${SETTING_RANGES.baroPressure.max}
-              @value-change=${v.num((st, v) => (v === null ? null : { ...st, barometer: { ...st.barometer, pressure: v } }))}
+              @value-change=${v.num((st, v) => (v === null ? null : { ...st, barometer: { ...st.barometer, pressureAbs: v } }))}
             ></number-field>`
           : nothing
       }
@@ -180,7 +180,7 @@ export function barometerFieldset(v: SettingsView): TemplateResult {
             ></number-field>`
           : nothing
       }
-      <p class="note">In use: ${d.format('pressure', d.barometricPressure)}.</p>
+      <p class="note">In use: ${d.format('pressure', d.barometricPressureAbs)}.</p>
     </fieldset>
   `;
 }
@@ -207,15 +207,15 @@ export function instrumentsFieldset(v: SettingsView): TemplateResult {
       ></number-field>
       <number-field
         label="Pressure gauge full scale"
-        name="gaugeFullScale"
+        name="gaugeFullScaleGauge"
         quantity="gaugePressure"
         testid="gauge-full-scale"
         hint="Leave empty to take each tank’s design pressure"
         .display=${d}
-        .value=${s.gaugeFullScale}
-        .min=${SETTING_RANGES.gaugeFullScale.min}
-        .max=${SETTING_RANGES.gaugeFullScale.max}
-        @value-change=${v.num((st, v) => ({ ...st, gaugeFullScale: v }))}
+        .value=${s.gaugeFullScaleGauge}
+        .min=${SETTING_RANGES.gaugeFullScaleGauge.min}
+        .max=${SETTING_RANGES.gaugeFullScaleGauge.max}
+        @value-change=${v.num((st, v) => ({ ...st, gaugeFullScaleGauge: v }))}
       ></number-field>
       <number-field
         label="Thermometer tolerance (±)"

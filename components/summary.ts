@@ -23,7 +23,7 @@ function readingsLines(r: Readings, d: DisplayUnits): string[] {
   return [
     `Liquid temperature: ${d.format('temperature', r.liquidTemperature)}`,
     contents,
-    `Pressure gauge: ${r.gaugePressure === null ? 'not read' : d.format('gaugePressure', r.gaugePressure)}`,
+    `Pressure gauge: ${r.pressureReadingGauge === null ? 'not read' : d.format('gaugePressure', r.pressureReadingGauge)}`,
     r.peakAirTemperature === null
       ? 'Forecast: none entered (peak figures at today’s liquid temperature)'
       : `Forecast peak air: ${d.format('temperature', r.peakAirTemperature)} + sun allowance ${d.format('temperatureDifference', r.sunAllowance ?? 0)} (rule of thumb)`,
@@ -46,7 +46,7 @@ export function summaryText(
   const lines = [
     `Tank check — ${tank.name}${tank.site ? `, ${tank.site}` : ''}${tank.demo ? ' (invented demo tank)' : ''}`,
     `${at.toLocaleString()}${readings.takenAt ? ` · readings taken ${whenText(readings.takenAt)}` : ''}`,
-    `Product: ${result.product.label} · W.C. ${d.format('volume', tank.nameplate.waterCapacity)} · MAWP ${d.format('gaugePressure', tank.nameplate.designPressure)}`,
+    `Product: ${result.product.label} · W.C. ${d.format('volume', tank.nameplate.waterCapacity)} · MAWP ${d.format('gaugePressure', tank.nameplate.designPressureGauge)}`,
     '',
     `${key.stop}.`,
     `${key.room}.`,

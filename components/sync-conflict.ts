@@ -117,8 +117,8 @@ export class SyncConflict extends LitElement {
       ['Site', t.site || '—'],
       ['Product', productLabel(t.productId)],
       ['Water capacity', q('volume', np.waterCapacity)],
-      ['Design pressure', q('gaugePressure', np.designPressure)],
-      ['Relief setting', q('gaugePressure', np.reliefSetPressure)],
+      ['Design pressure', q('gaugePressure', np.designPressureGauge)],
+      ['Relief setting', q('gaugePressure', np.reliefSetPressureGauge)],
       ['Notes', t.notes || '—'],
       ['Changed', new Date(t.updatedAt).toLocaleString()],
     ];

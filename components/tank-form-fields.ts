@@ -61,33 +61,33 @@ export function nameplateFields(f: TankFormView): TemplateResult {
       ></number-field>
       <number-field
         label="Design pressure (MAWP)"
-        name="designPressure"
+        name="designPressureGauge"
         quantity="gaugePressure"
         required
         testid="tank-design-pressure"
         .display=${f.display}
-        .value=${np.designPressure}
+        .value=${np.designPressureGauge}
         .min=${TANK_RANGES.pressure.min}
         .max=${TANK_RANGES.pressure.max}
         .plausibleMin=${dp.min}
         .plausibleMax=${dp.max}
         plausible-what=${dp.what}
-        @value-change=${f.number('designPressure', (v) => f.setNameplate({ designPressure: v ?? Number.NaN }))}
+        @value-change=${f.number('designPressureGauge', (v) => f.setNameplate({ designPressureGauge: v ?? Number.NaN }))}
       ></number-field>
       <number-field
         label="Relief valve set pressure"
-        name="reliefSetPressure"
+        name="reliefSetPressureGauge"
         quantity="gaugePressure"
         testid="tank-relief-pressure"
         hint="Leave empty to use the design pressure"
         .display=${f.display}
-        .value=${np.reliefSetPressure ?? null}
+        .value=${np.reliefSetPressureGauge ?? null}
         .min=${TANK_RANGES.pressure.min}
         .max=${TANK_RANGES.pressure.max}
         .plausibleMin=${dp.min}
         .plausibleMax=${dp.max}
         plausible-what=${dp.what}
-        @value-change=${f.number('reliefSetPressure', (v) => f.setNameplate({ reliefSetPressure: v ?? undefined }))}
+        @value-change=${f.number('reliefSetPressureGauge', (v) => f.setNameplate({ reliefSetPressureGauge: v ?? undefined }))}
       ></number-field>
       ${nameplateChoices(f)} ${recoveryFields(f)}
       <number-field

@@ -84,7 +84,7 @@ export class TankForm extends LitElement {
       // A new tank starts with its required figures empty (NaN): they stay invalid until typed.
       const np = this._draft.nameplate;
       this._invalid = new Set(
-        (['waterCapacity', 'designPressure'] as const).filter((k) => !Number.isFinite(np[k])),
+        (['waterCapacity', 'designPressureGauge'] as const).filter((k) => !Number.isFinite(np[k])),
       );
       this._message = '';
     }
@@ -148,7 +148,7 @@ export class TankForm extends LitElement {
     const missing: string[] = [];
     if (d.name.trim() === '') missing.push('Name');
     if (!Number.isFinite(d.nameplate.waterCapacity)) missing.push('Water capacity');
-    if (!Number.isFinite(d.nameplate.designPressure)) missing.push('Design pressure (MAWP)');
+    if (!Number.isFinite(d.nameplate.designPressureGauge)) missing.push('Design pressure (MAWP)');
     // Every field shows its own message (and aria-invalid), not only the summary below.
     const fields = [...this.renderRoot.querySelectorAll<NumberField>('number-field')];
     const fieldsOk = fields.map((f) => f.reportValidity()).every(Boolean);

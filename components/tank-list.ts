@@ -135,7 +135,7 @@ export class TankList extends LitElement {
         <span class="name">${t.name}</span>
         <span class="meta"
           >${productLabel(t.productId)} · W.C. ${d.format('volume', np.waterCapacity)} · MAWP
-          ${d.format('gaugePressure', np.designPressure)}</span
+          ${d.format('gaugePressure', np.designPressureGauge)}</span
         >
         <span class="meta">
           ${

@@ -1,6 +1,6 @@
 /**
  * The app's own records: what is kept about a tank, a saved check and the user's settings.
- * Every number is SI (K, Pa gauge unless the name ends in `Absolute`, kg, m³, m), exactly as the
+ * Every number is SI (K, Pa — a pressure's name ends in `Gauge` or `Abs` —, kg, m³, m), exactly as the
  * check engine takes it; display units live only in `Settings.units` and are applied through
  * `thermo/units.ts`.
  *
@@ -51,7 +51,7 @@ export interface Readings {
   /** Net product mass on a scale, kg. */
   netMass: number | null;
   /** Pressure gauge reading, Pa gauge (optional). */
-  gaugePressure: number | null;
+  pressureReadingGauge: number | null;
   /** Forecast peak air temperature, K. */
   peakAirTemperature: number | null;
   /** Sun allowance added to the peak air temperature, K (a rule of thumb; see settings). */
@@ -67,8 +67,8 @@ export interface Readings {
 /** The key figures of a check as the engine gave them, kept with the check for history and CSV. */
 export interface CheckSummary {
   phase: TankPhase;
-  /** Expected pressure now, Pa gauge. */
-  pressure: number;
+  /** Expected pressure now, Pa gauge (`TankCheckResult.pGauge`). */
+  pGauge: number;
   /** kg */
   totalMass: number;
   /** m³ */
@@ -85,8 +85,8 @@ export interface CheckSummary {
   binding: string;
   /** K */
   peakTemperature: number;
-  /** Pa gauge (rounded up) */
-  peakPressure: number;
+  /** Pa gauge (rounded up; `PeakResult.pGauge`) */
+  peakGauge: number;
   /**
    * Pa gauge (rounded up): the peak raised by the model's allowance, the figure both headrooms are
    * measured from (`PeakResult.pGaugeUpper`). Absent in checks saved before it was kept.
@@ -155,14 +155,14 @@ export interface Settings {
   barometer: {
     mode: BarometerMode;
     /** Site barometric pressure, Pa absolute (used when mode is `pressure`). */
-    pressure: number;
+    pressureAbs: number;
     /** Site elevation, m (used when mode is `elevation`). */
     elevation: number;
   };
   /** Pressure gauge accuracy, fraction of full scale (0.02 = ±2 %). */
   gaugeAccuracy: number;
   /** Pressure gauge full scale, Pa gauge, or null for "same as the tank's design pressure". */
-  gaugeFullScale: number | null;
+  gaugeFullScaleGauge: number | null;
   /** Thermometer tolerance, K (±). Shown next to the temperature results. */
   thermometerTolerance: number;
   /** Default sun allowance for the peak, K (rule of thumb: +5 °C / 9 °F for an unshaded, uninsulated tank). */
@@ -183,9 +183,9 @@ export interface Settings {
 
 export const DEFAULT_SETTINGS: Settings = {
   units: { pressure: 'psig', temperature: 'F', volume: 'usgal', mass: 'lb', length: 'in' },
-  barometer: { mode: 'standard', pressure: P_ATM_Pa, elevation: 0 },
+  barometer: { mode: 'standard', pressureAbs: P_ATM_Pa, elevation: 0 },
   gaugeAccuracy: 0.02,
-  gaugeFullScale: null,
+  gaugeFullScaleGauge: null,
   thermometerTolerance: 1,
   sunAllowance: 5,
   theme: 'outdoor',
@@ -205,7 +205,7 @@ export function emptyReadings(sunAllowance: number): Readings {
     gaugePercent: null,
     levelHeight: null,
     netMass: null,
-    gaugePressure: null,
+    pressureReadingGauge: null,
     peakAirTemperature: null,
     sunAllowance,
   };

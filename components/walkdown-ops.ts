@@ -28,8 +28,8 @@ export function walkResult(row: BoardRow): WalkResult | null {
   return {
     level: row.level,
     productLabel: r.product.label || productLabel(row.tank.productId),
-    designPressure: np.designPressure,
-    reliefSetPressure: np.reliefSetPressure ?? np.designPressure,
+    designPressureGauge: np.designPressureGauge,
+    reliefSetPressureGauge: np.reliefSetPressureGauge ?? np.designPressureGauge,
     peakTemperature: r.peak.temperature,
     peakPhase: r.peak.phase,
     peakLiquidPercent: row.peakLiquidPercent,

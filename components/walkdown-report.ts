@@ -212,7 +212,7 @@ export class WalkdownReport extends LitElement {
               ${
                 r
                   ? html` <td class="n">
-                        ${d.number('gaugePressure', r.summary.peakPressure, 'up')}${upperCell(r, d)}
+                        ${d.number('gaugePressure', r.summary.peakGauge, 'up')}${upperCell(r, d)}
                       </td>
                       <td class="n">${shortHeadroom(r.summary.headroomToRelief, d)}</td>
                       <td class="n">
@@ -246,8 +246,8 @@ export class WalkdownReport extends LitElement {
         ${
           r
             ? html`<p>
-                  ${r.productLabel} · design ${d.format('gaugePressure', r.designPressure)} · relief
-                  ${d.format('gaugePressure', r.reliefSetPressure)}
+                  ${r.productLabel} · design ${d.format('gaugePressure', r.designPressureGauge)} ·
+                  relief ${d.format('gaugePressure', r.reliefSetPressureGauge)}
                 </p>
                 ${resultLines(r, d).map((l) => html`<span class="line">${l}</span>`)}`
             : nothing

@@ -18,9 +18,9 @@ export interface WalkResult {
   level: BoardLevel;
   productLabel: string;
   /** Pa gauge, as used. */
-  designPressure: number;
+  designPressureGauge: number;
   /** Pa gauge, as used (the design pressure when the nameplate gives none). */
-  reliefSetPressure: number;
+  reliefSetPressureGauge: number;
   /** K, the peak liquid temperature used (forecast + allowance). */
   peakTemperature: number;
   /** Phase state at the peak (a record made before this field reads as two-phase). */

@@ -206,14 +206,14 @@ export class WalkdownWalk extends LitElement {
       ></number-field>
       <number-field
         label="Pressure gauge (optional)"
-        name="gaugePressure"
+        name="pressureReadingGauge"
         quantity="gaugePressure"
         testid="walkdown-pressure"
         .display=${d}
-        .value=${r.gaugePressure}
-        .min=${-d.barometricPressure}
-        .max=${READING_RANGES.gaugePressureMax}
-        @value-change=${this._field('gaugePressure')}
+        .value=${r.pressureReadingGauge}
+        .min=${-d.barometricPressureAbs}
+        .max=${READING_RANGES.pressureReadingGaugeMax}
+        @value-change=${this._field('pressureReadingGauge')}
       ></number-field>
       ${tank ? nothing : html`<p class="error">This tank was deleted; it can only be skipped.</p>`}`;
   }

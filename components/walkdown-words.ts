@@ -68,7 +68,7 @@ export function cautionText(c: Caution, d: DisplayUnits): string {
 export function upperOf(r: WalkResult): UpperPeak {
   const s = r.summary;
   return {
-    peak: s.peakPressure,
+    peak: s.peakGauge,
     upper: s.peakGaugeUpper,
     allowance: s.peakAllowance,
     phase: r.peakPhase,
@@ -88,7 +88,7 @@ function upperLead(r: WalkResult, d: DisplayUnits): string {
 export function resultLines(r: WalkResult, d: DisplayUnits): string[] {
   const s = r.summary;
   return [
-    `Peak ${d.format('gaugePressure', s.peakPressure, 'up')} at ${d.format('temperature', r.peakTemperature)} liquid`,
+    `Peak ${d.format('gaugePressure', s.peakGauge, 'up')} at ${d.format('temperature', r.peakTemperature)} liquid`,
     `${upperLead(r, d)} relief ${headroomText(s.headroomToRelief, d)} · to design ${headroomText(s.headroomToDesign, d)}`,
     r.peakPhase === 'supercritical' || r.peakPhase === 'vapour-only'
       ? `No liquid surface at the peak (${r.peakPhase === 'supercritical' ? 'above the critical temperature' : 'vapour only'}) · liquid-full ${marginText(r.liquidFullMargin, d)}`
@@ -140,7 +140,7 @@ export function walkdownText(w: WalkdownRecord, d: DisplayUnits): string {
     if (e.result) {
       lines.push(...resultLines(e.result, d).map((l) => `   ${l}`));
       lines.push(
-        `   Design ${d.format('gaugePressure', e.result.designPressure)} · relief ${d.format('gaugePressure', e.result.reliefSetPressure)}`,
+        `   Design ${d.format('gaugePressure', e.result.designPressureGauge)} · relief ${d.format('gaugePressure', e.result.reliefSetPressureGauge)}`,
       );
       for (const c of e.result.cautions.filter((x) => x.code !== 'standing'))
         lines.push(`   - ${c.level.toUpperCase()}: ${cautionText(c, d)}`);

@@ -8,6 +8,9 @@
  *   1  { format: 'tankside-backup', version: 1, exportedAt, tanks, checks, settings }
  *   2  adds `fills` (fill records, pwa/fill-backup.ts), `sites` (site forecasts) and `walkdowns`
  *      (pwa/walkdown-backup.ts); a format-1 file reads as one with none of them and imports whole.
+ *   3  the same records with every pressure named gauge or absolute (`designPressureGauge`,
+ *      `pressureReadingGauge`, `pGauge`, `barometer.pressureAbs`, …; pwa/legacy-names.ts has
+ *      the whole table); a format-1 or -2 file is renamed on the way in, values unchanged.
  */
 import type { DataSet } from './storage.js';
 import type { FillRecord } from '../thermo/fill/index.js';
@@ -24,9 +27,16 @@ import { TEXT_LIMITS } from '../components/limits.js';
 import type { NumberFormatId } from '../components/number-parse.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 import { WalkInvalid, validateWalkData } from './walkdown-backup.js';
+import {
+  upgradeCheck,
+  upgradeFill,
+  upgradeSettings,
+  upgradeTank,
+  upgradeWalkdown,
+} from './legacy-names.js';
 
 export const BACKUP_FORMAT = 'tankside-backup';
-export const BACKUP_VERSION = 2;
+export const BACKUP_VERSION = 3;
 /** Larger files are refused before they are read (a register of thousands of checks is far smaller). */
 export const BACKUP_MAX_BYTES = 20 * 1024 * 1024;
 
@@ -139,8 +149,8 @@ export function validateTank(t: unknown, i: number): TankRecord {
   if (!isObj(np)) fail(w, '“nameplate” is missing');
   const nw = `${w}, nameplate`;
   num(np, 'waterCapacity', nw, 1e-4, 1e5);
-  num(np, 'designPressure', nw, 1e4, 1e8);
-  optNum(np, 'reliefSetPressure', nw, 1e4, 1e8);
+  num(np, 'designPressureGauge', nw, 1e4, 1e8);
+  optNum(np, 'reliefSetPressureGauge', nw, 1e4, 1e8);
   oneOf(np, 'placement', nw, ['aboveground', 'underground'] as const, true);
   oneOf(np, 'containerClass', nw, ['storage', 'cylinder', 'cargo', 'portable'] as const, true);
   bool(np, 'insulated', nw, true);
@@ -176,7 +186,7 @@ function validateReadings(r: unknown, where: string): Readings {
   nullableNum(r, 'gaugePercent', w, 0, 100);
   nullableNum(r, 'levelHeight', w, 0, 1e3);
   nullableNum(r, 'netMass', w, 0, 1e8);
-  nullableNum(r, 'gaugePressure', w, -2e5, 1e8);
+  nullableNum(r, 'pressureReadingGauge', w, -2e5, 1e8);
   nullableNum(r, 'peakAirTemperature', w, 0, 1000);
   nullableNum(r, 'sunAllowance', w, 0, 100);
   return r as unknown as Readings;
@@ -197,7 +207,7 @@ function validateSummary(s: unknown, where: string): CheckSummary {
   const w = `${where}, summary`;
   oneOf(s, 'phase', w, ['two-phase', 'liquid-full', 'vapour-only', 'supercritical'] as const);
   for (const k of [
-    'pressure',
+    'pGauge',
     'totalMass',
     'liquidVolume',
     'fillingDensity',
@@ -205,7 +215,7 @@ function validateSummary(s: unknown, where: string): CheckSummary {
     'roomLeftMass',
     'stopAtGaugePercent',
     'peakTemperature',
-    'peakPressure',
+    'peakGauge',
     'peakLiquidFraction',
     'headroomToDesign',
     'headroomToRelief',
@@ -255,10 +265,10 @@ function validateSettings(s: unknown): Settings {
   const b = s.barometer;
   if (!isObj(b)) fail(where, '“barometer” is missing');
   oneOf(b, 'mode', `${where}, barometer`, ['standard', 'pressure', 'elevation'] as const);
-  num(b, 'pressure', `${where}, barometer`, 20_000, 120_000);
+  num(b, 'pressureAbs', `${where}, barometer`, 20_000, 120_000);
   num(b, 'elevation', `${where}, barometer`, -500, 11_000);
   num(s, 'gaugeAccuracy', where, 0, 0.2);
-  nullableNum(s, 'gaugeFullScale', where, 1e4, 1e8);
+  nullableNum(s, 'gaugeFullScaleGauge', where, 1e4, 1e8);
   num(s, 'thermometerTolerance', where, 0, 10);
   num(s, 'sunAllowance', where, 0, 40);
   oneOf(s, 'theme', where, ['standard', 'outdoor'] as const);
@@ -268,6 +278,44 @@ function validateSettings(s: unknown): Settings {
   bool(s, 'fillMeterCompensated', where, true);
   optNum(s, 'staleReadingDays', where, 1, 365);
   return { ...DEFAULT_SETTINGS, ...(s as unknown as Settings) };
+}
+
+const list = (x: unknown, upgrade: (r: unknown) => unknown): unknown =>
+  Array.isArray(x) ? x.map(upgrade) : x;
+
+/** A format-1 or -2 file's records under the names of format 3 (the values as they were). */
+function withNewNames(raw: Obj): Obj {
+  return {
+    ...raw,
+    tanks: list(raw.tanks, upgradeTank),
+    checks: list(raw.checks, upgradeCheck),
+    settings: upgradeSettings(raw.settings),
+    fills: list(raw.fills, upgradeFill),
+    walkdowns: list(raw.walkdowns, upgradeWalkdown),
+  };
+}
+
+/** Every record of a file (in format-3 names), validated whole; throws on the first fault. */
+function validateFile(file: Obj): DataSet {
+  if (!Array.isArray(file.tanks)) fail('The file', '“tanks” must be a list');
+  if (!Array.isArray(file.checks)) fail('The file', '“checks” must be a list');
+  const tanks = file.tanks.map(validateTank);
+  const tankIds = new Set<string>();
+  for (const t of tanks) {
+    if (tankIds.has(t.id)) fail(`Tank “${t.name}”`, 'has the same id as another tank in the file');
+    tankIds.add(t.id);
+  }
+  const checks = file.checks.map((c, i) => validateCheck(c, i, tankIds));
+  const checkIds = new Set<string>();
+  for (const c of checks) {
+    if (checkIds.has(c.id)) fail('A check', 'has the same id as another check in the file');
+    checkIds.add(c.id);
+  }
+  const settings =
+    file.settings === null || file.settings === undefined ? null : validateSettings(file.settings);
+  const fills = validateBackupFills(file.fills, tankIds);
+  const { sites, walkdowns } = validateWalkData(file);
+  return { tanks, checks, settings, fills, sites, walkdowns };
 }
 
 /** Reads and validates a backup file's text. Never throws. */
@@ -295,26 +343,7 @@ export function parseBackup(text: string): ParseResult {
     };
   }
   try {
-    if (!Array.isArray(raw.tanks)) fail('The file', '“tanks” must be a list');
-    if (!Array.isArray(raw.checks)) fail('The file', '“checks” must be a list');
-    const tanks = raw.tanks.map(validateTank);
-    const tankIds = new Set<string>();
-    for (const t of tanks) {
-      if (tankIds.has(t.id))
-        fail(`Tank “${t.name}”`, 'has the same id as another tank in the file');
-      tankIds.add(t.id);
-    }
-    const checks = raw.checks.map((c, i) => validateCheck(c, i, tankIds));
-    const checkIds = new Set<string>();
-    for (const c of checks) {
-      if (checkIds.has(c.id)) fail('A check', 'has the same id as another check in the file');
-      checkIds.add(c.id);
-    }
-    const settings =
-      raw.settings === null || raw.settings === undefined ? null : validateSettings(raw.settings);
-    const fills = validateBackupFills(raw.fills, tankIds);
-    const { sites, walkdowns } = validateWalkData(raw);
-    return { ok: true, data: { tanks, checks, settings, fills, sites, walkdowns } };
+    return { ok: true, data: validateFile(raw.version < 3 ? withNewNames(raw) : raw) };
   } catch (e) {
     if (e instanceof Invalid || e instanceof FillBackupError || e instanceof WalkInvalid)
       return {

@@ -89,8 +89,8 @@ const lb = (x: number) => toSI('mass', x, 'lb');
 export function demoSpec(row: DemoRow): DemoSpec {
   const nameplate: TankInput = {
     waterCapacity: toSI('volume', row.capacity[0], row.capacity[1]),
-    designPressure: psig(row.designPsig),
-    ...(row.reliefPsig !== undefined ? { reliefSetPressure: psig(row.reliefPsig) } : {}),
+    designPressureGauge: psig(row.designPsig),
+    ...(row.reliefPsig !== undefined ? { reliefSetPressureGauge: psig(row.reliefPsig) } : {}),
     ...(row.placement ? { placement: row.placement } : {}),
     containerClass: row.containerClass,
     ...(row.fillMethod ? { fillMethod: row.fillMethod } : {}),
@@ -101,7 +101,7 @@ export function demoSpec(row: DemoRow): DemoSpec {
     contentsMode: row.contents,
     ...(row.gaugePercent !== undefined ? { gaugePercent: row.gaugePercent } : {}),
     ...(row.netMassLb !== undefined ? { netMass: lb(row.netMassLb) } : {}),
-    ...(row.gaugePsig !== undefined ? { gaugePressure: psig(row.gaugePsig) } : {}),
+    ...(row.gaugePsig !== undefined ? { pressureReadingGauge: psig(row.gaugePsig) } : {}),
     peakAirTemperature: F(row.peakAirF),
   };
   return {

@@ -68,7 +68,7 @@ export function fillsToCsv(tanks: TankRecord[], fills: FillRecord[], d: DisplayU
         n('mass', r.deliveredMass),
         pct(f.after.gaugePercent),
         n('temperature', r.afterTemperature),
-        n('gaugePressure', f.after.gaugePressure),
+        n('gaugePressure', f.after.pressureReadingGauge),
         pct(r.expectedGaugePercent),
         pct(r.difference),
         pct(r.band.halfWidth, 'down'),

@@ -14,9 +14,18 @@ import {
 import type { CheckBrief, CheckRecord, DraftRecord, TankRecord } from '../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../components/walkdown-types.js';
 import type { FillDraft, FillRecord } from '../components/fill-types.js';
+import {
+  upgradeCheck,
+  upgradeDraft,
+  upgradeFill,
+  upgradeFillDraft,
+  upgradeSettings,
+  upgradeTank,
+  upgradeWalkdown,
+} from './legacy-names.js';
 
 export const DB_NAME = 'tankside';
-export const DB_VERSION = 4;
+export const DB_VERSION = 5;
 
 /** Bookkeeping that is not a user setting. */
 export interface Meta {
@@ -87,7 +96,36 @@ export const UPGRADES: readonly UpgradeStep[] = [
         for (const c of newestPerTank(all)) void latest.put(briefOf(c));
       });
   },
+  // 4 → 5: every stored pressure says gauge or absolute in its name (pwa/legacy-names.ts):
+  // each record is rewritten in place with the same values under the new names; a record
+  // without such a field is left as it is; none is added or removed.
+  (_db, tx) => {
+    renameAll(tx, 'tanks', upgradeTank);
+    renameAll(tx, 'checks', upgradeCheck);
+    renameAll(tx, 'drafts', upgradeDraft);
+    renameAll(tx, 'walkdowns', upgradeWalkdown);
+    renameAll(tx, 'fills', upgradeFill);
+    renameAll(tx, 'fillDrafts', upgradeFillDraft);
+    const settings = tx.objectStore('settings');
+    void settings.get('settings').then((s) => {
+      const now = upgradeSettings(s);
+      if (now !== s) void settings.put(now, 'settings');
+    });
+  },
 ];
+
+type RenamedStore = 'tanks' | 'checks' | 'drafts' | 'walkdowns' | 'fills' | 'fillDrafts';
+
+/** Puts back each record of `store` that `upgrade` changed (stores keyed by a key path). */
+function renameAll(tx: UpgradeTx, store: RenamedStore, upgrade: (r: unknown) => unknown): void {
+  const os = tx.objectStore(store);
+  void os.getAll().then((all) => {
+    for (const r of all as unknown[]) {
+      const now = upgrade(r);
+      if (now !== r) void os.put(now as never);
+    }
+  });
+}
 
 if (UPGRADES.length !== DB_VERSION) throw new Error('storage: one upgrade step per schema version');
 

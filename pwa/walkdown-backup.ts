@@ -81,7 +81,7 @@ const READING_KEYS = [
   'gaugePercent',
   'levelHeight',
   'netMass',
-  'gaugePressure',
+  'pressureReadingGauge',
   'peakAirTemperature',
   'sunAllowance',
 ] as const;
@@ -106,7 +106,12 @@ function validateEntry(e: unknown, where: string): void {
     const res = e.result;
     if (!isObj(res) || !isObj(res.summary) || !Array.isArray(res.cautions))
       fail(where, '“result” must hold a summary and its cautions');
-    for (const k of ['designPressure', 'reliefSetPressure', 'peakTemperature', 'peakLiquidPercent'])
+    for (const k of [
+      'designPressureGauge',
+      'reliefSetPressureGauge',
+      'peakTemperature',
+      'peakLiquidPercent',
+    ])
       num(res, k, `${where}, result`, -1e12, 1e12);
     num(res, 'liquidFullMargin', `${where}, result`, -1e3, 1e3, true);
     num(res, 'reliefMargin', `${where}, result`, -1e3, 1e3, true);

@@ -67,10 +67,10 @@ function entryRow(w: WalkdownRecord, e: WalkEntry, rank: number, d: DisplayUnits
     e.readings.gaugePercent === null
       ? ''
       : numCell(formatPercent(e.readings.gaugePercent).replace(' %', '')),
-    n('gaugePressure', e.readings.gaugePressure),
-    n('gaugePressure', r?.designPressure),
-    n('gaugePressure', r?.reliefSetPressure),
-    n('gaugePressure', s?.peakPressure, 'up'),
+    n('gaugePressure', e.readings.pressureReadingGauge),
+    n('gaugePressure', r?.designPressureGauge),
+    n('gaugePressure', r?.reliefSetPressureGauge),
+    n('gaugePressure', s?.peakGauge, 'up'),
     n('pressureDifference', s?.headroomToRelief, 'down'),
     n('pressureDifference', s?.headroomToDesign, 'down'),
     r ? numCell(formatPercent(r.peakLiquidPercent, 'up').replace(' %', '')) : '',

@@ -18,8 +18,8 @@ function input(liquidC: number, gauge: number, peakC: number): Input {
   return {
     tank: {
       waterCapacity: toSI('volume', 1000, 'usgal'),
-      designPressure: toSI('gaugePressure', 250, 'psig'),
-      reliefSetPressure: toSI('gaugePressure', 220, 'psig'),
+      designPressureGauge: toSI('gaugePressure', 250, 'psig'),
+      reliefSetPressureGauge: toSI('gaugePressure', 220, 'psig'),
     },
     product: blend,
     liquidTemperature: toSI('temperature', liquidC, 'C'),

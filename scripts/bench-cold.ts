@@ -13,7 +13,11 @@ import { hd5Blend, loadEngine } from './bench/engine-copy.js';
 const e = await loadEngine();
 const PSI = 6894.757293168;
 const input = {
-  tank: { waterCapacity: 3.785411784, designPressure: 250 * PSI, reliefSetPressure: 220 * PSI },
+  tank: {
+    waterCapacity: 3.785411784,
+    designPressureGauge: 250 * PSI,
+    reliefSetPressureGauge: 220 * PSI,
+  },
   product: hd5Blend(e),
   liquidTemperature: 294.15,
   contents: { gaugePercent: 62 },

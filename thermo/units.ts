@@ -135,7 +135,7 @@ function pressureUnits(): readonly (UnitInfo & { id: PressureUnit })[] {
 /** Options of a conversion. */
 export interface ConvertOptions {
   /** Site barometric pressure, Pa absolute (default 101 325 Pa). Used only across gauge/absolute. */
-  barometricPressure?: number;
+  barometricPressureAbs?: number;
 }
 
 /** Pressure units: scale to Pa and whether the value is gauge. */
@@ -167,9 +167,9 @@ const LINEAR: {
 };
 
 function baro(options: ConvertOptions | undefined): number {
-  const pb = options?.barometricPressure ?? P_ATM_Pa;
+  const pb = options?.barometricPressureAbs ?? P_ATM_Pa;
   if (typeof pb !== 'number' || !Number.isFinite(pb) || pb < 20_000 || pb > 120_000) {
-    throw new InputError('barometricPressure', 'from 20 000 to 120 000 Pa absolute', pb);
+    throw new InputError('barometricPressureAbs', 'from 20 000 to 120 000 Pa absolute', pb);
   }
   return pb;
 }

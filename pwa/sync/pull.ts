@@ -2,7 +2,7 @@
  * Pull: the replica's changes into the phone's store (see pwa/sync/bridge.ts for the whole
  * design), and the choices a person makes on a conflicting tank.
  */
-import { docIdOf, parseDocId, validateSyncDoc } from './record-schema.js';
+import { docIdOf, parseDocId, upgradeSyncRecord, validateSyncDoc } from './record-schema.js';
 import type { SyncDoc, SyncKind } from './record-schema.js';
 import type { LocalSide, PouchChange, PouchLike, SyncBook, SyncMarks } from './bridge.js';
 
@@ -140,7 +140,8 @@ function onTank(b: Batch, c: PouchChange, key: string): void {
   }
   b.tanks.add(key);
   // A local edit not pushed yet is newer: the flush writes it over this revision.
-  if (!b.pending.has(c.id)) b.puts.push({ kind: 'tank', record: c.doc.record });
+  if (!b.pending.has(c.id))
+    b.puts.push({ kind: 'tank', record: upgradeSyncRecord('tank', c.doc.record) });
 }
 
 async function onOther(
@@ -171,7 +172,7 @@ async function onOther(
     }
   }
   b.waiting.delete(c.id);
-  b.puts.push({ kind: p.kind, record: doc.record });
+  b.puts.push({ kind: p.kind, record: upgradeSyncRecord(p.kind, doc.record) });
 }
 
 /**
@@ -219,7 +220,7 @@ async function retryWaiting(book: SyncBook, local: LocalSide, pouch: PouchLike):
     if (!doc || row.value?.deleted) continue;
     const tankId = (doc.record as { tankId?: string }).tankId ?? '';
     if ((await local.getShared('tank', tankId)) !== undefined)
-      puts.push({ kind: doc.kind, record: doc.record });
+      puts.push({ kind: doc.kind, record: upgradeSyncRecord(doc.kind, doc.record) });
     else still.push(row.key);
   }
   if (puts.length) await local.applyShared(puts, []);
@@ -232,7 +233,7 @@ export async function tankVersions(pouch: PouchLike, tankId: string): Promise<Sy
   const winner = await pouch.get(id, { conflicts: true });
   const out = [winner];
   for (const rev of winner._conflicts ?? []) out.push(await pouch.get(id, { rev }));
-  return out;
+  return out.map((d) => ({ ...d, record: upgradeSyncRecord('tank', d.record) }));
 }
 
 /** Keeps the version `keepRev` of a conflicting tank and deletes the others. */

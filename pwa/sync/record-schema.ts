@@ -5,11 +5,18 @@
  * validators (pwa/backup.ts, pwa/fill-backup.ts's engine check, pwa/walkdown-backup.ts), so the
  * server's `validate_doc_update` (built from this file by scripts/sync/design-doc.mjs) refuses
  * exactly what an import would refuse, and follows any change of the record format.
+ *
+ * A record written by a phone whose app is older than the pressure names that say gauge or
+ * absolute (storage v5, backup format 3) carries the old names: `upgradeSyncRecord` renames them
+ * (pwa/legacy-names.ts, as the backup import does for a format-2 file), the check runs on the
+ * renamed record, and the pull stores the renamed record; so such a record is accepted and read,
+ * never dropped.
  */
 import { Invalid, validateCheck, validateTank } from '../backup.js';
 import { WalkInvalid, validateSite, validateWalkdown } from '../walkdown-backup.js';
 import { validateFillRecord } from '../../thermo/fill/index.js';
 import { InputError } from '../../thermo/errors.js';
+import { upgradeCheck, upgradeFill, upgradeTank, upgradeWalkdown } from '../legacy-names.js';
 
 import { SYNC_KINDS, docIdOf, type SyncKind } from './ids.js';
 export { SYNC_KINDS, docIdOf, type SyncKind };
@@ -44,6 +51,22 @@ export function keyOf(kind: SyncKind, record: unknown): string {
   return typeof k === 'string' ? k : '';
 }
 
+/** A record of `kind` under the current names (a teammate's older app may send the old ones). */
+export function upgradeSyncRecord(kind: SyncKind, record: unknown): unknown {
+  switch (kind) {
+    case 'tank':
+      return upgradeTank(record);
+    case 'check':
+      return upgradeCheck(record);
+    case 'fill':
+      return upgradeFill(record);
+    case 'walkdown':
+      return upgradeWalkdown(record);
+    case 'site':
+      return record;
+  }
+}
+
 function checkRecord(kind: SyncKind, record: unknown): void {
   switch (kind) {
     case 'tank':
@@ -73,7 +96,7 @@ export function validateSyncDoc(doc: unknown): string | null {
   if (!parsed) return `The id must be one of ${SYNC_KINDS.join(', ')} followed by “:” and a key`;
   if (d.kind !== parsed.kind) return `“kind” must be ${parsed.kind}, as the id says`;
   try {
-    checkRecord(parsed.kind, d.record);
+    checkRecord(parsed.kind, upgradeSyncRecord(parsed.kind, d.record));
   } catch (e) {
     if (e instanceof Invalid || e instanceof WalkInvalid) return e.message;
     if (e instanceof InputError) return `Fill: “${e.field}” must be ${e.validRange}`;

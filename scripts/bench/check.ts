@@ -34,14 +34,14 @@ function tankInput(product: TankCheckInput['product'], i: number): TankCheckInpu
   return {
     tank: {
       waterCapacity: toSI('volume', 1000, 'usgal'),
-      designPressure: toSI('gaugePressure', 250, 'psig'),
-      reliefSetPressure: toSI('gaugePressure', 220, 'psig'),
+      designPressureGauge: toSI('gaugePressure', 250, 'psig'),
+      reliefSetPressureGauge: toSI('gaugePressure', 220, 'psig'),
       minDesignMetalTemperature: toSI('temperature', -20, 'F'),
     },
     product,
     liquidTemperature: toSI('temperature', 70, 'F') + dT,
     contents: { gaugePercent: 62 },
-    gaugePressure: toSI('gaugePressure', 115, 'psig'),
+    pressureReadingGauge: toSI('gaugePressure', 115, 'psig'),
     peakTemperature: toSI('temperature', 105, 'F') + dT,
   };
 }
@@ -52,14 +52,14 @@ function cylinderInput(i: number): TankCheckInput {
   return {
     tank: {
       waterCapacity: toSI('volume', 6, 'usgal'),
-      designPressure: toSI('gaugePressure', 400, 'psig'),
+      designPressureGauge: toSI('gaugePressure', 400, 'psig'),
       containerClass: 'cylinder',
       recovery: {},
     },
     product: 'r410a',
     liquidTemperature: toSI('temperature', 85, 'F') + dT,
     contents: { netMass: toSI('mass', 36, 'lb') },
-    gaugePressure: toSI('gaugePressure', 270, 'psig'),
+    pressureReadingGauge: toSI('gaugePressure', 270, 'psig'),
     peakTemperature: toSI('temperature', 140, 'F') + dT,
   };
 }

@@ -35,7 +35,7 @@ const tank: TankRecord = {
   notes: '',
   nameplate: {
     waterCapacity: toSI('volume', 500, 'usgal'),
-    designPressure: toSI('gaugePressure', 250, 'psig'),
+    designPressureGauge: toSI('gaugePressure', 250, 'psig'),
     placement: 'aboveground',
     containerClass: 'storage',
   },
@@ -187,7 +187,7 @@ describe('check-screen at 320 px', () => {
     const low: TankRecord = {
       ...tank,
       productId: 'preset:pb-50-50',
-      nameplate: { ...tank.nameplate, designPressure: toSI('gaugePressure', 60, 'psig') },
+      nameplate: { ...tank.nameplate, designPressureGauge: toSI('gaugePressure', 60, 'psig') },
     };
     const r = readings({ liquidTemperature: toSI('temperature', 35, 'C') });
     // The element itself is the fixture (a plain wrapper would wait for an animation frame,

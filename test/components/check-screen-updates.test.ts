@@ -33,8 +33,8 @@ const tank: TankRecord = {
   notes: '',
   nameplate: {
     waterCapacity: 1,
-    designPressure: toSI('gaugePressure', 1700, 'kPag'),
-    reliefSetPressure: toSI('gaugePressure', 1600, 'kPag'),
+    designPressureGauge: toSI('gaugePressure', 1700, 'kPag'),
+    reliefSetPressureGauge: toSI('gaugePressure', 1600, 'kPag'),
     placement: 'aboveground',
     containerClass: 'storage',
   },
@@ -49,7 +49,7 @@ function readings(patch: Partial<Readings> = {}): Readings {
     ...emptyReadings(5),
     liquidTemperature: toSI('temperature', 20, 'C'),
     gaugePercent: 50,
-    gaugePressure: toSI('gaugePressure', 800, 'kPag'),
+    pressureReadingGauge: toSI('gaugePressure', 800, 'kPag'),
     peakAirTemperature: toSI('temperature', 30, 'C'),
     ...patch,
   };
@@ -147,7 +147,7 @@ describe('check-screen draws again only what changed, and every figure follows a
     const other: TankRecord = {
       ...tank,
       name: 'Renamed tank',
-      nameplate: { ...tank.nameplate, designPressure: toSI('gaugePressure', 2400, 'kPag') },
+      nameplate: { ...tank.nameplate, designPressureGauge: toSI('gaugePressure', 2400, 'kPag') },
     };
     el.tank = other;
     await settle(el);

@@ -33,7 +33,7 @@ const tank: TankRecord = {
   notes: '',
   nameplate: {
     waterCapacity: 1,
-    designPressure: toSI('gaugePressure', 1700, 'kPag'),
+    designPressureGauge: toSI('gaugePressure', 1700, 'kPag'),
     placement: 'aboveground',
     containerClass: 'storage',
   },

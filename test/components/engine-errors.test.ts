@@ -34,7 +34,7 @@ function tank(productId: string, patch: Partial<TankRecord['nameplate']> = {}): 
     notes: '',
     nameplate: {
       waterCapacity: toSI('volume', 1000, 'usgal'),
-      designPressure: toSI('gaugePressure', 250, 'psig'),
+      designPressureGauge: toSI('gaugePressure', 250, 'psig'),
       placement: 'aboveground',
       containerClass: 'storage',
       ...patch,
@@ -143,7 +143,7 @@ describe('check-screen engine errors in the user’s units', () => {
     // 1.45…14 503.8 psig, shown in whole psig rounded inward and grouped from 10 000 up in the
     // default (en-US) number format: 2 and 14,503.
     const el = await screen(
-      tank('propane', { designPressure: toSI('gaugePressure', 1, 'psig') }),
+      tank('propane', { designPressureGauge: toSI('gaugePressure', 1, 'psig') }),
       readings(),
     );
     const text = byTestId(el, 'results-error').textContent ?? '';

@@ -33,7 +33,7 @@ const METRIC: Settings = {
 const CASES = 'test/reference/fill/worked-cases.md';
 
 const check: TankCheckInput = {
-  tank: { waterCapacity: gal(1000), designPressure: toSI('gaugePressure', 250, 'psig') },
+  tank: { waterCapacity: gal(1000), designPressureGauge: toSI('gaugePressure', 250, 'psig') },
   product: 'propane',
   liquidTemperature: F(60),
   contents: { gaugePercent: 20 },
@@ -77,7 +77,7 @@ describe('fill findings in the user’s units', () => {
       run({ volume: 0 }, { gaugePercent: 20 }),
       run(
         { volume: gal(400) },
-        { gaugePercent: 61, gaugePressure: toSI('gaugePressure', 11.3, 'psig') },
+        { gaugePercent: 61, pressureReadingGauge: toSI('gaugePressure', 11.3, 'psig') },
       ),
       run({ volume: gal(750) }, { gaugePercent: 75 }, empty),
     ];

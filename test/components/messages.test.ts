@@ -48,7 +48,7 @@ const ENGINE_NAMES =
   /contents\.[a-zA-Z]|gaugePercent|netMass|liquidTemperature|peakTemperature|[a-z]+-[a-z]+-[a-z]+/;
 
 const propane = (patch: Partial<TankCheckInput> = {}): TankCheckInput => ({
-  tank: { waterCapacity: 1.9, designPressure: 1.72e6 },
+  tank: { waterCapacity: 1.9, designPressureGauge: 1.72e6 },
   product: 'propane',
   liquidTemperature: 290,
   contents: { gaugePercent: 50 },
@@ -58,37 +58,39 @@ const propane = (patch: Partial<TankCheckInput> = {}): TankCheckInput => ({
 
 const SCENARIOS: TankCheckInput[] = [
   {
-    tank: { waterCapacity: 1, designPressure: 2e7 },
+    tank: { waterCapacity: 1, designPressureGauge: 2e7 },
     product: 'carbon-dioxide',
     liquidTemperature: 283.15,
     contents: { netMass: 700 },
     peakTemperature: 304.35,
   },
   {
-    tank: { waterCapacity: 1, designPressure: 2e7 },
+    tank: { waterCapacity: 1, designPressureGauge: 2e7 },
     product: 'carbon-dioxide',
     liquidTemperature: 310,
     contents: { netMass: 600 },
     peakTemperature: 312,
   },
   {
-    tank: { waterCapacity: 1, designPressure: 2e7, reliefSetPressure: 1.9e7 },
+    tank: { waterCapacity: 1, designPressureGauge: 2e7, reliefSetPressureGauge: 1.9e7 },
     product: 'carbon-dioxide',
     liquidTemperature: 280,
     contents: { netMass: 200 },
     peakTemperature: 310,
-    gaugePressure: 2e5,
+    pressureReadingGauge: 2e5,
   },
   {
-    tank: { waterCapacity: 1, designPressure: 1e6, minDesignMetalTemperature: 260 },
+    tank: { waterCapacity: 1, designPressureGauge: 1e6, minDesignMetalTemperature: 260 },
     product: 'n-butane',
     liquidTemperature: 250,
     contents: { gaugePercent: 40 },
     peakTemperature: 290,
   },
-  propane({ tank: { waterCapacity: 1.9, designPressure: 1.72e6, minDesignMetalTemperature: 240 } }),
-  propane({ gaugePressure: 2e6 }),
-  propane({ gaugePressure: 3e5, specificGravity: 0.6 }),
+  propane({
+    tank: { waterCapacity: 1.9, designPressureGauge: 1.72e6, minDesignMetalTemperature: 240 },
+  }),
+  propane({ pressureReadingGauge: 2e6 }),
+  propane({ pressureReadingGauge: 3e5, specificGravity: 0.6 }),
   propane({ contents: { gaugePercent: 100 } }),
   propane({ contents: { gaugePercent: 87 }, peakTemperature: 318 }),
   propane({ contents: { gaugePercent: 80 }, peakTemperature: 312 }),
@@ -96,14 +98,16 @@ const SCENARIOS: TankCheckInput[] = [
   propane({
     tank: {
       waterCapacity: 1.9,
-      designPressure: 1.72e6,
-      reliefSetPressure: 1.8e6,
+      designPressureGauge: 1.72e6,
+      reliefSetPressureGauge: 1.8e6,
       shape: { kind: 'sphere', diameter: 2 },
     },
     peakTemperature: 280,
   }),
-  propane({ tank: { waterCapacity: 1.9, designPressure: 1.2e6 }, peakTemperature: 320 }),
-  propane({ tank: { waterCapacity: 1.9, designPressure: 1.2e6, reliefSetPressure: 1.19e6 } }),
+  propane({ tank: { waterCapacity: 1.9, designPressureGauge: 1.2e6 }, peakTemperature: 320 }),
+  propane({
+    tank: { waterCapacity: 1.9, designPressureGauge: 1.2e6, reliefSetPressureGauge: 1.19e6 },
+  }),
   {
     ...propane(),
     product: LPG_PRESETS.find((p) => p.id === 'pb-50-50')!.product,
@@ -190,7 +194,7 @@ describe('check-results says the relief setting is reached now', () => {
     // a relief setting of 0.5 MPa gauge is below it, so it is reached now.
     const r = checkTank(
       propane({
-        tank: { waterCapacity: 1.9, designPressure: 1.72e6, reliefSetPressure: 5e5 },
+        tank: { waterCapacity: 1.9, designPressureGauge: 1.72e6, reliefSetPressureGauge: 5e5 },
         liquidTemperature: 300,
       }),
     );

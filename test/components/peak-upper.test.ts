@@ -30,7 +30,7 @@ const num = (s: string | null | undefined) => Number(/-?[\d.]+/.exec(s ?? '')![0
 describe('peak and its raised figure', () => {
   it('the result card shows the peak and the figure both headrooms are measured from', async () => {
     const r = checkTank({
-      tank: { waterCapacity: V, designPressure: DESIGN, reliefSetPressure: DESIGN },
+      tank: { waterCapacity: V, designPressureGauge: DESIGN, reliefSetPressureGauge: DESIGN },
       product: 'carbon-dioxide',
       liquidTemperature: F(70),
       contents: { netMass: MASS },
@@ -62,7 +62,7 @@ describe('peak and its raised figure', () => {
       notes: '',
       nameplate: {
         waterCapacity: V,
-        designPressure: DESIGN,
+        designPressureGauge: DESIGN,
         placement: 'aboveground',
         containerClass: 'storage',
       },

@@ -33,7 +33,7 @@ function tank(id: string, site: string, name: string, demo = false): TankRecord 
     site,
     name,
     demo,
-    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1e6 },
   };
 }
 
@@ -208,8 +208,11 @@ describe('tank-form', () => {
     expect(t.site).to.equal('Bench');
     expect(t.productId).to.equal('n-butane');
     expect(t.nameplate.waterCapacity).to.be.closeTo(toSI('volume', 450, 'L'), 1e-12);
-    expect(t.nameplate.designPressure).to.be.closeTo(toSI('gaugePressure', 17.2, 'barg'), 1e-6);
-    expect(t.nameplate.reliefSetPressure).to.equal(undefined);
+    expect(t.nameplate.designPressureGauge).to.be.closeTo(
+      toSI('gaugePressure', 17.2, 'barg'),
+      1e-6,
+    );
+    expect(t.nameplate.reliefSetPressureGauge).to.equal(undefined);
   });
 
   it('tank-form blocks saving while a figure is out of range and names the range', async () => {

@@ -17,7 +17,7 @@ function tanks(n: number): TankRecord[] {
     name: `Tank ${i}`,
     site: `Yard ${String.fromCharCode(65 + (i % 26))}`,
     notes: '',
-    nameplate: { waterCapacity: 1, designPressure: 1.7e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1.7e6 },
     productId: i === 4321 ? 'n-butane' : i % 7 === 0 ? 'ammonia' : 'propane',
     demo: false,
     createdAt: '2024-01-01T00:00:00.000Z',

@@ -19,7 +19,7 @@ const DEMO_HOME = {
   name: 'Demo: small home tank',
   tank: {
     waterCapacity: toSI('volume', 500, 'usgal'),
-    designPressure: toSI('gaugePressure', 250, 'psig'),
+    designPressureGauge: toSI('gaugePressure', 250, 'psig'),
     placement: 'aboveground' as const,
     containerClass: 'storage' as const,
   },

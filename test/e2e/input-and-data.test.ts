@@ -159,7 +159,7 @@ describe('stored data', () => {
       site: 'Odd ids',
       name: `Tank ${id}`,
       notes: '',
-      nameplate: { waterCapacity: 2, designPressure: 1.8e6 },
+      nameplate: { waterCapacity: 2, designPressureGauge: 1.8e6 },
       productId: 'propane',
       demo: false,
       createdAt: stamp,

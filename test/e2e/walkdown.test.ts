@@ -81,7 +81,7 @@ function expected(t: TankRecord, r: Readings) {
     contents,
     peakTemperature: F105 + SUN,
     pressureGauge: { accuracy: 0.02 },
-    ...(r.gaugePressure !== null ? { gaugePressure: r.gaugePressure } : {}),
+    ...(r.pressureReadingGauge !== null ? { pressureReadingGauge: r.pressureReadingGauge } : {}),
   };
   const res = checkTank(input);
   const top = res.cautions.find((c) => c.code !== 'standing')?.level ?? 'ok';

@@ -5,6 +5,16 @@ import { expect } from '@open-wc/testing';
 import { BACKUP_FORMAT, BACKUP_VERSION, makeBackup, parseBackup } from '../../pwa/backup.js';
 import { makeFillRecord, startFill, type FillRecord } from '../../thermo/fill/index.js';
 import { FORMAT1 } from './fixtures/backup-format1.js';
+import { FORMAT2 } from './fixtures/backup-format2.js';
+import {
+  NAMED_CHECK,
+  NAMED_FILL,
+  NAMED_FORECAST,
+  NAMED_SETTINGS,
+  NAMED_TANK,
+  NAMED_TANK_NO_RELIEF,
+  NAMED_WALKDOWN,
+} from './fixtures/named-records.js';
 import { checksToCsv, looksLikeFormula } from '../../pwa/csv.js';
 import { lastCheckByTank } from '../../pwa/lookups.js';
 import { TEXT_LIMITS } from '../../components/limits.js';
@@ -24,7 +34,7 @@ function tank(id: string, name = `Tank ${id}`): TankRecord {
     ...blankTank(id, '2024-01-01T00:00:00.000Z'),
     site: 'S',
     name,
-    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1e6 },
   };
 }
 
@@ -38,7 +48,7 @@ function check(id: string, tankId: string): CheckRecord {
     readings: { ...emptyReadings(5), liquidTemperature: 293.15, gaugePercent: 50 },
     summary: {
       phase: 'two-phase',
-      pressure: 7e5,
+      pGauge: 7e5,
       totalMass: 200,
       liquidVolume: 0.4,
       fillingDensity: 0.2,
@@ -47,7 +57,7 @@ function check(id: string, tankId: string): CheckRecord {
       stopAtGaugePercent: 80,
       binding: 'rule',
       peakTemperature: 303.15,
-      peakPressure: 9e5,
+      peakGauge: 9e5,
       peakGaugeUpper: 9.045e5,
       peakLiquidFraction: 0.55,
       headroomToDesign: 1e5,
@@ -66,7 +76,7 @@ function check(id: string, tankId: string): CheckRecord {
 function fill(id: string, tankId: string): FillRecord {
   const start = startFill(
     {
-      tank: { waterCapacity: 1, designPressure: 1.7e6 },
+      tank: { waterCapacity: 1, designPressureGauge: 1.7e6 },
       product: 'propane',
       liquidTemperature: 290,
       contents: { gaugePercent: 20 },
@@ -100,15 +110,82 @@ describe('parseBackup', () => {
     if (r.ok) expect(r.data).to.deep.equal(data);
   });
 
-  it('parseBackup imports a format-1 backup (before fill records) whole', () => {
+  it('parseBackup imports a format-1 backup (before fill records) whole, its pressures under today’s names', () => {
     expect(FORMAT1.version).to.equal(1);
     const r = parseBackup(JSON.stringify(FORMAT1));
     expect(r.ok).to.equal(true);
     if (!r.ok) return;
-    expect(r.data.tanks).to.deep.equal(FORMAT1.tanks);
-    expect(r.data.checks).to.deep.equal(FORMAT1.checks);
+    // The fixture's figures, written out again under the names of format 3.
+    const [t] = FORMAT1.tanks;
+    const [c] = FORMAT1.checks;
+    expect(r.data.tanks).to.deep.equal([
+      { ...t, nameplate: { waterCapacity: 1.8927, designPressureGauge: 1723689 } },
+    ]);
+    const { gaugePressure: _r, ...readings } = c!.readings;
+    const { pressure: _p, peakPressure: _k, ...summary } = c!.summary;
+    expect(r.data.checks).to.deep.equal([
+      {
+        ...c,
+        readings: { ...readings, pressureReadingGauge: null },
+        summary: { ...summary, pGauge: 630000, peakGauge: 1100000 },
+      },
+    ]);
     expect(r.data.settings).to.equal(null);
     expect(r.data.fills).to.deep.equal([]);
+  });
+
+  it('parseBackup imports a format-2 backup (old pressure names) with every record under today’s names and the same figures', () => {
+    expect(FORMAT2.version).to.equal(2);
+    const r = parseBackup(JSON.stringify(FORMAT2));
+    expect(r.ok, r.ok ? '' : r.reason).to.equal(true);
+    if (!r.ok) return;
+    expect(r.data.tanks).to.deep.equal([NAMED_TANK, NAMED_TANK_NO_RELIEF]);
+    expect(r.data.checks).to.deep.equal([NAMED_CHECK]);
+    expect(r.data.settings).to.deep.equal(NAMED_SETTINGS);
+    expect(r.data.fills).to.deep.equal([NAMED_FILL]);
+    expect(r.data.sites).to.deep.equal([NAMED_FORECAST]);
+    expect(r.data.walkdowns).to.deep.equal([NAMED_WALKDOWN]);
+  });
+
+  it('a format-3 backup round-trips every pressure field under its new name', () => {
+    const data = {
+      tanks: [NAMED_TANK, NAMED_TANK_NO_RELIEF],
+      checks: [NAMED_CHECK],
+      settings: NAMED_SETTINGS,
+      fills: [NAMED_FILL],
+      sites: [NAMED_FORECAST],
+      walkdowns: [NAMED_WALKDOWN],
+    };
+    const file = makeBackup(data);
+    expect(file.version).to.equal(3);
+    const text = JSON.stringify(file);
+    for (const old of ['"designPressure"', '"gaugePressure"', '"peakPressure"', '"gaugeFullScale"'])
+      expect(text).not.to.contain(old);
+    const r = parseBackup(text);
+    expect(r.ok).to.equal(true);
+    if (r.ok) expect(r.data).to.deep.equal(data);
+  });
+
+  it('a format-3 backup under the old names is refused, naming the new field and its range', () => {
+    const file = JSON.parse(JSON.stringify(FORMAT2)) as typeof FORMAT2;
+    const r = parseBackup(JSON.stringify({ ...file, version: 3 }));
+    expect(r.ok).to.equal(false);
+    if (!r.ok) {
+      expect(r.reason).to.contain('“designPressureGauge” must be a number from 10000 to 100000000');
+      expect(r.reason).to.contain('Nothing was changed');
+    }
+    // A format-2 file whose old-named figure is out of range: the message names the field as
+    // it is now called and its range.
+    const low = JSON.parse(JSON.stringify(FORMAT2)) as typeof FORMAT2;
+    low.tanks[0]!.nameplate.designPressure = 5;
+    const r2 = parseBackup(JSON.stringify(low));
+    expect(r2.ok).to.equal(false);
+    if (!r2.ok) {
+      expect(r2.reason).to.contain('Tank 1 (“Tank N1”), nameplate');
+      expect(r2.reason).to.contain(
+        '“designPressureGauge” must be a number from 10000 to 100000000',
+      );
+    }
   });
 
   it('parseBackup refuses a bad fill record, naming the fill and its field, and a fill of no tank', () => {
@@ -198,12 +275,16 @@ describe('parseBackup', () => {
     );
     expect(r.ok).to.equal(false);
     if (!r.ok) expect(r.reason).to.contain('newer version');
+    // The first format after this app's (3).
+    const next = parseBackup(JSON.stringify({ ...FORMAT2, version: 4 }));
+    expect(next.ok).to.equal(false);
+    if (!next.ok) expect(next.reason).to.contain('newer version of the app (format 4)');
   });
 
   it('parseBackup names the tank and the field that is wrong', () => {
     const bad = {
       ...tank('a', 'Broken one'),
-      nameplate: { waterCapacity: 'lots', designPressure: 1e6 },
+      nameplate: { waterCapacity: 'lots', designPressureGauge: 1e6 },
     };
     const r = parseBackup(
       JSON.stringify(

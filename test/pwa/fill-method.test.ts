@@ -34,7 +34,7 @@ function oldBackup(nameplate: Record<string, unknown>): string {
 describe('fill method in backups', () => {
   it('parseBackup imports an older backup with fixedDipTube and no fillMethod, and the check reads it as the fixed gauge', () => {
     const r = parseBackup(
-      oldBackup({ waterCapacity: 3.785, designPressure: 1.72e6, fixedDipTube: true }),
+      oldBackup({ waterCapacity: 3.785, designPressureGauge: 1.72e6, fixedDipTube: true }),
     );
     expect(r.ok, r.ok ? '' : r.reason).to.equal(true);
     if (!r.ok) return;
@@ -53,18 +53,18 @@ describe('fill method in backups', () => {
   });
 
   it('parseBackup imports an older backup with neither field (a fill by gauge)', () => {
-    const r = parseBackup(oldBackup({ waterCapacity: 1, designPressure: 1e6 }));
+    const r = parseBackup(oldBackup({ waterCapacity: 1, designPressureGauge: 1e6 }));
     expect(r.ok, r.ok ? '' : r.reason).to.equal(true);
   });
 
   it('parseBackup keeps a fill method and refuses an unknown one, naming the tank and the field', () => {
     const ok = parseBackup(
-      oldBackup({ waterCapacity: 1, designPressure: 1e6, fillMethod: 'weight' }),
+      oldBackup({ waterCapacity: 1, designPressureGauge: 1e6, fillMethod: 'weight' }),
     );
     expect(ok.ok).to.equal(true);
     if (ok.ok) expect(ok.data.tanks[0]!.nameplate.fillMethod).to.equal('weight');
     const bad = parseBackup(
-      oldBackup({ waterCapacity: 1, designPressure: 1e6, fillMethod: 'bucket' }),
+      oldBackup({ waterCapacity: 1, designPressureGauge: 1e6, fillMethod: 'bucket' }),
     );
     expect(bad.ok).to.equal(false);
     if (!bad.ok) {

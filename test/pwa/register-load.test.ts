@@ -21,7 +21,7 @@ function tank(id: string, site: string): TankRecord {
     site,
     name: `Tank ${id}`,
     notes: '',
-    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1e6 },
     productId: 'propane',
     demo: false,
     createdAt: '2024-01-01T00:00:00.000Z',

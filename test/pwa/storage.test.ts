@@ -10,6 +10,26 @@ import { DEFAULT_SETTINGS, emptyReadings } from '../../components/types.js';
 import type { SiteForecast, WalkdownRecord } from '../../components/walkdown-types.js';
 import type { FillDraft } from '../../components/fill-types.js';
 import { makeFillRecord, startFill, type FillRecord } from '../../thermo/fill/index.js';
+import {
+  oldCheck,
+  oldDraft,
+  oldFill,
+  oldFillDraft,
+  oldSettings,
+  oldTank,
+  oldWalkdown,
+} from './fixtures/old-names.js';
+import {
+  NAMED_CHECK,
+  NAMED_DRAFT,
+  NAMED_FILL,
+  NAMED_FILL_DRAFT,
+  NAMED_FORECAST,
+  NAMED_SETTINGS,
+  NAMED_TANK,
+  NAMED_TANK_NO_RELIEF,
+  NAMED_WALKDOWN,
+} from './fixtures/named-records.js';
 
 const names: string[] = [];
 function dbName(): string {
@@ -29,7 +49,7 @@ function tank(id: string, site = 'Site A', demo = false): TankRecord {
     site,
     name: `Tank ${id}`,
     notes: '',
-    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1e6 },
     productId: 'propane',
     demo,
     createdAt: '2024-01-01T00:00:00.000Z',
@@ -50,13 +70,13 @@ function check(id: string, tankId: string, at: string, demo = false): CheckRecor
       gaugePercent: 50,
       levelHeight: null,
       netMass: null,
-      gaugePressure: null,
+      pressureReadingGauge: null,
       peakAirTemperature: 300,
       sunAllowance: 5,
     },
     summary: {
       phase: 'two-phase',
-      pressure: 1,
+      pGauge: 1,
       totalMass: 1,
       liquidVolume: 1,
       fillingDensity: 0.1,
@@ -65,7 +85,7 @@ function check(id: string, tankId: string, at: string, demo = false): CheckRecor
       stopAtGaugePercent: 80,
       binding: 'r',
       peakTemperature: 305,
-      peakPressure: 2,
+      peakGauge: 2,
       peakLiquidFraction: 0.5,
       headroomToDesign: 1,
       headroomToRelief: 1,
@@ -76,30 +96,56 @@ function check(id: string, tankId: string, at: string, demo = false): CheckRecor
   };
 }
 
-/** Fixture data as each schema version could hold it, keyed by the version. */
-const SEED: Record<number, (db: Awaited<ReturnType<typeof openAtVersion>>) => Promise<void>> = {
+const DRAFT = {
+  tankId: 't1',
+  readings: check('x', 't1', '').readings,
+  updatedAt: '2024-01-03T00:00:00.000Z',
+};
+const SETTINGS = { ...DEFAULT_SETTINGS, sunAllowance: 3 };
+
+type OldDb = Awaited<ReturnType<typeof openAtVersion>>;
+/** Puts a record as an older app stored it (its names are not today's type). */
+const putOld = (
+  db: OldDb,
+  store: 'tanks' | 'checks' | 'drafts' | 'walkdowns' | 'fills' | 'fillDrafts',
+  r: unknown,
+) => db.put(store, r as never);
+
+/**
+ * Fixture data as each schema version could hold it, keyed by the version: before v5 every
+ * pressure under its old name (fixtures/old-names.ts), so each upgrade also goes through v5.
+ */
+const SEED: Record<number, (db: OldDb) => Promise<void>> = {
   1: async (db) => {
-    await db.put('tanks', tank('t1'));
-    await db.put('checks', check('c1', 't1', '2024-01-02T00:00:00.000Z'));
-    await db.put('drafts', {
-      tankId: 't1',
-      readings: check('x', 't1', '').readings,
-      updatedAt: '2024-01-03T00:00:00.000Z',
-    });
-    await db.put('settings', { ...DEFAULT_SETTINGS, sunAllowance: 3 }, 'settings');
+    await putOld(db, 'tanks', oldTank(tank('t1')));
+    await putOld(db, 'checks', oldCheck(check('c1', 't1', '2024-01-02T00:00:00.000Z')));
+    await putOld(db, 'drafts', oldDraft(DRAFT));
+    await db.put('settings', oldSettings(SETTINGS), 'settings');
   },
   2: async (db) => {
     await SEED[1]!(db);
     await db.put('sites', FORECAST);
-    await db.put('walkdowns', walk('w1'));
+    await putOld(db, 'walkdowns', oldWalkdown(walk('w1')));
   },
   3: async (db) => {
     await SEED[2]!(db);
-    await db.put('fills', FILL);
-    await db.put('fillDrafts', FILL_DRAFT);
+    await putOld(db, 'fills', oldFill(FILL));
+    await putOld(db, 'fillDrafts', oldFillDraft(FILL_DRAFT));
   },
   4: async (db) => {
     await SEED[3]!(db);
+    await db.put('latestChecks', briefOf(check('c1', 't1', '2024-01-02T00:00:00.000Z')));
+  },
+  // v5: the same records under today's names.
+  5: async (db) => {
+    await db.put('tanks', tank('t1'));
+    await db.put('checks', check('c1', 't1', '2024-01-02T00:00:00.000Z'));
+    await db.put('drafts', DRAFT);
+    await db.put('settings', SETTINGS, 'settings');
+    await db.put('sites', FORECAST);
+    await db.put('walkdowns', walk('w1'));
+    await db.put('fills', FILL);
+    await db.put('fillDrafts', FILL_DRAFT);
     await db.put('latestChecks', briefOf(check('c1', 't1', '2024-01-02T00:00:00.000Z')));
   },
 };
@@ -108,7 +154,7 @@ const SEED: Record<number, (db: Awaited<ReturnType<typeof openAtVersion>>) => Pr
 // record, so the stored shape is the real one.
 const FILL_START = startFill(
   {
-    tank: { waterCapacity: 1, designPressure: 1.7e6 },
+    tank: { waterCapacity: 1, designPressureGauge: 1.7e6 },
     product: 'propane',
     liquidTemperature: 290,
     contents: { gaugePercent: 20 },
@@ -132,7 +178,7 @@ const FILL_DRAFT: FillDraft = {
   meterTemperature: null,
   afterGauge: null,
   afterTemperature: null,
-  afterPressure: null,
+  afterPressureGauge: null,
   interrupted: false,
   note: '',
   updatedAt: '2024-01-07T00:00:00.000Z',
@@ -195,10 +241,13 @@ describe('storage', () => {
         expect(tanks).to.deep.equal([]);
         expect(await store.getSettings()).to.equal(null);
       } else {
-        expect(tanks.map((t) => t.id)).to.deep.equal(['t1']);
-        expect((await store.listChecks('t1')).map((c) => c.id)).to.deep.equal(['c1']);
-        expect((await store.getDraft('t1'))?.updatedAt).to.equal('2024-01-03T00:00:00.000Z');
-        expect((await store.getSettings())?.sunAllowance).to.equal(3);
+        // Under today's names with the same values (stored under the old ones before v5).
+        expect(tanks).to.deep.equal([tank('t1')]);
+        expect(await store.listChecks('t1')).to.deep.equal([
+          check('c1', 't1', '2024-01-02T00:00:00.000Z'),
+        ]);
+        expect(await store.getDraft('t1')).to.deep.equal(DRAFT);
+        expect(await store.getSettings()).to.deep.equal(SETTINGS);
       }
       if (v >= 2) {
         expect(await store.getSite('Site A')).to.deep.equal(FORECAST);
@@ -234,23 +283,17 @@ describe('storage', () => {
       check('c4', 't2', '2024-01-01T00:00:00.000Z'),
       check('c5', 't2', '2024-02-01T00:00:00.000Z'),
     ];
-    for (const t of ['t2', 't3']) await old.put('tanks', tank(t));
-    for (const c of extra) await old.put('checks', c);
-    const before = {
-      tanks: await old.getAll('tanks'),
-      checks: await old.getAll('checks'),
-      drafts: await old.getAll('drafts'),
-      fills: await old.getAll('fills'),
-      walkdowns: await old.getAll('walkdowns'),
-    };
+    for (const t of ['t2', 't3']) await putOld(old, 'tanks', oldTank(tank(t)));
+    for (const c of extra) await putOld(old, 'checks', oldCheck(c));
     old.close();
     const store = await Store.open(name);
     const all = await store.exportAll();
-    expect(all.tanks).to.deep.equal(before.tanks);
-    expect(all.checks).to.deep.equal(before.checks);
-    expect(all.fills).to.deep.equal(before.fills);
-    expect(all.walkdowns).to.deep.equal(before.walkdowns);
-    expect(await store.getDraft('t1')).to.deep.equal(before.drafts[0]);
+    // Every record is there, under today's names (v5) with the values it was stored with.
+    expect(all.tanks).to.deep.equal(['t1', 't2', 't3'].map((t) => tank(t)));
+    expect(all.checks).to.deep.equal([check('c1', 't1', '2024-01-02T00:00:00.000Z'), ...extra]);
+    expect(all.fills).to.deep.equal([FILL]);
+    expect(all.walkdowns).to.deep.equal([walk('w1')]);
+    expect(await store.getDraft('t1')).to.deep.equal(DRAFT);
     const latest = (await store.latestChecks()).map((c) => `${c.tankId}:${c.id}`).sort();
     expect(latest).to.deep.equal(['t1:c3', 't2:c5']);
     // Kept by later writes: an older check does not replace the newest; deleting the newest
@@ -259,6 +302,56 @@ describe('storage', () => {
     await store.deleteCheck('c5');
     await store.deleteTank('t1');
     expect((await store.latestChecks()).map((c) => `${c.tankId}:${c.id}`)).to.deep.equal(['t2:c6']);
+    store.close();
+  });
+
+  it('a v4 database with every pressure under its old name upgrades to v5: same records, same values, today’s names', async () => {
+    const name = dbName();
+    const old = await openAtVersion(name, 4);
+    await putOld(old, 'tanks', oldTank(NAMED_TANK));
+    await putOld(old, 'tanks', oldTank(NAMED_TANK_NO_RELIEF));
+    await putOld(old, 'checks', oldCheck(NAMED_CHECK));
+    await old.put('latestChecks', briefOf(NAMED_CHECK));
+    await putOld(old, 'drafts', oldDraft(NAMED_DRAFT));
+    await old.put('settings', oldSettings(NAMED_SETTINGS), 'settings');
+    await old.put('sites', NAMED_FORECAST);
+    await putOld(old, 'walkdowns', oldWalkdown(NAMED_WALKDOWN));
+    await putOld(old, 'fills', oldFill(NAMED_FILL));
+    await putOld(old, 'fills', oldFill(FILL)); // no pressure after: its comparison is null
+    await putOld(old, 'fillDrafts', oldFillDraft(NAMED_FILL_DRAFT));
+    // A record stored already under today's names (none should be, but it must stay valid).
+    await old.put('tanks', tank('t9'));
+    old.close();
+
+    const store = await Store.open(name);
+    const all = await store.exportAll();
+    expect(all.tanks).to.deep.equal([NAMED_TANK, NAMED_TANK_NO_RELIEF, tank('t9')]);
+    expect(all.checks).to.deep.equal([NAMED_CHECK]);
+    expect(all.settings).to.deep.equal(NAMED_SETTINGS);
+    expect(all.sites).to.deep.equal([NAMED_FORECAST]);
+    expect(all.walkdowns).to.deep.equal([NAMED_WALKDOWN]);
+    const fills = all.fills ?? [];
+    expect(fills).to.have.length(2);
+    expect(fills.find((f) => f.id === NAMED_FILL.id)).to.deep.equal(NAMED_FILL);
+    expect(fills.find((f) => f.id === FILL.id)).to.deep.equal(FILL);
+    expect(await store.getDraft('n-t1')).to.deep.equal(NAMED_DRAFT);
+    expect(await store.getFillDraft('n-t1')).to.deep.equal(NAMED_FILL_DRAFT);
+    expect((await store.latestChecks()).map((c) => c.id)).to.deep.equal([NAMED_CHECK.id]);
+    // Spot checks of the values under the new names (against the fixtures' literal figures).
+    expect(all.tanks[0]!.nameplate.designPressureGauge).to.equal(1.7e6);
+    expect(all.tanks[0]!.nameplate.reliefSetPressureGauge).to.equal(1.6e6);
+    expect('reliefSetPressureGauge' in all.tanks[1]!.nameplate).to.equal(false);
+    expect(all.checks[0]!.readings.pressureReadingGauge).to.equal(7.1e5);
+    expect(all.checks[0]!.summary.pGauge).to.equal(7.05e5);
+    expect(all.checks[0]!.summary.peakGauge).to.equal(1.02e6);
+    expect(all.settings!.barometer.pressureAbs).to.equal(95_500);
+    expect(all.settings!.gaugeFullScaleGauge).to.equal(2.1e6);
+    const fill = fills.find((f) => f.id === NAMED_FILL.id)!;
+    expect(fill.start.check.pressureReadingGauge).to.equal(6.5e5);
+    expect(fill.start.check.barometricPressureAbs).to.equal(96_000);
+    expect(fill.start.check.pressureGauge?.fullScaleGauge).to.equal(2.1e6);
+    expect(fill.after.pressureReadingGauge).to.equal(6.6e5);
+    expect(fill.result.pressure?.readingGauge).to.equal(6.6e5);
     store.close();
   });
 

@@ -3,6 +3,7 @@
 // every record, a file of the previous format (1) still imports with all its data, and a bad
 // walkdown is refused naming where. Kind: identity / behaviour; records are placeholders.
 import { expect } from '@open-wc/testing';
+import { oldSettings, oldTank } from './fixtures/old-names.js';
 import { deleteDB } from 'idb';
 import { BACKUP_VERSION, makeBackup, parseBackup } from '../../pwa/backup.js';
 import { Store } from '../../pwa/storage.js';
@@ -21,7 +22,7 @@ function tank(id: string): TankRecord {
     site: 'S',
     name: `Tank ${id}`,
     notes: '',
-    nameplate: { waterCapacity: 1, designPressure: 1e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1e6 },
     productId: 'propane',
     demo: false,
     createdAt: '2024-01-01T00:00:00.000Z',
@@ -71,15 +72,16 @@ function versionOneFile(): string {
     format: 'tankside-backup',
     version: 1,
     exportedAt: '2024-05-01T00:00:00.000Z',
-    tanks: [tank('a')],
+    // As format 1 wrote them: the pressures under their old names.
+    tanks: [oldTank(tank('a'))],
     checks: [],
-    settings: { ...DEFAULT_SETTINGS, sunAllowance: 3 },
+    settings: oldSettings({ ...DEFAULT_SETTINGS, sunAllowance: 3 }),
   });
 }
 
 describe('walkdowns in the backup', () => {
   it('a backup with forecasts and walkdowns reads back unchanged', () => {
-    expect(BACKUP_VERSION).to.equal(2);
+    expect(BACKUP_VERSION).to.equal(3);
     const data = {
       tanks: [tank('a')],
       checks: [],
@@ -105,7 +107,7 @@ describe('walkdowns in the backup', () => {
     expect(back.tanks).to.deep.equal([tank('a')]);
     expect(back.settings?.sunAllowance).to.equal(3);
     expect(back.walkdowns).to.deep.equal([]);
-    // Exported again, it is a format-2 file that still holds everything.
+    // Exported again, it is a format-3 file that still holds everything.
     const again = parseBackup(JSON.stringify(makeBackup(back)));
     expect(again.ok && again.data.tanks.length).to.equal(1);
     store.close();

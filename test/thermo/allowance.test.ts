@@ -19,8 +19,8 @@ function input(gaugePercent: number, peakF: number): TankCheckInput {
   return {
     tank: {
       waterCapacity: toSI('volume', 500, 'usgal'),
-      designPressure: 250 * PSI,
-      reliefSetPressure: 250 * PSI,
+      designPressureGauge: 250 * PSI,
+      reliefSetPressureGauge: 250 * PSI,
     },
     product: 'propane',
     liquidTemperature: F(60),

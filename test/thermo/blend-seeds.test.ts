@@ -34,7 +34,11 @@ const K = 273.15;
 const PSI = 6894.757293168;
 function input(product: TankCheckInput['product'], tC: number, gauge: number, peakC: number) {
   return {
-    tank: { waterCapacity: 3.785, designPressure: 250 * PSI, reliefSetPressure: 220 * PSI },
+    tank: {
+      waterCapacity: 3.785,
+      designPressureGauge: 250 * PSI,
+      reliefSetPressureGauge: 220 * PSI,
+    },
     product,
     liquidTemperature: tC + K,
     contents: { gaugePercent: gauge },

@@ -23,7 +23,7 @@ const find = (r: TankCheckResult, code: string) => r.cautions.find((c) => c.code
 
 function propane(over: Partial<TankCheckInput> = {}, tank: Partial<TankCheckInput['tank']> = {}) {
   return checkTank({
-    tank: { waterCapacity: V, designPressure: psig(250), reliefSetPressure: psig(250), ...tank },
+    tank: { waterCapacity: V, designPressureGauge: psig(250), reliefSetPressureGauge: psig(250), ...tank },
     product: 'propane',
     liquidTemperature: F(60),
     contents: { gaugePercent: 50 },
@@ -42,7 +42,7 @@ function expectRanked(r: TankCheckResult) {
 }
 
 describe('near the relief setting at the peak (FACTS.md case 8, relief 220 psig)', () => {
-  const relief = { reliefSetPressure: psig(220) };
+  const relief = { reliefSetPressureGauge: psig(220) };
   it('at 115 °F (213.4 psig, headroom 6.6 psi less the allowance) the headroom is under 5 %', () => {
     const r = propane({ liquidTemperature: F(80), peakTemperature: F(115) }, relief);
     const c = find(r, 'relief-near-at-peak')!;
@@ -68,7 +68,7 @@ describe('near the relief setting at the peak (FACTS.md case 8, relief 220 psig)
 describe('liquid-full near the peak (FACTS.md case 11: 42 % propane is full at 146.6 °F)', () => {
   const contents = { netMass: 0.42 * V * WATER_FD_KG_M3 };
   it('a 140 °F peak is less than 5 K (9 °F) below it: a warning, and the liquid fills > 95 %', () => {
-    const r = propane({ contents, peakTemperature: F(140) }, { designPressure: psig(400) });
+    const r = propane({ contents, peakTemperature: F(140) }, { designPressureGauge: psig(400) });
     const w = find(r, 'liquid-full-near-peak')!;
     expect(w.level).toBe('warning');
     expect(w.quantity).toBe('temperature');
@@ -84,11 +84,11 @@ describe('liquid-full near the peak (FACTS.md case 11: 42 % propane is full at 1
     expectRanked(r);
   });
   it('a 135 °F peak is more than 5 K below it: no warning', () => {
-    const r = propane({ contents, peakTemperature: F(135) }, { designPressure: psig(400) });
+    const r = propane({ contents, peakTemperature: F(135) }, { designPressureGauge: psig(400) });
     expect(codes(r)).not.toContain('liquid-full-near-peak');
   });
   it('a 150 °F peak is past it: a danger, from about the liquid-full temperature', () => {
-    const r = propane({ contents, peakTemperature: F(150) }, { designPressure: psig(400) });
+    const r = propane({ contents, peakTemperature: F(150) }, { designPressureGauge: psig(400) });
     const d = find(r, 'liquid-full-at-peak')!;
     expect(d.level).toBe('danger');
     expect(d.message).toContain('At the forecast peak 150.0 °F (65.6 °C)');
@@ -96,7 +96,7 @@ describe('liquid-full near the peak (FACTS.md case 11: 42 % propane is full at 1
     expect(codes(r)).not.toContain('liquid-full-near-peak');
   });
   it('at 100 °F the liquid is far from filling the tank: no small-vapour-space caution', () => {
-    const r = propane({ contents, peakTemperature: F(100) }, { designPressure: psig(400) });
+    const r = propane({ contents, peakTemperature: F(100) }, { designPressureGauge: psig(400) });
     expect(codes(r)).not.toContain('small-vapour-space-at-peak');
     expect(codes(r)).not.toContain('liquid-full-near-peak');
   });
@@ -105,8 +105,8 @@ describe('liquid-full near the peak (FACTS.md case 11: 42 % propane is full at 1
 describe('CO2 past its critical temperature, 87.8 °F (31.0 °C)', () => {
   const cyl = {
     waterCapacity: 0.0227,
-    designPressure: psig(1800),
-    reliefSetPressure: psig(1800),
+    designPressureGauge: psig(1800),
+    reliefSetPressureGauge: psig(1800),
     containerClass: 'cylinder' as const,
   };
   it('contents denser than the critical density at 310 K: full of dense fluid now (danger)', () => {
@@ -149,7 +149,7 @@ describe('CO2 past its critical temperature, 87.8 °F (31.0 °C)', () => {
 describe('notices on the nameplate and the readings', () => {
   it('no relief setting: taken as the design pressure, said once', () => {
     const r = checkTank({
-      tank: { waterCapacity: V, designPressure: psig(250) },
+      tank: { waterCapacity: V, designPressureGauge: psig(250) },
       product: 'propane',
       liquidTemperature: F(60),
       contents: { gaugePercent: 50 },
@@ -164,7 +164,7 @@ describe('notices on the nameplate and the readings', () => {
     expect(codes(propane())).not.toContain('relief-assumed');
   });
   it('a relief setting above the design pressure is pointed out; at it, not', () => {
-    const r = propane({}, { reliefSetPressure: psig(260) });
+    const r = propane({}, { reliefSetPressureGauge: psig(260) });
     expect(find(r, 'relief-above-design')!.message).toContain(
       'The relief set pressure 260.0 psig (1793 kPa g) is above the design pressure 250.0 psig (1724 kPa g)',
     );
@@ -180,7 +180,7 @@ describe('notices on the nameplate and the readings', () => {
   });
   it('a blend’s two-phase pressure is its bubble pressure, said in a notice; not for a pure fluid', () => {
     const r = checkTank({
-      tank: { waterCapacity: 0.0227, designPressure: psig(400), containerClass: 'cylinder' },
+      tank: { waterCapacity: 0.0227, designPressureGauge: psig(400), containerClass: 'cylinder' },
       product: 'r410a',
       liquidTemperature: F(80),
       contents: { gaugePercent: 50 },
@@ -196,7 +196,7 @@ describe('notices on the nameplate and the readings', () => {
     const r = checkTank({
       tank: {
         waterCapacity: 0.5,
-        designPressure: psig(250),
+        designPressureGauge: psig(250),
         shape: { kind: 'sphere', diameter: 1 },
       },
       product: 'propane',
@@ -213,7 +213,7 @@ describe('notices on the nameplate and the readings', () => {
     const ok = checkTank({
       tank: {
         waterCapacity: 0.52,
-        designPressure: psig(250),
+        designPressureGauge: psig(250),
         shape: { kind: 'sphere', diameter: 1 },
       },
       product: 'propane',
@@ -229,17 +229,17 @@ describe('notices on the nameplate and the readings', () => {
 describe('a vacuum: read on the gauge, or expected at the liquid temperature', () => {
   it('a gauge below zero on propane at 60 °F (92 psig expected) is a vacuum read, not expected', () => {
     // propane at 60 °F: 92.4 psig (test/reference/trade/saturation_properties.csv)
-    const r = propane({ gaugePressure: -1000 });
+    const r = propane({ pressureReadingGauge: -1000 });
     const w = find(r, 'vacuum')!;
     expect(w.level).toBe('warning');
     expect(w.params['source']).toBe('reading');
     expect(w.value).toBe(-1000);
     expect(w.message).toContain('The tank is under vacuum (-0.1 psig (-1 kPa g), gauge reading)');
-    expect(codes(propane({ gaugePressure: 0 }))).not.toContain('vacuum');
+    expect(codes(propane({ pressureReadingGauge: 0 }))).not.toContain('vacuum');
   });
   it('n-butane at 0 °F is expected below atmospheric (−7.46 psig, FACTS.md case 14)', () => {
     const r = checkTank({
-      tank: { waterCapacity: V, designPressure: psig(250) },
+      tank: { waterCapacity: V, designPressureGauge: psig(250) },
       product: 'n-butane',
       liquidTemperature: F(0),
       contents: { gaugePercent: 50 },

@@ -20,11 +20,11 @@ const BARO = 101_325;
 
 function input(reading: number, over: Partial<TankCheckInput> = {}): TankCheckInput {
   return {
-    tank: { waterCapacity: gal(500), designPressure: psig(250) },
+    tank: { waterCapacity: gal(500), designPressureGauge: psig(250) },
     product: 'propane',
     liquidTemperature: T,
     contents: { gaugePercent: 50 },
-    gaugePressure: reading,
+    pressureReadingGauge: reading,
     peakTemperature: 300,
     ...over,
   };
@@ -90,7 +90,7 @@ describe('the expected pressure and the band', () => {
   });
 
   it('the band widens with the gauge’s accuracy and full scale', () => {
-    const d = diag(p - BARO, { pressureGauge: { fullScale: psig(600), accuracy: 0.01 } });
+    const d = diag(p - BARO, { pressureGauge: { fullScaleGauge: psig(600), accuracy: 0.01 } });
     expectWithin(d.tolerance, 0.01 * psig(600) + 0.005 * p, 1e-6, {
       input: '600 psig gauge, ±1 %',
       source: 'TankCheckInput.pressureGauge doc',
@@ -202,11 +202,11 @@ describe('a zeotropic blend: a composition shift is named after the first cause'
   // test/reference/blends/r407c.csv, Lemmon & Jacobsen 2004): its composition can shift.
   const run = (reading: number, product = 'r407c') =>
     checkTank({
-      tank: { waterCapacity: 0.0227, designPressure: psig(400), containerClass: 'cylinder' },
+      tank: { waterCapacity: 0.0227, designPressureGauge: psig(400), containerClass: 'cylinder' },
       product,
       liquidTemperature: 298.15,
       contents: { netMass: 10 },
-      gaugePressure: reading,
+      pressureReadingGauge: reading,
       pressureGauge: { accuracy: 0.005 },
       peakTemperature: 305,
     }).diagnosis!;

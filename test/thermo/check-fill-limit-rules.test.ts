@@ -27,7 +27,7 @@ function co2(tank: Partial<TankCheckInput['tank']>, over: Partial<TankCheckInput
   return checkTank({
     tank: {
       waterCapacity: 0.0227,
-      designPressure: psig(1800),
+      designPressureGauge: psig(1800),
       containerClass: 'cylinder',
       ...tank,
     },
@@ -41,11 +41,11 @@ function co2(tank: Partial<TankCheckInput['tank']>, over: Partial<TankCheckInput
 
 describe('CO2: a DOT-4L cylinder is an insulated cylinder (49 CFR 173.304a(e)(2))', () => {
   it('insulated, relief 300 psig: the DOT-4L rule', () => {
-    const r = co2({ insulated: true, reliefSetPressure: psig(300) });
+    const r = co2({ insulated: true, reliefSetPressureGauge: psig(300) });
     expect(r.fillLimit.binding).toBe('dot-4l');
   });
   it('not insulated: the ordinary 68 % cylinder rule of 173.304a(a)(2)', () => {
-    const r = co2({ reliefSetPressure: psig(300) });
+    const r = co2({ reliefSetPressureGauge: psig(300) });
     expect(r.fillLimit.binding).toBe('co2-cylinder');
     expectWithin(r.fillLimit.maxMass, 0.68 * 0.0227 * WATER_FD_KG_M3, 0.01, {
       input: 'CO2 cylinder, 0.0227 m³',
@@ -54,7 +54,7 @@ describe('CO2: a DOT-4L cylinder is an insulated cylinder (49 CFR 173.304a(e)(2)
     });
   });
   it('insulated but not a cylinder: no DOT-4L rule, and no table rule at all', () => {
-    const r = co2({ insulated: true, reliefSetPressure: psig(300), containerClass: 'storage' });
+    const r = co2({ insulated: true, reliefSetPressureGauge: psig(300), containerClass: 'storage' });
     expect(r.fillLimit.limits.map((l) => l.id)).not.toContain('dot-4l');
     expect(r.fillLimit.binding).toBe('not-liquid-full-at-peak');
     expect(codes(r)).toContain('no-filling-rule');
@@ -62,7 +62,7 @@ describe('CO2: a DOT-4L cylinder is an insulated cylinder (49 CFR 173.304a(e)(2)
     expect(r.fillLimit.bindingNote).toBeNull();
     // a looser site rule does not make it "ruled" either
     const s = co2(
-      { insulated: true, reliefSetPressure: psig(300), containerClass: 'storage' },
+      { insulated: true, reliefSetPressureGauge: psig(300), containerClass: 'storage' },
       { siteRule: { maxFillingDensity: 1.2 } },
     );
     expect(s.fillLimit.binding).toBe('not-liquid-full-at-peak');
@@ -96,7 +96,7 @@ describe('LP-gas DOT cargo tank with a fixed gauge (FACTS.md case 5; 49 CFR 173.
     const r = checkTank({
       tank: {
         waterCapacity: gal(3000),
-        designPressure: psig(250),
+        designPressureGauge: psig(250),
         containerClass: 'cargo',
         fillMethod: 'fixed-gauge',
       },
@@ -124,7 +124,7 @@ describe('LP-gas DOT cargo tank with a fixed gauge (FACTS.md case 5; 49 CFR 173.
 describe('the lowest printed volume figure and the fixed gauge above it (29 CFR 1910.111)', () => {
   it('ammonia at 20 °F by a fixed gauge set at 85 %: 82 % by volume is the most, stop before the gauge', () => {
     const r = checkTank({
-      tank: { waterCapacity: gal(1000), designPressure: psig(265), fillMethod: 'fixed-gauge' },
+      tank: { waterCapacity: gal(1000), designPressureGauge: psig(265), fillMethod: 'fixed-gauge' },
       product: 'ammonia',
       liquidTemperature: F(20),
       contents: { gaugePercent: 30 },
@@ -144,7 +144,7 @@ describe('a refrigerant recovery cylinder (common practice: 80 % liquid at 77 °
     const r = checkTank({
       tank: {
         waterCapacity: V,
-        designPressure: psig(400),
+        designPressureGauge: psig(400),
         containerClass: 'cylinder',
         recovery: {},
       },
@@ -177,7 +177,7 @@ describe('the not-liquid-full limit never rises as the peak gets hotter (DECISIO
     const product = LPG_PRESETS[0]!.product;
     const maxAt = (Tpeak: number) =>
       checkTank({
-        tank: { waterCapacity: 1, designPressure: psig(900) },
+        tank: { waterCapacity: 1, designPressureGauge: psig(900) },
         product,
         liquidTemperature: 288.15,
         contents: { gaugePercent: 5 },

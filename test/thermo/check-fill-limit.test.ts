@@ -26,7 +26,7 @@ const CORE = 'identity with the core’s saturation() at the same state';
 
 function check(over: Partial<TankCheckInput> = {}, tank: Partial<TankCheckInput['tank']> = {}) {
   return checkTank({
-    tank: { waterCapacity: V, designPressure: psig(250), ...tank },
+    tank: { waterCapacity: V, designPressureGauge: psig(250), ...tank },
     product: 'propane',
     liquidTemperature: 288.15,
     contents: { gaugePercent: 40 },
@@ -272,7 +272,7 @@ describe('ammonia at 333.15 K: the 56 % weight limit lies past liquid-full', () 
     const T = 333.15;
     const r = check(
       { product: 'ammonia', liquidTemperature: T, peakTemperature: T },
-      { designPressure: psig(600) },
+      { designPressureGauge: psig(600) },
     );
     expect(r.fillLimit.binding).toBe('nh3-storage-aboveground-volume');
     expect(entry(r, 'nh3-storage-aboveground').gaugePercent!).toBeGreaterThan(100);
@@ -327,7 +327,7 @@ describe('a reference temperature in the last half kelvin below the critical poi
   const Tc = 369.890009;
   const run = (Tpeak: number) =>
     checkTank({
-      tank: { waterCapacity: 1, designPressure: psig(900) },
+      tank: { waterCapacity: 1, designPressureGauge: psig(900) },
       product: 'propane',
       liquidTemperature: 288.15,
       contents: { gaugePercent: 5 },

@@ -46,7 +46,7 @@ describe('fullKind and the pressure allowance (README "Limits of validity")', ()
 describe('the site’s own limits', () => {
   const V = toSI('volume', 1000, 'usgal');
   const base = (over: Partial<TankCheckInput>): TankCheckInput => ({
-    tank: { waterCapacity: V, designPressure: toSI('gaugePressure', 250, 'psig') },
+    tank: { waterCapacity: V, designPressureGauge: toSI('gaugePressure', 250, 'psig') },
     product: 'propane',
     liquidTemperature: 288.15,
     contents: { gaugePercent: 40 },
@@ -127,7 +127,7 @@ describe('the site’s own limits', () => {
     const r = checkTank({
       tank: {
         waterCapacity: V2,
-        designPressure: toSI('gaugePressure', 1800, 'psig'),
+        designPressureGauge: toSI('gaugePressure', 1800, 'psig'),
         containerClass: 'cylinder',
       },
       product: 'carbon-dioxide',

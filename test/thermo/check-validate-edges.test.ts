@@ -16,7 +16,7 @@ type Patch = (x: unknown) => Partial<TankCheckInput>;
 
 function base(over: Partial<TankCheckInput> = {}): TankCheckInput {
   return {
-    tank: { waterCapacity: 3.785, designPressure: 1.72e6 },
+    tank: { waterCapacity: 3.785, designPressureGauge: 1.72e6 },
     product: 'propane',
     liquidTemperature: 290,
     contents: { gaugePercent: 50 },
@@ -25,7 +25,7 @@ function base(over: Partial<TankCheckInput> = {}): TankCheckInput {
   };
 }
 const tank = (t: Record<string, unknown>): Partial<TankCheckInput> => ({
-  tank: { waterCapacity: 3.785, designPressure: 1.72e6, ...t } as TankCheckInput['tank'],
+  tank: { waterCapacity: 3.785, designPressureGauge: 1.72e6, ...t } as TankCheckInput['tank'],
 });
 
 function refusal(input: unknown): InputError {
@@ -42,23 +42,23 @@ function refusal(input: unknown): InputError {
 const RANGES: [string, Patch, number, number, string, string | undefined][] = [
   [
     'tank.waterCapacity',
-    (x) => ({ tank: { waterCapacity: x as number, designPressure: 1.72e6 } }),
+    (x) => ({ tank: { waterCapacity: x as number, designPressureGauge: 1.72e6 } }),
     1e-4,
     1e5,
     'from 0.0001 to 100 000 m³',
     'volume',
   ],
   [
-    'tank.designPressure',
-    (x) => ({ tank: { waterCapacity: 3.785, designPressure: x as number } }),
+    'tank.designPressureGauge',
+    (x) => ({ tank: { waterCapacity: 3.785, designPressureGauge: x as number } }),
     1e4,
     1e8,
     'from 10 000 to 100 000 000 Pa gauge',
     'gaugePressure',
   ],
   [
-    'tank.reliefSetPressure',
-    (x) => tank({ reliefSetPressure: x }),
+    'tank.reliefSetPressureGauge',
+    (x) => tank({ reliefSetPressureGauge: x }),
     1e4,
     1e8,
     'from 10 000 to 100 000 000 Pa gauge',
@@ -89,8 +89,8 @@ const RANGES: [string, Patch, number, number, string, string | undefined][] = [
     'temperature',
   ],
   [
-    'barometricPressure',
-    (x) => ({ barometricPressure: x as number }),
+    'barometricPressureAbs',
+    (x) => ({ barometricPressureAbs: x as number }),
     20_000,
     120_000,
     'from 20 000 to 120 000 Pa absolute',
@@ -105,8 +105,8 @@ const RANGES: [string, Patch, number, number, string, string | undefined][] = [
     'length',
   ],
   [
-    'pressureGauge.fullScale',
-    (x) => ({ pressureGauge: { fullScale: x as number } }),
+    'pressureGauge.fullScaleGauge',
+    (x) => ({ pressureGauge: { fullScaleGauge: x as number } }),
     1e4,
     1e8,
     'from 10 000 to 100 000 000 Pa gauge',
@@ -174,17 +174,17 @@ describe('validateInput: every numeric field at and just past its edges', () => 
   it('a gauge reading is bounded below by a full vacuum at this site’s barometric pressure', () => {
     const baro = 90_000;
     expect(
-      validateInput(base({ barometricPressure: baro, gaugePressure: -baro })).gaugePressure,
+      validateInput(base({ barometricPressureAbs: baro, pressureReadingGauge: -baro })).pressureReadingGauge,
     ).toBe(-baro);
-    expect(validateInput(base({ gaugePressure: 1e8 })).gaugePressure).toBe(1e8);
-    const e = refusal(base({ barometricPressure: baro, gaugePressure: below(-baro) }));
+    expect(validateInput(base({ pressureReadingGauge: 1e8 })).pressureReadingGauge).toBe(1e8);
+    const e = refusal(base({ barometricPressureAbs: baro, pressureReadingGauge: below(-baro) }));
     expect(e.field).toBe('gaugePressure');
     expect(e.validRange).toBe(
       'from −90000 Pa (full vacuum at this barometric pressure) to 100 000 000 Pa gauge',
     );
     expect(e.limits).toEqual({ min: -baro, max: 1e8, quantity: 'gaugePressure' });
-    expect(refusal(base({ gaugePressure: above(1e8) })).field).toBe('gaugePressure');
-    expect(refusal(base({ gaugePressure: Number.NaN })).field).toBe('gaugePressure');
+    expect(refusal(base({ pressureReadingGauge: above(1e8) })).field).toBe('gaugePressure');
+    expect(refusal(base({ pressureReadingGauge: Number.NaN })).field).toBe('gaugePressure');
   });
 });
 
@@ -197,9 +197,9 @@ describe('validateInput: defaults as TankCheckInput documents them (thermo/check
     expect(c.fixedDipTube).toBe(false);
     expect(c.fillMethod).toBe('gauge');
     expect(c.reliefGiven).toBe(false);
-    expect(c.reliefSetPressure).toBe(1.72e6);
+    expect(c.reliefSetPressureGauge).toBe(1.72e6);
     expect(c.mdmt).toBeNull();
-    expect(c.gaugePressure).toBeNull();
+    expect(c.pressureReadingGauge).toBeNull();
     expect(c.specificGravity).toBeNull();
     expect(c.T).toBe(290);
     expect(c.Tpeak).toBe(300);
@@ -208,16 +208,16 @@ describe('validateInput: defaults as TankCheckInput documents them (thermo/check
   it('the pressure gauge defaults to ±2 % of a full scale at the design pressure', () => {
     const c = validateInput(base());
     expect(c.accuracy).toBe(0.02);
-    expect(c.fullScale).toBe(1.72e6);
-    const g = validateInput(base({ pressureGauge: { fullScale: 2e6, accuracy: 0.01 } }));
-    expect([g.fullScale, g.accuracy]).toEqual([2e6, 0.01]);
+    expect(c.fullScaleGauge).toBe(1.72e6);
+    const g = validateInput(base({ pressureGauge: { fullScaleGauge: 2e6, accuracy: 0.01 } }));
+    expect([g.fullScaleGauge, g.accuracy]).toEqual([2e6, 0.01]);
     expect(validateInput(base({ pressureGauge: {} })).accuracy).toBe(0.02);
   });
 
   it('the barometric pressure: as given, else from the elevation, else one standard atmosphere', () => {
     // 1 atm = 101 325 Pa (definition; NIST SP 811, Appendix B).
     expect(validateInput(base()).baro).toBe(101_325);
-    expect(validateInput(base({ barometricPressure: 95_000, elevation: 3000 })).baro).toBe(95_000);
+    expect(validateInput(base({ barometricPressureAbs: 95_000, elevation: 3000 })).baro).toBe(95_000);
     // U.S. Standard Atmosphere 1976, Table I: 89 875 Pa at 1 000 m geopotential altitude.
     expectRel(validateInput(base({ elevation: 1000 })).baro, 89_875, 1e-3, {
       input: 'elevation 1000 m',
@@ -242,7 +242,7 @@ describe('validateInput: defaults as TankCheckInput documents them (thermo/check
           placement: 'underground',
           containerClass: 'cargo',
           insulated: true,
-          reliefSetPressure: 1.5e6,
+          reliefSetPressureGauge: 1.5e6,
           minDesignMetalTemperature: 244,
         }),
       ),
@@ -253,7 +253,7 @@ describe('validateInput: defaults as TankCheckInput documents them (thermo/check
       true,
       true,
     ]);
-    expect([c.reliefSetPressure, c.mdmt]).toEqual([1.5e6, 244]);
+    expect([c.reliefSetPressureGauge, c.mdmt]).toEqual([1.5e6, 244]);
     for (const k of ['storage', 'cylinder', 'cargo', 'portable'])
       expect(validateInput(base(tank({ containerClass: k }))).containerClass).toBe(k);
   });
@@ -325,7 +325,7 @@ describe('validateInput: choices and shapes refused with the field and what is a
     for (const bad of [null, 7]) {
       const e = refusal(base({ tank: bad as unknown as TankCheckInput['tank'] }));
       expect(e.field).toBe('tank');
-      expect(e.validRange).toBe('an object { waterCapacity, designPressure, … }');
+      expect(e.validRange).toBe('an object { waterCapacity, designPressureGauge, … }');
     }
   });
 

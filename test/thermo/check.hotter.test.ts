@@ -24,7 +24,7 @@ const co2Rhoc = Number(co2.rhoc_eos_kg_m3);
 const SW = 'Span & Wagner 1996 (J. Phys. Chem. Ref. Data 25, 1509), test/reference/fluids.csv';
 
 const co2Tank = (peak: number): TankCheckInput => ({
-  tank: { waterCapacity: 1, designPressure: 2e7 },
+  tank: { waterCapacity: 1, designPressureGauge: 2e7 },
   product: 'carbon-dioxide',
   liquidTemperature: 283.15,
   contents: { netMass: 700 },
@@ -70,7 +70,7 @@ describe('checkTank: cases that read safer when hotter', () => {
     const pb = LPG_PRESETS.find((p) => p.id === 'pb-50-50')!.product;
     const run = (peak: number) =>
       checkTank({
-        tank: { waterCapacity: 5.116, designPressure: 1.7e6 },
+        tank: { waterCapacity: 5.116, designPressureGauge: 1.7e6 },
         product: pb,
         liquidTemperature: 272.08,
         contents: { gaugePercent: 0.031 },
@@ -85,7 +85,7 @@ describe('checkTank: cases that read safer when hotter', () => {
   it('a blend at 100 % gauge is liquid-full now, with a danger', () => {
     const pb = LPG_PRESETS.find((p) => p.id === 'pb-50-50')!.product;
     const r = checkTank({
-      tank: { waterCapacity: 1, designPressure: 1.7e6 },
+      tank: { waterCapacity: 1, designPressureGauge: 1.7e6 },
       product: pb,
       liquidTemperature: 290,
       contents: { gaugePercent: 100 },
@@ -101,7 +101,7 @@ describe('checkTank: cases that read safer when hotter', () => {
     const pSat = saturation('propane', T).pAbs; // about 1 MPa absolute (core, checked against the reference tables)
     const relief = 0.5 * (pSat - 101_325);
     const r = checkTank({
-      tank: { waterCapacity: 1, designPressure: 2e6, reliefSetPressure: relief },
+      tank: { waterCapacity: 1, designPressureGauge: 2e6, reliefSetPressureGauge: relief },
       product: 'propane',
       liquidTemperature: T,
       contents: { gaugePercent: 50 },
@@ -117,10 +117,10 @@ describe('checkTank and the core refuse bad input by naming an input field', () 
   it('ethane liquid-full below its lowest temperature names no internal "density"', () => {
     // 609.4 kg in 1 m³ at 161.66 K with a peak of 152.29 K and a low design pressure: the relief
     // search used to ask the core for a state beyond what it can hold.
-    for (const designPressure of [1e4, 1e5, 1e6, 2e7]) {
+    for (const designPressureGauge of [1e4, 1e5, 1e6, 2e7]) {
       try {
         const r = checkTank({
-          tank: { waterCapacity: 1, designPressure },
+          tank: { waterCapacity: 1, designPressureGauge },
           product: 'ethane',
           liquidTemperature: 161.66,
           contents: { netMass: 609.4 },

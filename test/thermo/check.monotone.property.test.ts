@@ -62,7 +62,7 @@ const scenario = fc
     // Offsets from Tc in hundredths of a kelvin (integers spread evenly; doubles bunch near 0).
     a: fc.integer({ min: -1200, max: 1200 }).map((x) => x / 100),
     b: fc.integer({ min: -1200, max: 1200 }).map((x) => x / 100),
-    designPressure: fc.double({ min: 1e6, max: 3e7, noNaN: true }),
+    designPressureGauge: fc.double({ min: 1e6, max: 3e7, noNaN: true }),
   })
   .map((s) => {
     const Tc = criticalTemperature(s.product);
@@ -71,7 +71,7 @@ const scenario = fc
     const clamp = (x: number) => Math.min(400, Math.max(T, Tc + x));
     const [p1, p2] = [clamp(Math.min(s.a, s.b)), clamp(Math.max(s.a, s.b))];
     const input = (peak: number): TankCheckInput => ({
-      tank: { waterCapacity: 1, designPressure: s.designPressure },
+      tank: { waterCapacity: 1, designPressureGauge: s.designPressureGauge },
       product: s.product,
       liquidTemperature: T,
       contents: { netMass: s.fillOfCritical * rhoc },
@@ -147,7 +147,7 @@ describe('checkTank is never milder when hotter (fast-check, peaks across Tc)', 
         .filter((p, i, a) => a.indexOf(p) === i);
       for (const fill of [0.7, 1.15, 1.6]) {
         const input = (peak: number): TankCheckInput => ({
-          tank: { waterCapacity: 1, designPressure: 1e7 },
+          tank: { waterCapacity: 1, designPressureGauge: 1e7 },
           product,
           liquidTemperature: T,
           contents: { netMass: fill * rhoc },

@@ -92,8 +92,8 @@ const valid = fc.record(
     tank: fc.record(
       {
         waterCapacity: fc.double({ min: 0.01, max: 10, noNaN: true }),
-        designPressure: fc.double({ min: 2e5, max: 2e7, noNaN: true }),
-        reliefSetPressure: fc.double({ min: 2e5, max: 2e7, noNaN: true }),
+        designPressureGauge: fc.double({ min: 2e5, max: 2e7, noNaN: true }),
+        reliefSetPressureGauge: fc.double({ min: 2e5, max: 2e7, noNaN: true }),
         placement: fc.constantFrom('aboveground' as const, 'underground' as const),
         insulated: fc.boolean(),
         containerClass: fc.constantFrom(
@@ -107,16 +107,16 @@ const valid = fc.record(
         shape,
         minDesignMetalTemperature: fc.double({ min: 180, max: 370, noNaN: true }),
       },
-      { requiredKeys: ['waterCapacity', 'designPressure', 'shape'] },
+      { requiredKeys: ['waterCapacity', 'designPressureGauge', 'shape'] },
     ),
     product: products,
     specificGravity: fc.double({ min: 0.3, max: 1.5, noNaN: true }),
     liquidTemperature: temp,
     contents,
-    gaugePressure: fc.double({ min: -9e4, max: 1e7, noNaN: true }),
+    pressureReadingGauge: fc.double({ min: -9e4, max: 1e7, noNaN: true }),
     pressureGauge: fc.record(
       {
-        fullScale: fc.double({ min: 1e5, max: 3e7, noNaN: true }),
+        fullScaleGauge: fc.double({ min: 1e5, max: 3e7, noNaN: true }),
         accuracy: fc.double({ min: 0, max: 0.1, noNaN: true }),
       },
       { requiredKeys: [] },
@@ -156,7 +156,7 @@ describe('checkTank property', () => {
   it('checkTank names contents.netMass for more product than the model can hold above Tc', () => {
     // Found by this property: R-134a at 400 K (above its critical point) with 2,000 kg in 1.47 m³.
     const input = {
-      tank: { waterCapacity: 1.4713, designPressure: 2e7 },
+      tank: { waterCapacity: 1.4713, designPressureGauge: 2e7 },
       product: 'r134a',
       liquidTemperature: 400,
       contents: { netMass: 2000 },
@@ -167,7 +167,7 @@ describe('checkTank property', () => {
 
   it('checkTank names only its own input fields in an InputError', () => {
     const own =
-      /^(input|tank|product|specificGravity|liquidTemperature|contents|gaugePressure|pressureGauge|barometricPressure|elevation|peakTemperature)\b/;
+      /^(input|tank|product|specificGravity|liquidTemperature|contents|pressureReadingGauge|pressureGauge|barometricPressureAbs|elevation|peakTemperature)\b/;
     for (const f of tally.fields.keys()) expect(f).toMatch(own);
   });
 
@@ -175,8 +175,8 @@ describe('checkTank property', () => {
     const paths = [
       'tank',
       'tank.waterCapacity',
-      'tank.designPressure',
-      'tank.reliefSetPressure',
+      'tank.designPressureGauge',
+      'tank.reliefSetPressureGauge',
       'tank.placement',
       'tank.containerClass',
       'tank.shape',
@@ -185,8 +185,8 @@ describe('checkTank property', () => {
       'liquidTemperature',
       'contents',
       'contents.gaugePercent',
-      'gaugePressure',
-      'barometricPressure',
+      'pressureReadingGauge',
+      'barometricPressureAbs',
       'elevation',
       'peakTemperature',
       'specificGravity',

@@ -34,7 +34,7 @@ describe('checkTank states and refusals (fast-check)', () => {
     fc.assert(
       fc.property(blends, fc.integer({ min: 250, max: 310 }), (product, T) => {
         const r = checkTank({
-          tank: { waterCapacity: 1, designPressure: 1.72e6 },
+          tank: { waterCapacity: 1, designPressureGauge: 1.72e6 },
           product,
           liquidTemperature: T,
           contents: { gaugePercent: 100 },
@@ -56,7 +56,7 @@ describe('checkTank states and refusals (fast-check)', () => {
         (product, gauge, T) => {
           const at = (peak: number) =>
             checkTank({
-              tank: { waterCapacity: 5.116, designPressure: 1e7 },
+              tank: { waterCapacity: 5.116, designPressureGauge: 1e7 },
               product,
               liquidTemperature: T,
               contents: { gaugePercent: gauge },
@@ -86,20 +86,20 @@ describe('checkTank states and refusals (fast-check)', () => {
 
   it('a BigInt, string or object in any numeric field gives InputError naming that field', () => {
     const base: TankCheckInput = {
-      tank: { waterCapacity: 1, designPressure: 1.72e6, reliefSetPressure: 1.5e6 },
+      tank: { waterCapacity: 1, designPressureGauge: 1.72e6, reliefSetPressureGauge: 1.5e6 },
       product: 'propane',
       liquidTemperature: 290,
       contents: { gaugePercent: 50 },
-      gaugePressure: 7e5,
+      pressureReadingGauge: 7e5,
       peakTemperature: 300,
     };
     const fields = [
       'tank.waterCapacity',
-      'tank.designPressure',
-      'tank.reliefSetPressure',
+      'tank.designPressureGauge',
+      'tank.reliefSetPressureGauge',
       'liquidTemperature',
       'contents.gaugePercent',
-      'gaugePressure',
+      'pressureReadingGauge',
       'peakTemperature',
     ];
     const junk = fc.oneof(

@@ -32,7 +32,7 @@ const codes = (r: TankCheckResult) => r.cautions.map((c) => c.code);
 
 function base(over: Partial<TankCheckInput> = {}): TankCheckInput {
   return {
-    tank: { waterCapacity: gal(1000), designPressure: psig(250) },
+    tank: { waterCapacity: gal(1000), designPressureGauge: psig(250) },
     product: 'propane',
     liquidTemperature: F(80),
     contents: { gaugePercent: 60 },
@@ -112,7 +112,11 @@ describe('checkTank: peak pressure and headroom (FACTS cases 8, 9)', () => {
   const propane = (peakF: number) =>
     checkTank(
       base({
-        tank: { waterCapacity: gal(1000), designPressure: psig(250), reliefSetPressure: psig(220) },
+        tank: {
+          waterCapacity: gal(1000),
+          designPressureGauge: psig(250),
+          reliefSetPressureGauge: psig(220),
+        },
         peakTemperature: F(peakF),
         contents: { gaugePercent: 50 },
       }),
@@ -155,8 +159,8 @@ describe('checkTank: peak pressure and headroom (FACTS cases 8, 9)', () => {
           product: 'ammonia',
           tank: {
             waterCapacity: gal(1000),
-            designPressure: psig(250),
-            reliefSetPressure: psig(237.5),
+            designPressureGauge: psig(250),
+            reliefSetPressureGauge: psig(237.5),
           },
           contents: { gaugePercent: 50 },
           peakTemperature: F(peakF),
@@ -248,7 +252,7 @@ describe('checkTank: liquid-full temperature (FACTS case 11)', () => {
       const r = checkTank({
         tank: {
           waterCapacity: V,
-          designPressure: psig(product === 'carbon-dioxide' ? 1800 : 250),
+          designPressureGauge: psig(product === 'carbon-dioxide' ? 1800 : 250),
           containerClass: cls,
         },
         product,
@@ -270,7 +274,7 @@ describe('checkTank: liquid-full temperature (FACTS case 11)', () => {
 describe('checkTank: CO2 (FACTS cases 12, 13)', () => {
   const co2 = (over: Partial<TankCheckInput>) =>
     checkTank({
-      tank: { waterCapacity: 0.05, designPressure: psig(1800), containerClass: 'cylinder' },
+      tank: { waterCapacity: 0.05, designPressureGauge: psig(1800), containerClass: 'cylinder' },
       product: 'carbon-dioxide',
       liquidTemperature: F(0),
       contents: { gaugePercent: 50 },
@@ -284,10 +288,10 @@ describe('checkTank: CO2 (FACTS cases 12, 13)', () => {
       source: FACTS(12),
       kind: 'published',
     });
-    const low = co2({ gaugePressure: psig(55) });
+    const low = co2({ pressureReadingGauge: psig(55) });
     expect(low.cautions[0]!.level).toBe('danger');
     expect(codes(low)).toContain('co2-below-triple-point');
-    expect(codes(co2({ gaugePressure: psig(65) }))).not.toContain('co2-below-triple-point');
+    expect(codes(co2({ pressureReadingGauge: psig(65) }))).not.toContain('co2-below-triple-point');
   });
   it('checkTank reports CO2 above 87.8 °F as supercritical with no level (case 13)', () => {
     const hot = co2({
@@ -352,7 +356,7 @@ describe('checkTank: refrigerant cylinder (FACTS case 20)', () => {
   it('checkTank limits R-134a in a DOT cylinder by the 130 °F rule', () => {
     const V = 0.05;
     const r = checkTank({
-      tank: { waterCapacity: V, designPressure: psig(240), containerClass: 'cylinder' },
+      tank: { waterCapacity: V, designPressureGauge: psig(240), containerClass: 'cylinder' },
       product: 'r134a',
       liquidTemperature: F(70),
       contents: { gaugePercent: 40 },
@@ -391,7 +395,7 @@ describe('checkTank identities', () => {
     }),
     base({
       product: 'r22',
-      tank: { waterCapacity: 0.03, designPressure: psig(300), containerClass: 'cylinder' },
+      tank: { waterCapacity: 0.03, designPressureGauge: psig(300), containerClass: 'cylinder' },
       contents: { netMass: 20 },
       peakTemperature: F(120),
     }),
@@ -452,7 +456,7 @@ describe('checkTank identities', () => {
       // identity: search tolerance 0.002 K → pressure within 0.1 %
       expectRel(
         p,
-        (i.tank.reliefSetPressure ?? i.tank.designPressure) + r.barometricPressure,
+        (i.tank.reliefSetPressureGauge ?? i.tank.designPressureGauge) + r.barometricPressureAbs,
         1e-3,
         { input: i.product, source: 'definition', kind: 'identity' },
       );
@@ -485,13 +489,13 @@ describe('checkTank identities', () => {
     const V = Math.PI * 0.25 * 4.5 + (Math.PI / 6) * 1;
     const byGauge = checkTank(
       base({
-        tank: { waterCapacity: V, designPressure: psig(250), shape },
+        tank: { waterCapacity: V, designPressureGauge: psig(250), shape },
         contents: { gaugePercent: 50 },
       }),
     );
     const byLevel = checkTank(
       base({
-        tank: { waterCapacity: V, designPressure: psig(250), shape },
+        tank: { waterCapacity: V, designPressureGauge: psig(250), shape },
         contents: { levelHeight: 0.5 },
       }),
     );
@@ -533,7 +537,7 @@ describe('checkTank fill limits end to end (FACTS cases 4, 5)', () => {
     const run = (gallons: number, tank: Partial<TankCheckInput['tank']>) =>
       checkTank(
         base({
-          tank: { waterCapacity: gal(gallons), designPressure: psig(250), ...tank },
+          tank: { waterCapacity: gal(gallons), designPressureGauge: psig(250), ...tank },
           specificGravity: 0.508,
           liquidTemperature: F(60),
           peakTemperature: F(60),
@@ -629,7 +633,7 @@ describe('checkTank cautions', () => {
       base({
         tank: {
           waterCapacity: gal(1000),
-          designPressure: psig(250),
+          designPressureGauge: psig(250),
           minDesignMetalTemperature: F(-20),
         },
         liquidTemperature: F(-30),
@@ -641,7 +645,7 @@ describe('checkTank cautions', () => {
       base({
         tank: {
           waterCapacity: gal(1000),
-          designPressure: psig(250),
+          designPressureGauge: psig(250),
           minDesignMetalTemperature: F(-20),
         },
       }),

@@ -10,11 +10,11 @@ import { expectWithin } from './check-helpers.js';
 const F = (x: number) => toSI('temperature', x, 'F');
 const psig = (x: number) => toSI('gaugePressure', x, 'psig');
 const input = (reading: number, over: Partial<TankCheckInput> = {}): TankCheckInput => ({
-  tank: { waterCapacity: toSI('volume', 500, 'usgal'), designPressure: psig(250) },
+  tank: { waterCapacity: toSI('volume', 500, 'usgal'), designPressureGauge: psig(250) },
   product: 'propane',
   liquidTemperature: F(80),
   contents: { gaugePercent: 50 },
-  gaugePressure: psig(reading),
+  pressureReadingGauge: psig(reading),
   peakTemperature: F(95),
   ...over,
 });
@@ -85,7 +85,7 @@ describe('checkTank diagnosis', () => {
   it('checkTank widens the band with a coarser gauge', () => {
     const r = checkTank({
       ...input(140),
-      pressureGauge: { fullScale: psig(600), accuracy: 0.025 },
+      pressureGauge: { fullScaleGauge: psig(600), accuracy: 0.025 },
     });
     expect(r.diagnosis!.verdict).toBe('fits');
   });

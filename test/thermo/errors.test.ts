@@ -28,7 +28,7 @@ const gal = (x: number) => toSI('volume', x, 'usgal');
 
 function base(over: Partial<TankCheckInput> = {}): TankCheckInput {
   return {
-    tank: { waterCapacity: gal(1000), designPressure: psig(250) },
+    tank: { waterCapacity: gal(1000), designPressureGauge: psig(250) },
     product: 'propane',
     liquidTemperature: F(80),
     contents: { gaugePercent: 60 },
@@ -75,7 +75,7 @@ describe('InputError', () => {
 describe('InputError codes', () => {
   it('checkTank says which kind of refusal: not a number, out of range, or invalid', () => {
     const base: TankCheckInput = {
-      tank: { waterCapacity: 1, designPressure: 1.72e6 },
+      tank: { waterCapacity: 1, designPressureGauge: 1.72e6 },
       product: 'propane',
       liquidTemperature: 290,
       contents: { gaugePercent: 50 },
@@ -129,16 +129,24 @@ describe('checkTank limits', () => {
 
   // Each field refused with a value outside its range: the quantity its limits measure.
   const cases: [string, Partial<TankCheckInput>, InputLimits['quantity']][] = [
-    ['tank.waterCapacity', { tank: { waterCapacity: 0, designPressure: psig(250) } }, 'volume'],
-    ['tank.designPressure', { tank: { waterCapacity: 1, designPressure: 5 } }, 'gaugePressure'],
     [
-      'tank.reliefSetPressure',
-      { tank: { waterCapacity: 1, designPressure: psig(250), reliefSetPressure: 2e8 } },
+      'tank.waterCapacity',
+      { tank: { waterCapacity: 0, designPressureGauge: psig(250) } },
+      'volume',
+    ],
+    [
+      'tank.designPressureGauge',
+      { tank: { waterCapacity: 1, designPressureGauge: 5 } },
+      'gaugePressure',
+    ],
+    [
+      'tank.reliefSetPressureGauge',
+      { tank: { waterCapacity: 1, designPressureGauge: psig(250), reliefSetPressureGauge: 2e8 } },
       'gaugePressure',
     ],
     [
       'tank.minDesignMetalTemperature',
-      { tank: { waterCapacity: 1, designPressure: psig(250), minDesignMetalTemperature: 10 } },
+      { tank: { waterCapacity: 1, designPressureGauge: psig(250), minDesignMetalTemperature: 10 } },
       'temperature',
     ],
     [
@@ -146,17 +154,17 @@ describe('checkTank limits', () => {
       {
         tank: {
           waterCapacity: 1,
-          designPressure: psig(250),
+          designPressureGauge: psig(250),
           shape: { kind: 'sphere', diameter: 80 },
         },
       },
       'length',
     ],
     ['peakTemperature', { peakTemperature: 500 }, 'temperature'],
-    ['barometricPressure', { barometricPressure: 5000 }, 'pressure'],
+    ['barometricPressureAbs', { barometricPressureAbs: 5000 }, 'pressure'],
     ['elevation', { elevation: 20_000 }, 'length'],
-    ['gaugePressure', { gaugePressure: -2e5 }, 'gaugePressure'],
-    ['pressureGauge.fullScale', { pressureGauge: { fullScale: 1 } }, 'gaugePressure'],
+    ['pressureReadingGauge', { pressureReadingGauge: -2e5 }, 'gaugePressure'],
+    ['pressureGauge.fullScaleGauge', { pressureGauge: { fullScaleGauge: 1 } }, 'gaugePressure'],
     ['pressureGauge.accuracy', { pressureGauge: { accuracy: 0.5 } }, 'fraction'],
     ['specificGravity', { specificGravity: 5 }, undefined],
     ['contents.gaugePercent', { contents: { gaugePercent: 140 } }, undefined],
@@ -180,8 +188,8 @@ describe('checkTank limits', () => {
 
   it('checkTank bounds a full vacuum reading by this site’s barometric pressure', () => {
     const l = limitsOf(
-      () => checkTank(base({ barometricPressure: 80_000, gaugePressure: -90_000 })),
-      'gaugePressure',
+      () => checkTank(base({ barometricPressureAbs: 80_000, pressureReadingGauge: -90_000 })),
+      'pressureReadingGauge',
     );
     expect(l).toEqual({ min: -80_000, max: 1e8, quantity: 'gaugePressure' });
   });
@@ -206,7 +214,7 @@ describe('checkTank limits', () => {
       diameter: 1,
       shellLength: 3,
     } as const;
-    const tank = { waterCapacity: 2.6, designPressure: psig(250), shape };
+    const tank = { waterCapacity: 2.6, designPressureGauge: psig(250), shape };
     const H = tankHeight(shape);
     for (const level of [1.5, -0.1, 5000]) {
       const l = limitsOf(
@@ -235,7 +243,7 @@ describe('checkTank limits', () => {
   });
 
   it('checkTank: every numeric refusal’s limits hold finite bounds that exclude the value', () => {
-    const fields = ['liquidTemperature', 'peakTemperature', 'gaugePressure'] as const;
+    const fields = ['liquidTemperature', 'peakTemperature', 'pressureReadingGauge'] as const;
     fc.assert(
       fc.property(
         fc.constantFrom(...fields),

@@ -18,7 +18,7 @@ import { checkClose } from '../helpers/check.js';
 const gal = (x: number) => toSI('volume', x, 'usgal');
 const start = startFill(
   {
-    tank: { waterCapacity: gal(500), designPressure: toSI('gaugePressure', 250, 'psig') },
+    tank: { waterCapacity: gal(500), designPressureGauge: toSI('gaugePressure', 250, 'psig') },
     product: 'propane',
     liquidTemperature: toSI('temperature', 50, 'F'),
     contents: { gaugePercent: 30 },
@@ -90,7 +90,10 @@ describe('fill record', () => {
         'fill.start.before.totalMass',
         (r) => ((r.start.before as { totalMass: unknown }).totalMass = '12'),
       ],
-      ['fill.start.check.tank.designPressure', (r) => (r.start.check.tank.designPressure = 0)],
+      [
+        'fill.start.check.tank.designPressureGauge',
+        (r) => (r.start.check.tank.designPressureGauge = 0),
+      ],
       [
         'fill.start.check.product',
         (r) => ((r.start.check as { product: unknown }).product = 'unobtainium'),

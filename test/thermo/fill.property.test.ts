@@ -41,7 +41,7 @@ const starts = fc
   })
   .map((r): FillStart | null => {
     const input: TankCheckInput = {
-      tank: { waterCapacity: r.waterCapacity, designPressure: 2.5e6, placement: r.placement },
+      tank: { waterCapacity: r.waterCapacity, designPressureGauge: 2.5e6, placement: r.placement },
       product: r.product,
       liquidTemperature: r.T,
       contents: { gaugePercent: r.gauge },

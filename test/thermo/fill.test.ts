@@ -31,7 +31,7 @@ const LEVEL = 'core liquid density ±0.5 % of a 60–80 % level';
 
 function tank(over: Partial<TankCheckInput> = {}): TankCheckInput {
   return {
-    tank: { waterCapacity: gal(1000), designPressure: psig(250) },
+    tank: { waterCapacity: gal(1000), designPressureGauge: psig(250) },
     product: 'propane',
     liquidTemperature: F(60),
     contents: { gaugePercent: 20 },
@@ -204,11 +204,17 @@ describe('reconcileFill: worked cases (propane, 1,000 US gal)', () => {
   });
 
   it('case 7: an after-pressure on n-butane’s curve in a propane tank is flagged', () => {
-    const wrong = fill({ volume: gal(400) }, { gaugePercent: 61, gaugePressure: psig(11.3) });
+    const wrong = fill(
+      { volume: gal(400) },
+      { gaugePercent: 61, pressureReadingGauge: psig(11.3) },
+    );
     const f = wrong.findings.find((x) => x.code === 'fill-pressure-off-curve');
     expect(f?.level).toBe('warning');
     expect(f?.message).toMatch(/different product/);
-    const right = fill({ volume: gal(400) }, { gaugePercent: 61, gaugePressure: psig(93.0) });
+    const right = fill(
+      { volume: gal(400) },
+      { gaugePercent: 61, pressureReadingGauge: psig(93.0) },
+    );
     expect(right.findings.map((x) => x.code)).not.toContain('fill-pressure-off-curve');
   });
 });
@@ -283,7 +289,7 @@ describe('reconcileFill: identities and edge cases', () => {
     const shape = { kind: 'sphere' as const, diameter: 2 };
     const s = startFill(
       tank({
-        tank: { waterCapacity: (Math.PI * 8) / 6, designPressure: psig(250), shape },
+        tank: { waterCapacity: (Math.PI * 8) / 6, designPressureGauge: psig(250), shape },
         contents: { levelHeight: 0.5 },
       }),
       undefined,
@@ -343,7 +349,7 @@ describe('reconcileFill: refusals name the field and range', () => {
   it('no liquid level to compare above the critical temperature', () => {
     const co2 = startFill(
       {
-        tank: { waterCapacity: 0.05, designPressure: 1.6e7 },
+        tank: { waterCapacity: 0.05, designPressureGauge: 1.6e7 },
         product: 'carbon-dioxide',
         liquidTemperature: 290,
         contents: { gaugePercent: 30 },

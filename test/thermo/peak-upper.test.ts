@@ -31,12 +31,12 @@ const DESIGN = 1800 * PSI;
 
 function input(): TankCheckInput {
   return {
-    tank: { waterCapacity: V, designPressure: DESIGN, reliefSetPressure: 1800 * PSI },
+    tank: { waterCapacity: V, designPressureGauge: DESIGN, reliefSetPressureGauge: 1800 * PSI },
     product: 'carbon-dioxide',
     liquidTemperature: 294.26,
     contents: { netMass: RHO * V },
     peakTemperature: T_PLUS_5,
-    barometricPressure: P_ATM_Pa,
+    barometricPressureAbs: P_ATM_Pa,
   };
 }
 
@@ -90,7 +90,10 @@ describe('peak raised by the model allowance (pGaugeUpper)', () => {
   });
 
   it('is the pressure the design caution quotes', () => {
-    const low = checkTank({ ...input(), tank: { ...input().tank, designPressure: 1000 * PSI } });
+    const low = checkTank({
+      ...input(),
+      tank: { ...input().tank, designPressureGauge: 1000 * PSI },
+    });
     expect(low.peak.headroomToDesign).toBeLessThan(0);
     const c = low.cautions.find((x) => x.code === 'design-at-peak');
     expect(c?.params.pressure).toMatchObject({ value: low.peak.pGaugeUpper });

@@ -28,21 +28,23 @@ function r410aCylinder(over: Partial<TankCheckInput> = {}): TankCheckInput {
   return {
     tank: {
       waterCapacity: WC_50LB,
-      designPressure: 400 * PSI,
+      designPressureGauge: 400 * PSI,
       containerClass: 'cylinder',
       recovery: {},
     },
     product: 'r410a',
     liquidTemperature: 298.15,
     contents: { netMass: rho323 * WC_50LB },
-    barometricPressure: ATM,
+    barometricPressureAbs: ATM,
     peakTemperature: F(140),
     ...over,
   };
 }
 
 describe('an R-410A recovery cylinder in a 140 °F van', () => {
-  const r = checkTank(r410aCylinder({ gaugePressure: +row('r410a', 298.15).p_bubble_Pa! - ATM }));
+  const r = checkTank(
+    r410aCylinder({ pressureReadingGauge: +row('r410a', 298.15).p_bubble_Pa! - ATM }),
+  );
 
   it('gives the pressure now as the reference bubble pressure', () => {
     checkClose({
@@ -138,7 +140,7 @@ describe('an R-410A recovery cylinder in a 140 °F van', () => {
 
   it('names air first when the reading is high', () => {
     const high = checkTank(
-      r410aCylinder({ gaugePressure: +row('r410a', 298.15).p_bubble_Pa! - ATM + 50 * PSI }),
+      r410aCylinder({ pressureReadingGauge: +row('r410a', 298.15).p_bubble_Pa! - ATM + 50 * PSI }),
     );
     expect(high.diagnosis?.verdict).toBe('high');
     expect(high.diagnosis?.causes[0]).toMatch(/liquid-full|Air or another non-condensable/);
@@ -168,12 +170,12 @@ describe('a zeotropic blend (R-407C)', () => {
   it('says a low reading can be a composition shift, naming the light and heavy components', () => {
     const pb = +row('r407c', 298.15).p_bubble_Pa!;
     const r = checkTank({
-      tank: { waterCapacity: WC_50LB, designPressure: 400 * PSI, containerClass: 'cylinder' },
+      tank: { waterCapacity: WC_50LB, designPressureGauge: 400 * PSI, containerClass: 'cylinder' },
       product: 'r407c',
       liquidTemperature: 298.15,
       contents: { netMass: 10 },
-      gaugePressure: pb - ATM - 40 * PSI,
-      barometricPressure: ATM,
+      pressureReadingGauge: pb - ATM - 40 * PSI,
+      barometricPressureAbs: ATM,
       peakTemperature: 305,
     });
     expect(r.diagnosis?.verdict).toBe('low');

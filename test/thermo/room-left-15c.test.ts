@@ -34,7 +34,7 @@ const CASES: { id: string; input: TankCheckInput; source: string }[] = [
   {
     id: 'propane',
     input: {
-      tank: { waterCapacity: gal(1000), designPressure: toSI('gaugePressure', 250, 'psig') },
+      tank: { waterCapacity: gal(1000), designPressureGauge: toSI('gaugePressure', 250, 'psig') },
       product: 'propane',
       liquidTemperature: toSI('temperature', 70, 'F'),
       contents: { gaugePercent: 30 },
@@ -45,7 +45,7 @@ const CASES: { id: string; input: TankCheckInput; source: string }[] = [
   {
     id: 'n-butane',
     input: {
-      tank: { waterCapacity: gal(1000), designPressure: toSI('gaugePressure', 250, 'psig') },
+      tank: { waterCapacity: gal(1000), designPressureGauge: toSI('gaugePressure', 250, 'psig') },
       product: 'n-butane',
       liquidTemperature: toSI('temperature', 20, 'C'),
       contents: { gaugePercent: 25 },
@@ -56,7 +56,7 @@ const CASES: { id: string; input: TankCheckInput; source: string }[] = [
   {
     id: 'ammonia',
     input: {
-      tank: { waterCapacity: 4, designPressure: toSI('gaugePressure', 250, 'psig') },
+      tank: { waterCapacity: 4, designPressureGauge: toSI('gaugePressure', 250, 'psig') },
       product: 'ammonia',
       liquidTemperature: toSI('temperature', 10, 'C'),
       contents: { gaugePercent: 40 },

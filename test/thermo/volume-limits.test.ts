@@ -47,7 +47,7 @@ function run(
   gaugePercent = 30,
 ) {
   return checkTank({
-    tank: { waterCapacity: gal(1000), designPressure: psig(265), ...tank },
+    tank: { waterCapacity: gal(1000), designPressureGauge: psig(265), ...tank },
     product,
     liquidTemperature: F(tempF),
     contents: { gaugePercent },
@@ -200,7 +200,7 @@ describe('anhydrous ammonia: the volume column binds below the weight column', (
   it('DOT cylinders print no volume column: the 54 % weight rule alone (49 CFR 173.304a(a)(2))', () => {
     const r = run(
       'ammonia',
-      { containerClass: 'cylinder', waterCapacity: gal(30), designPressure: psig(480) },
+      { containerClass: 'cylinder', waterCapacity: gal(30), designPressureGauge: psig(480) },
       72,
     );
     expect(r.fillLimit.limits.some((l) => l.kind === 'volume')).toBe(false);
@@ -231,7 +231,7 @@ describe('other gases with a volume figure', () => {
       const pct = printed('sulfur dioxide', '173.315(a)', container);
       const r = run(
         'sulfur-dioxide',
-        { containerClass: 'cargo', waterCapacity: gal(g), designPressure: psig(150) },
+        { containerClass: 'cargo', waterCapacity: gal(g), designPressureGauge: psig(150) },
         72,
       );
       expectStop(r, pct, 'so2-volume', '173.315(a)', '49 CFR 173.315(a) table');
@@ -241,7 +241,7 @@ describe('other gases with a volume figure', () => {
   it('sulfur dioxide in DOT cylinders: the row prints no volume figure (49 CFR 173.304a(a)(2))', () => {
     const r = run(
       'sulfur-dioxide',
-      { containerClass: 'cylinder', waterCapacity: gal(10), designPressure: psig(225) },
+      { containerClass: 'cylinder', waterCapacity: gal(10), designPressureGauge: psig(225) },
       72,
     );
     expect(r.fillLimit.limits.some((l) => l.kind === 'volume')).toBe(false);
@@ -256,7 +256,7 @@ describe('other gases with a volume figure', () => {
       for (const fillMethod of ['gauge', 'weight'] as const) {
         const r = run(
           product,
-          { containerClass: 'cargo', fillMethod, designPressure: psig(350) },
+          { containerClass: 'cargo', fillMethod, designPressureGauge: psig(350) },
           0,
         );
         expectStop(r, pct, 'refrigerated-95-volume', '173.315(c)(1)', '49 CFR 173.315(c)(1)');
@@ -269,7 +269,7 @@ describe('other gases with a volume figure', () => {
 describe('LP-gas: the fixed maximum-level gauge', () => {
   it('storage: the gauge set for 42 % at 40 °F reproduces the regulation’s worked example, 79.8 gal in 100 gal (29 CFR 1910.110(b)(19)(v)(d))', () => {
     const r = checkTank({
-      tank: { waterCapacity: gal(100), designPressure: psig(250), fillMethod: 'fixed-gauge' },
+      tank: { waterCapacity: gal(100), designPressureGauge: psig(250), fillMethod: 'fixed-gauge' },
       product: 'propane',
       specificGravity: 0.51,
       liquidTemperature: F(40),
@@ -290,7 +290,7 @@ describe('LP-gas: the fixed maximum-level gauge', () => {
     const r = checkTank({
       tank: {
         waterCapacity: gal(100),
-        designPressure: psig(250),
+        designPressureGauge: psig(250),
         containerClass: 'cylinder',
         fillMethod: 'fixed-gauge',
       },
@@ -330,8 +330,8 @@ describe('refrigerated CO2 and N2O in DOT-4L cylinders (49 CFR 173.304a(e)(2))',
       const r = checkTank({
         tank: {
           waterCapacity: toSI('volume', 180, 'L'),
-          designPressure: psig(set),
-          reliefSetPressure: psig(set),
+          designPressureGauge: psig(set),
+          reliefSetPressureGauge: psig(set),
           containerClass: 'cylinder',
           insulated: true,
         },
@@ -358,8 +358,8 @@ describe('refrigerated CO2 and N2O in DOT-4L cylinders (49 CFR 173.304a(e)(2))',
     const r = checkTank({
       tank: {
         waterCapacity: toSI('volume', 34, 'L'),
-        designPressure: psig(1800),
-        reliefSetPressure: psig(3000),
+        designPressureGauge: psig(1800),
+        reliefSetPressureGauge: psig(3000),
         containerClass: 'cylinder',
         insulated: true,
       },
@@ -388,7 +388,7 @@ describe('LP-gas by gauge: the weight limit as a volume at today’s temperature
       const t = Number(row.liquid_temp_F);
       if (t < -40 || t > 120) continue;
       const r = checkTank({
-        tank: { waterCapacity: gal(500), designPressure: psig(250) },
+        tank: { waterCapacity: gal(500), designPressureGauge: psig(250) },
         product: 'propane',
         specificGravity: 0.508,
         liquidTemperature: F(t),
@@ -474,7 +474,7 @@ describe('property: no stop-at percent ever exceeds a printed volume limit', () 
         (product, containerClass, placement, insulated, fillMethod, tempF, m3) => {
           const tank = {
             waterCapacity: m3,
-            designPressure: psig(2000),
+            designPressureGauge: psig(2000),
             containerClass,
             placement,
             insulated,

@@ -21,7 +21,7 @@ const tank: TankRecord = {
   notes: '',
   nameplate: {
     waterCapacity: 1,
-    designPressure: 1.7e6,
+    designPressureGauge: 1.7e6,
     placement: 'aboveground',
     containerClass: 'storage',
   },

@@ -25,7 +25,7 @@ function input(gaugePercent: number): TankCheckInput {
   return {
     tank: {
       waterCapacity: toSI('volume', 500, 'usgal'),
-      designPressure: toSI('gaugePressure', 250, 'psig'),
+      designPressureGauge: toSI('gaugePressure', 250, 'psig'),
     },
     product: 'propane',
     liquidTemperature: toSI('temperature', 64, 'F'),
@@ -85,7 +85,7 @@ describe('an assumed relief setting', () => {
     const assumed = keyWords(keyFigures(checkTank(input(40)), US), US);
     expect(assumed.peak).toMatch(/headroom to relief \(assumed\) /);
     const entered = input(40);
-    entered.tank.reliefSetPressure = toSI('gaugePressure', 250, 'psig');
+    entered.tank.reliefSetPressureGauge = toSI('gaugePressure', 250, 'psig');
     const read = keyWords(keyFigures(checkTank(entered), US), US);
     expect(read.peak).not.toMatch(/assumed/);
     expect(read.peak).toMatch(/headroom to relief \d/);

@@ -15,7 +15,7 @@ function tank(id: string, name: string, site: string, productId: string): TankRe
     name,
     site,
     notes: '',
-    nameplate: { waterCapacity: 1, designPressure: 1.7e6 },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1.7e6 },
     productId,
     demo: false,
     createdAt: '2024-01-01T00:00:00.000Z',

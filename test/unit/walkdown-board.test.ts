@@ -31,7 +31,7 @@ function tank(id: string, name: string, over: Partial<TankRecord> = {}): TankRec
     name,
     notes: '',
     // 1 000 L propane storage tank, 1.724 MPa (250 psig) design and relief: invented test tank.
-    nameplate: { waterCapacity: 1, designPressure: 1_723_689, containerClass: 'storage' },
+    nameplate: { waterCapacity: 1, designPressureGauge: 1_723_689, containerClass: 'storage' },
     productId: 'propane',
     demo: false,
     createdAt: NOW.toISOString(),
@@ -47,7 +47,7 @@ function readings(over: Partial<Readings> = {}): Readings {
     gaugePercent: 50,
     levelHeight: null,
     netMass: null,
-    gaugePressure: null,
+    pressureReadingGauge: null,
     // The tank's own forecast, which the site forecast must replace.
     peakAirTemperature: 280,
     sunAllowance: 0,

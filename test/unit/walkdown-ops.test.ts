@@ -29,7 +29,7 @@ function tank(id: string, name: string): TankRecord {
     site: 'Yard',
     name,
     notes: '',
-    nameplate: { waterCapacity: 1, designPressure: 250 * PSI },
+    nameplate: { waterCapacity: 1, designPressureGauge: 250 * PSI },
     productId: 'propane',
     demo: false,
     createdAt: NOW.toISOString(),
@@ -43,7 +43,7 @@ const READ: Readings = {
   gaugePercent: 60,
   levelHeight: null,
   netMass: null,
-  gaugePressure: null,
+  pressureReadingGauge: null,
   peakAirTemperature: null,
   sunAllowance: 0,
 };
@@ -149,13 +149,11 @@ describe('walkdown CSV', () => {
     expect(Number(col('design pressure'))).toBeCloseTo(250, 6);
     const r = x.entries[0]!.result!;
     // Peak pressure shown ≥ the SI figure, headroom shown ≤ it (NIST psi).
-    expect(Number(col('peak pressure')) * PSI).toBeGreaterThanOrEqual(
-      r.summary.peakPressure - 1e-6,
-    );
+    expect(Number(col('peak pressure')) * PSI).toBeGreaterThanOrEqual(r.summary.peakGauge - 1e-6);
     expect(Number(col('headroom to relief')) * PSI).toBeLessThanOrEqual(
       r.summary.headroomToRelief + 1e-6,
     );
-    expect(Number(col('peak pressure')) * PSI - r.summary.peakPressure).toBeLessThan(PSI);
+    expect(Number(col('peak pressure')) * PSI - r.summary.peakGauge).toBeLessThan(PSI);
     // The raised peak, last column, names gauge; shown rounded up, and the headroom to design
     // shown (rounded down) reconciles with design − raised peak as printed, within 1 psi.
     expect(head[head.length - 1]).toMatch(

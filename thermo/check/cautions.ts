@@ -86,15 +86,15 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       fillingDensity: num(r.contents.fillingDensity, 'fraction', 'up'),
     });
   // Reached now: the expected pressure, or the same raised by its allowance (relief temperature).
-  if (r.pGauge >= c.reliefSetPressure || r.reliefTemperature === c.T)
+  if (r.pGauge >= c.reliefSetPressureGauge || r.reliefTemperature === c.T)
     add('danger', 'relief-now', {
       pressure: G(r.pGauge, 'up'),
       upper: G(r.pGaugeUpper, 'up'),
-      relief: G(c.reliefSetPressure),
+      relief: G(c.reliefSetPressureGauge),
     });
   if (r.phase === 'supercritical')
     add('warning', 'supercritical-now', { temperature: T(c.T), criticalTemperature: Tc });
-  const readingAbs = c.gaugePressure === null ? null : c.gaugePressure + baro;
+  const readingAbs = c.pressureReadingGauge === null ? null : c.pressureReadingGauge + baro;
   if (
     k.input.product === 'carbon-dioxide' &&
     ((readingAbs !== null && readingAbs < CO2_TRIPLE_POINT_PA) || r.pAbs < CO2_TRIPLE_POINT_PA)
@@ -103,10 +103,10 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       threshold: G(CO2_TRIPLE_POINT_PA - baro),
       tripleAbsolute: num(CO2_TRIPLE_POINT_PA, 'pressure'),
     });
-  const vacuumRead = c.gaugePressure !== null && c.gaugePressure < 0;
+  const vacuumRead = c.pressureReadingGauge !== null && c.pressureReadingGauge < 0;
   if (r.pGauge < 0 || vacuumRead)
     add('warning', 'vacuum', {
-      pressure: G(vacuumRead ? c.gaugePressure! : r.pGauge),
+      pressure: G(vacuumRead ? c.pressureReadingGauge! : r.pGauge),
       source: vacuumRead ? 'reading' : 'expected',
       temperature: T(c.T),
     });
@@ -182,21 +182,21 @@ function peakCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       peak: peakT,
       pressure: G(k.peakRaised, 'up'),
       allowance: num(k.peakAllowance, 'fraction'),
-      design: G(c.designPressure),
+      design: G(c.designPressureGauge),
       over: num(-p.headroomToDesign, 'pressureDifference', 'up'),
     });
   if (p.headroomToRelief < 0)
     add('warning', 'relief-at-peak', {
       peak: peakT,
       pressure: G(k.peakRaised, 'up'),
-      relief: G(c.reliefSetPressure),
+      relief: G(c.reliefSetPressureGauge),
       ...(r.reliefTemperature !== null ? { from: T(r.reliefTemperature, 'down') } : {}),
     });
-  else if (p.headroomToRelief < 0.05 * c.reliefSetPressure)
+  else if (p.headroomToRelief < 0.05 * c.reliefSetPressureGauge)
     add('caution', 'relief-near-at-peak', {
       peak: peakT,
       headroom: num(p.headroomToRelief, 'pressureDifference', 'down'),
-      relief: G(c.reliefSetPressure),
+      relief: G(c.reliefSetPressureGauge),
     });
   if (p.phase === 'supercritical' && p.full === null && r.phase !== 'supercritical')
     add('caution', 'supercritical-at-peak', {
@@ -246,11 +246,11 @@ function readingCautions(r: TankCheckResult, k: CautionContext, add: Add): void 
 
 function noticeCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
   const c = k.clean;
-  if (!c.reliefGiven) add('notice', 'relief-assumed', { design: G(c.designPressure) });
-  if (c.reliefSetPressure > c.designPressure)
+  if (!c.reliefGiven) add('notice', 'relief-assumed', { design: G(c.designPressureGauge) });
+  if (c.reliefSetPressureGauge > c.designPressureGauge)
     add('notice', 'relief-above-design', {
-      relief: G(c.reliefSetPressure),
-      design: G(c.designPressure),
+      relief: G(c.reliefSetPressureGauge),
+      design: G(c.designPressureGauge),
     });
   if (c.specificGravity !== null && Math.abs(c.specificGravity / k.sgModel - 1) > 0.02)
     add('notice', 'sg-differs', {

@@ -37,7 +37,7 @@ const P_STEP = 100;
 
 /** The fields of `TankCheckInput` an `InputError` may name (dotted, as in the input). */
 const INPUT_FIELD =
-  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|gaugePressure|pressureGauge(\.(fullScale|accuracy))?|barometricPressure|elevation|peakTemperature|ruleSet|siteRule(\.(maxFillPercent|maxFillingDensity))?)$/;
+  /^(input|tank(\.[A-Za-z]+(\.[A-Za-z]+)?)?|product(\..*)?|specificGravity|liquidTemperature|contents(\.(gaugePercent|netMass|levelHeight))?|pressureReadingGauge|pressureGauge(\.(fullScaleGauge|accuracy))?|barometricPressureAbs|elevation|peakTemperature|ruleSet|siteRule(\.(maxFillPercent|maxFillingDensity))?)$/;
 
 /** Check a tank. Throws `InputError` (naming the field and its valid range) for bad input only. */
 export function checkTank(input: TankCheckInput): TankCheckResult {
@@ -108,7 +108,7 @@ function check(input: TankCheckInput): TankCheckResult {
   const { liquidFullTemperature, reliefTemperature } = searchTemperatures(model, c, rho, Tlo);
 
   // --- Diagnosis. ---
-  const diagnosis = c.gaugePressure === null ? null : diagnose(model, c, now, lpGas, Tlo);
+  const diagnosis = c.pressureReadingGauge === null ? null : diagnose(model, c, now, lpGas, Tlo);
 
   const result: TankCheckResult = {
     phase: now.phase,
@@ -116,7 +116,7 @@ function check(input: TankCheckInput): TankCheckResult {
     pGauge: ceilTo(now.pAbs - c.baro, P_STEP),
     pAbs: now.pAbs,
     pGaugeUpper: ceilTo(now.pAbs * (1 + pressureAllowance(now, rho, b.rhoc)) - c.baro, P_STEP),
-    barometricPressure: c.baro,
+    barometricPressureAbs: c.baro,
     product: productSummary(b, lpGas, sg, c.specificGravity === null),
     contents: contentsOf(now, c, rho, shape, b.rho60),
     fillLimit,
@@ -154,7 +154,7 @@ function searchTemperatures(model: ProductModel, c: CleanInput, rho: number, Tlo
   const reliefTemperature = findReliefTemperature(
     model,
     rho,
-    c.reliefSetPressure + c.baro,
+    c.reliefSetPressureGauge + c.baro,
     (s) => pressureAllowance(s, rho, rhoc),
     c.T,
     liquidFullTemperature,
@@ -318,7 +318,7 @@ function buildPeak(s: State, c: CleanInput, rho: number, rhoc: number): PeakResu
     pGaugeUpper,
     allowance,
     liquidFraction: s.lf,
-    headroomToDesign: floorTo(c.designPressure - pGaugeUpper, P_STEP),
-    headroomToRelief: floorTo(c.reliefSetPressure - pGaugeUpper, P_STEP),
+    headroomToDesign: floorTo(c.designPressureGauge - pGaugeUpper, P_STEP),
+    headroomToRelief: floorTo(c.reliefSetPressureGauge - pGaugeUpper, P_STEP),
   };
 }

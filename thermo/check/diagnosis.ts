@@ -43,10 +43,10 @@ export function diagnose(
   lpGas: boolean,
   Tlo: number,
 ): DiagnosisResult {
-  const reading = c.gaugePressure!;
+  const reading = c.pressureReadingGauge!;
   const expected = now.pAbs - c.baro;
   const difference = reading - expected;
-  const tolerance = c.accuracy * c.fullScale + MODEL_ALLOWANCE.vapourPressure * now.pAbs;
+  const tolerance = c.accuracy * c.fullScaleGauge + MODEL_ALLOWANCE.vapourPressure * now.pAbs;
   const verdict: DiagnosisResult['verdict'] =
     difference > tolerance ? 'high' : difference < -tolerance ? 'low' : 'fits';
   const readingAbs = reading + c.baro;

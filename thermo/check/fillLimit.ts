@@ -73,7 +73,7 @@ export function computeFillLimit(k: FillLimitContext): FillLimitOutcome {
   const byRelief = k.ruleSet.relief.insulatedCylinderRule;
   const rule4l =
     c.containerClass === 'cylinder' && c.insulated && byRelief
-      ? byRelief(k.product, c.reliefSetPressure)
+      ? byRelief(k.product, c.reliefSetPressureGauge)
       : null;
   const rule =
     rule4l ??

@@ -2,7 +2,7 @@
 import { formatQuantity, type Rounding } from '../units.js';
 
 export function fmtGauge(pa: number, round: Rounding = 'nearest', baro?: number): string {
-  return `${formatQuantity('gaugePressure', pa, 'psig', { decimals: 1, round, barometricPressure: baro })} (${formatQuantity('gaugePressure', pa, 'kPag', { decimals: 0, round, barometricPressure: baro })})`;
+  return `${formatQuantity('gaugePressure', pa, 'psig', { decimals: 1, round, barometricPressureAbs: baro })} (${formatQuantity('gaugePressure', pa, 'kPag', { decimals: 0, round, barometricPressureAbs: baro })})`;
 }
 
 export function fmtAbs(pa: number, round: Rounding = 'nearest'): string {

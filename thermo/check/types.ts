@@ -4,9 +4,10 @@
  *
  * Units: SI everywhere — K, Pa, kg, m³, m, kg/m³. Every pressure of the result says its
  * reference in its name: `pGauge`, `readingGauge`, `expectedGauge` (Pa above the site barometric
- * pressure) or `pAbs` (Pa absolute). Input fields keep the names stored records carry: the
- * tank's `designPressure` and `reliefSetPressure` and the reading `gaugePressure` are gauge,
- * `barometricPressure` is absolute, as each field's comment says.
+ * pressure) or `pAbs` (Pa absolute). Input fields say it the same way, and stored records carry
+ * these names since storage v5: the tank's `designPressureGauge` and `reliefSetPressureGauge`,
+ * the reading `pressureReadingGauge` and the gauge's `fullScaleGauge` are gauge,
+ * `barometricPressureAbs` is absolute.
  * Convert user units with `thermo/units.ts` only.
  */
 import type { Product } from '../product.js';
@@ -25,9 +26,9 @@ export interface TankInput {
   /** Water capacity, m³ (volume of the container; nameplate "W.C." converted from US gal or lb of water). */
   waterCapacity: number;
   /** Design pressure / MAWP, Pa gauge. */
-  designPressure: number;
+  designPressureGauge: number;
   /** Relief-valve start-to-discharge set pressure, Pa gauge. Default: the design pressure. */
-  reliefSetPressure?: number;
+  reliefSetPressureGauge?: number;
   /** Default `aboveground`. */
   placement?: Placement;
   /** Insulated shell (changes the ammonia rule). Default false. */
@@ -67,10 +68,10 @@ export type ContentsInput =
   /** Liquid level height above the tank bottom (inside), m. Needs `tank.shape`. */
   | { levelHeight: number };
 
-/** The pressure gauge that gave `gaugePressure`. */
+/** The pressure gauge that gave `pressureReadingGauge`. */
 export interface PressureGaugeInput {
   /** Full-scale reading, Pa gauge. Default: the tank's design pressure (a gauge reads at least to the MAWP — common practice). */
-  fullScale?: number;
+  fullScaleGauge?: number;
   /** Accuracy as a fraction of full scale. Default 0.02 (±2 % of full scale). */
   accuracy?: number;
 }
@@ -86,11 +87,11 @@ export interface TankCheckInput {
   /** One contents reading. */
   contents: ContentsInput;
   /** Pressure gauge reading now, Pa gauge. Optional; enables the diagnosis. */
-  gaugePressure?: number;
+  pressureReadingGauge?: number;
   /** The gauge's full scale and accuracy (for the diagnosis tolerance). */
   pressureGauge?: PressureGaugeInput;
   /** Site barometric pressure, Pa absolute. Default: from `elevation`, else 101 325 Pa. */
-  barometricPressure?: number;
+  barometricPressureAbs?: number;
   /** Site elevation, m (standard atmosphere), used when no barometric pressure is given. */
   elevation?: number;
   /** Forecast peak liquid temperature, K (the app adds a sun allowance to the peak air temperature). */
@@ -323,7 +324,7 @@ export interface TankCheckResult {
    */
   pGaugeUpper: number;
   /** The barometric pressure used, Pa absolute. */
-  barometricPressure: number;
+  barometricPressureAbs: number;
   product: ProductSummary;
   contents: ContentsResult;
   fillLimit: FillLimitResult;

@@ -14,8 +14,8 @@ import type { ContainerClass, FillMethod, Placement, TankCheckInput } from './ty
 
 export interface CleanInput {
   V: number;
-  designPressure: number;
-  reliefSetPressure: number;
+  designPressureGauge: number;
+  reliefSetPressureGauge: number;
   reliefGiven: boolean;
   placement: Placement;
   insulated: boolean;
@@ -27,8 +27,8 @@ export interface CleanInput {
   T: number;
   Tpeak: number;
   baro: number;
-  gaugePressure: number | null;
-  fullScale: number;
+  pressureReadingGauge: number | null;
+  fullScaleGauge: number;
   accuracy: number;
   specificGravity: number | null;
 }
@@ -66,7 +66,7 @@ export function validateInput(input: TankCheckInput): CleanInput {
     );
   const tank = validateTank(input.tank);
   const site = validateConditions(input);
-  const gauge = validateGauge(input, site.baro, tank.designPressure);
+  const gauge = validateGauge(input, site.baro, tank.designPressureGauge);
   const specificGravity =
     input.specificGravity === undefined
       ? null
@@ -86,8 +86,8 @@ export function validateInput(input: TankCheckInput): CleanInput {
 type TankPart = Pick<
   CleanInput,
   | 'V'
-  | 'designPressure'
-  | 'reliefSetPressure'
+  | 'designPressureGauge'
+  | 'reliefSetPressureGauge'
   | 'reliefGiven'
   | 'placement'
   | 'insulated'
@@ -100,7 +100,7 @@ type TankPart = Pick<
 /** The tank's nameplate and how it is filled. */
 function validateTank(tank: TankCheckInput['tank']): TankPart {
   if (!tank || typeof tank !== 'object')
-    throw new InputError('tank', 'an object { waterCapacity, designPressure, … }', tank);
+    throw new InputError('tank', 'an object { waterCapacity, designPressureGauge, … }', tank);
   const V = num(
     'tank.waterCapacity',
     tank.waterCapacity,
@@ -109,25 +109,25 @@ function validateTank(tank: TankCheckInput['tank']): TankPart {
     'from 0.0001 to 100 000 m³',
     'volume',
   );
-  const designPressure = num(
-    'tank.designPressure',
-    tank.designPressure,
+  const designPressureGauge = num(
+    'tank.designPressureGauge',
+    tank.designPressureGauge,
     1e4,
     1e8,
     'from 10 000 to 100 000 000 Pa gauge',
     'gaugePressure',
   );
-  const reliefGiven = tank.reliefSetPressure !== undefined;
-  const reliefSetPressure = reliefGiven
+  const reliefGiven = tank.reliefSetPressureGauge !== undefined;
+  const reliefSetPressureGauge = reliefGiven
     ? num(
-        'tank.reliefSetPressure',
-        tank.reliefSetPressure,
+        'tank.reliefSetPressureGauge',
+        tank.reliefSetPressureGauge,
         1e4,
         1e8,
         'from 10 000 to 100 000 000 Pa gauge',
         'gaugePressure',
       )
-    : designPressure;
+    : designPressureGauge;
   const placement = tank.placement ?? 'aboveground';
   if (placement !== 'aboveground' && placement !== 'underground')
     throw new InputError('tank.placement', "'aboveground' or 'underground'", placement);
@@ -159,8 +159,8 @@ function validateTank(tank: TankCheckInput['tank']): TankPart {
 
   return {
     V,
-    designPressure,
-    reliefSetPressure,
+    designPressureGauge,
+    reliefSetPressureGauge,
     reliefGiven,
     placement,
     insulated,
@@ -192,10 +192,10 @@ function validateConditions(input: TankCheckInput): Pick<CleanInput, 'T' | 'Tpea
   );
 
   let baro: number;
-  if (input.barometricPressure !== undefined) {
+  if (input.barometricPressureAbs !== undefined) {
     baro = num(
-      'barometricPressure',
-      input.barometricPressure,
+      'barometricPressureAbs',
+      input.barometricPressureAbs,
       20_000,
       120_000,
       'from 20 000 to 120 000 Pa absolute',
@@ -213,14 +213,14 @@ function validateConditions(input: TankCheckInput): Pick<CleanInput, 'T' | 'Tpea
 function validateGauge(
   input: TankCheckInput,
   baro: number,
-  designPressure: number,
-): Pick<CleanInput, 'gaugePressure' | 'fullScale' | 'accuracy'> {
-  const gaugePressure =
-    input.gaugePressure === undefined
+  designPressureGauge: number,
+): Pick<CleanInput, 'pressureReadingGauge' | 'fullScaleGauge' | 'accuracy'> {
+  const pressureReadingGauge =
+    input.pressureReadingGauge === undefined
       ? null
       : num(
-          'gaugePressure',
-          input.gaugePressure,
+          'pressureReadingGauge',
+          input.pressureReadingGauge,
           -baro,
           1e8,
           `from −${Math.round(baro)} Pa (full vacuum at this barometric pressure) to 100 000 000 Pa gauge`,
@@ -228,13 +228,13 @@ function validateGauge(
         );
   const pg = input.pressureGauge;
   if (pg !== undefined && (pg === null || typeof pg !== 'object'))
-    throw new InputError('pressureGauge', 'an object { fullScale?, accuracy? }', pg);
-  const fullScale =
-    pg?.fullScale === undefined
-      ? designPressure
+    throw new InputError('pressureGauge', 'an object { fullScaleGauge?, accuracy? }', pg);
+  const fullScaleGauge =
+    pg?.fullScaleGauge === undefined
+      ? designPressureGauge
       : num(
-          'pressureGauge.fullScale',
-          pg.fullScale,
+          'pressureGauge.fullScaleGauge',
+          pg.fullScaleGauge,
           1e4,
           1e8,
           'from 10 000 to 100 000 000 Pa gauge',
@@ -251,7 +251,7 @@ function validateGauge(
           'a fraction of full scale from 0 to 0.2',
           'fraction',
         );
-  return { gaugePressure, fullScale, accuracy };
+  return { pressureReadingGauge, fullScaleGauge, accuracy };
 }
 
 /** Exactly one way of reading the contents, in its range. */

@@ -121,10 +121,10 @@ function pressureFinding(r: FillReconciliation, k: FindingContext, add: Add): vo
   add(
     'warning',
     'fill-pressure-off-curve',
-    `The pressure after the delivery, ${fmtGauge(p.reading, 'nearest', k.baro)}, is ${p.verdict === 'high' ? 'above' : 'below'} the product's expected ${fmtGauge(p.expected, 'up', k.baro)} by ${fmtDiff(Math.abs(p.difference), 'up')} (more than the ${fmtDiff(p.tolerance)} the gauge and the model allow). A different product from the one on record may have been delivered; the temperature may not have settled, or the pressure gauge may be faulty. Check the delivery ticket's product and follow the site's procedures.`,
+    `The pressure after the delivery, ${fmtGauge(p.readingGauge, 'nearest', k.baro)}, is ${p.verdict === 'high' ? 'above' : 'below'} the product's expected ${fmtGauge(p.expectedGauge, 'up', k.baro)} by ${fmtDiff(Math.abs(p.difference), 'up')} (more than the ${fmtDiff(p.tolerance)} the gauge and the model allow). A different product from the one on record may have been delivered; the temperature may not have settled, or the pressure gauge may be faulty. Check the delivery ticket's product and follow the site's procedures.`,
     {
-      reading: P(p.reading, 'gaugePressure'),
-      expected: P(p.expected, 'gaugePressure'),
+      reading: P(p.readingGauge, 'gaugePressure'),
+      expected: P(p.expectedGauge, 'gaugePressure'),
       difference: P(p.difference, 'pressureDifference'),
       tolerance: P(p.tolerance, 'pressureDifference'),
     },

@@ -103,8 +103,8 @@ function reconcile(c: CleanFill): FillReconciliation {
     overVolume: overMass > 0 ? ceilTo(overMass / satAfter.rhoL, 1e-6) : 0,
     pressure: d
       ? {
-          reading: d.readingGauge,
-          expected: d.expectedGauge,
+          readingGauge: d.readingGauge,
+          expectedGauge: d.expectedGauge,
           difference: d.difference,
           tolerance: d.tolerance,
           verdict: d.verdict,
@@ -116,7 +116,7 @@ function reconcile(c: CleanFill): FillReconciliation {
     before,
     interrupted: c.interrupted,
     volume: c.volume,
-    baro: expected.barometricPressure,
+    baro: expected.barometricPressureAbs,
   });
   return result;
 }
@@ -179,7 +179,7 @@ function saturationAt(check: TankCheckInput, T: number, field: string): Sat {
 /** The check's fields as the fill names them. */
 const FIELD: Record<string, string> = {
   liquidTemperature: 'after.liquidTemperature',
-  gaugePressure: 'after.gaugePressure',
+  pressureReadingGauge: 'after.pressureReadingGauge',
   'contents.netMass': 'delivered.volume',
 };
 
@@ -194,8 +194,8 @@ function expectedCheck(c: CleanFill, mass: number, rhoRef: number): TankCheckRes
     // before the delivery.
     peakTemperature: Math.max(c.start.check.peakTemperature, c.start.before.liquidTemperature),
   };
-  delete input.gaugePressure;
-  if (c.afterPressure !== null) input.gaugePressure = c.afterPressure;
+  delete input.pressureReadingGauge;
+  if (c.afterPressureGauge !== null) input.pressureReadingGauge = c.afterPressureGauge;
   try {
     return checkTank(input);
   } catch (e) {
@@ -240,8 +240,8 @@ function renamed(e: InputError, c: CleanFill, rhoRef: number | null): InputError
   const got =
     field === 'after.liquidTemperature'
       ? c.afterTemperature
-      : field === 'after.gaugePressure'
-        ? (c.afterPressure ?? undefined)
+      : field === 'after.pressureReadingGauge'
+        ? (c.afterPressureGauge ?? undefined)
         : undefined;
   return new InputError(field, e.validRange, got, e.limits);
 }

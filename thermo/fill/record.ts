@@ -120,7 +120,7 @@ function validateResult(r: unknown, f: string): asserts r is FillReconciliation 
   if (r.pressure !== null) {
     const p = r.pressure;
     if (!isObject(p)) throw new InputError(`${f}.pressure`, 'null or the pressure comparison', p);
-    for (const k of ['reading', 'expected', 'difference', 'tolerance'] as const)
+    for (const k of ['readingGauge', 'expectedGauge', 'difference', 'tolerance'] as const)
       num(`${f}.pressure.${k}`, p[k], -BIG, BIG, FINITE);
     oneOf(`${f}.pressure.verdict`, p.verdict, ['fits', 'high', 'low']);
   }

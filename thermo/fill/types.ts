@@ -70,7 +70,7 @@ export interface AfterReadings {
   /** Liquid temperature after, K. Default: the temperature before. */
   liquidTemperature?: number;
   /** Pressure gauge reading after, Pa gauge. Optional; enables the product check. */
-  gaugePressure?: number;
+  pressureReadingGauge?: number;
 }
 
 /** The stated accuracy of the instruments (see `FILL_ACCURACY_DEFAULTS` for the defaults and their basis). */
@@ -168,8 +168,10 @@ export interface FillReconciliation {
   overVolume: number;
   /** The after pressure against the product's expected pressure, when a pressure was entered. */
   pressure: {
-    reading: number;
-    expected: number;
+    /** The after reading, Pa gauge. */
+    readingGauge: number;
+    /** The product's pressure at the after temperature, Pa gauge. */
+    expectedGauge: number;
     difference: number;
     tolerance: number;
     verdict: 'fits' | 'high' | 'low';

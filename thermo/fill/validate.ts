@@ -22,7 +22,7 @@ export interface CleanFill {
   interrupted: boolean;
   afterGauge: number;
   afterTemperature: number;
-  afterPressure: number | null;
+  afterPressureGauge: number | null;
   gaugePoints: number;
   meterFraction: number;
 }
@@ -78,7 +78,7 @@ export function validateFillInput(input: FillInput): CleanFill {
   if (!isObject(a))
     throw new InputError(
       'after',
-      'an object { gaugePercent, liquidTemperature?, gaugePressure? }',
+      'an object { gaugePercent, liquidTemperature?, pressureReadingGauge? }',
       a,
     );
   const afterGauge = num('after.gaugePercent', a.gaugePercent, 0, 100, 'a percent from 0 to 100');
@@ -87,12 +87,12 @@ export function validateFillInput(input: FillInput): CleanFill {
       ? start.before.liquidTemperature
       : temperature('after.liquidTemperature', a.liquidTemperature);
   // The range of a gauge pressure is the check's (it knows the site's barometer).
-  const afterPressure =
-    a.gaugePressure === undefined
+  const afterPressureGauge =
+    a.pressureReadingGauge === undefined
       ? null
       : num(
-          'after.gaugePressure',
-          a.gaugePressure,
+          'after.pressureReadingGauge',
+          a.pressureReadingGauge,
           -120_000,
           1e8,
           'from −120 000 to 100 000 000 Pa gauge',
@@ -107,7 +107,7 @@ export function validateFillInput(input: FillInput): CleanFill {
     interrupted: d.interrupted === true,
     afterGauge,
     afterTemperature,
-    afterPressure,
+    afterPressureGauge,
     gaugePoints,
     meterFraction,
   };

@@ -18,16 +18,16 @@ export const DOT_4L_PERCENT: Record<'carbon-dioxide' | 'nitrous-oxide', readonly
 const PSI_PA = 6894.757293168;
 
 /**
- * The DOT-4L rule for `product` with a relief set at `reliefSetPressure` (Pa gauge), or null when
+ * The DOT-4L rule for `product` with a relief set at `reliefSetPressureGauge` (Pa gauge), or null when
  * the product or setting is outside the table. A setting between two columns takes the column of
  * the next higher setting: a higher setting lets the liquid warm and swell further before the
  * valve opens, so that column is the cautious one. Figures as printed.
  */
-export function dot4lRule(product: Product, reliefSetPressure: number): RuleChoice | null {
+export function dot4lRule(product: Product, reliefSetPressureGauge: number): RuleChoice | null {
   const ids = productIds(product);
   const id = ids && ids.length === 1 ? ids[0]!.id : null;
   if (id !== 'carbon-dioxide' && id !== 'nitrous-oxide') return null;
-  const psig = reliefSetPressure / PSI_PA;
+  const psig = reliefSetPressureGauge / PSI_PA;
   const col = DOT_4L_RELIEF_PSIG.findIndex((s) => psig <= s + 1e-6);
   if (col < 0) return null;
   const pct = DOT_4L_PERCENT[id][col]!;

@@ -81,7 +81,7 @@ export interface ReliefRangeEntry {
 /** A weight rule chosen by the relief setting (e.g. refrigerated liquid in an insulated cylinder). */
 export type ReliefRuleHook = (
   product: Product,
-  reliefSetPressure: number,
+  reliefSetPressureGauge: number,
 ) => { id: string; description: string; citation: string; fillingDensity: number } | null;
 
 export interface RuleSet {

@@ -23,7 +23,7 @@ const wcLb = (x: number) => (x * LB_KG) / WATER_FD_KG_M3;
 // by weight: only the weight column applies, Table H-27 aboveground small, SG 0.504–0.510: 42 %.
 function byWeight(over: Partial<TankCheckInput> = {}): TankCheckInput {
   return {
-    tank: { waterCapacity: wcLb(4200), designPressure: psig(250), fillMethod: 'weight' },
+    tank: { waterCapacity: wcLb(4200), designPressureGauge: psig(250), fillMethod: 'weight' },
     product: 'propane',
     liquidTemperature: 288.15,
     contents: { gaugePercent: 30 },
@@ -93,7 +93,7 @@ describe('site rule: a maximum fill percent by volume', () => {
   it('80 % on a 1,000 US gal tank filled by gauge: V × (0.8 ρL + 0.2 ρV), stop at 80.0', () => {
     const V = toSI('volume', 1000, 'usgal');
     const r = checkTank({
-      tank: { waterCapacity: V, designPressure: psig(250) },
+      tank: { waterCapacity: V, designPressureGauge: psig(250) },
       product: 'propane',
       liquidTemperature: 288.15,
       contents: { gaugePercent: 40 },
@@ -130,7 +130,7 @@ describe('site rule: a maximum fill percent by volume', () => {
   });
   it('a looser 95 % does not bind (the LP-gas volume limit at 15 °C is about 83 %)', () => {
     const fl = checkTank({
-      tank: { waterCapacity: toSI('volume', 1000, 'usgal'), designPressure: psig(250) },
+      tank: { waterCapacity: toSI('volume', 1000, 'usgal'), designPressureGauge: psig(250) },
       product: 'propane',
       liquidTemperature: 288.15,
       contents: { gaugePercent: 40 },

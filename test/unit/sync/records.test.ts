@@ -26,9 +26,9 @@ describe('invented sync records', () => {
   });
 
   it('a record the import refuses is refused here too (the check is not vacuous)', () => {
-    const bad = tank('t3', { nameplate: { waterCapacity: 1.9, designPressure: 5 } });
+    const bad = tank('t3', { nameplate: { waterCapacity: 1.9, designPressureGauge: 5 } });
     expect(validateSyncDoc({ _id: 'tank:t3', v: 1, kind: 'tank', record: bad })).toMatch(
-      /designPressure|pressure/i,
+      /designPressureGauge|pressure/i,
     );
   });
 });

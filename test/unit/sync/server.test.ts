@@ -10,6 +10,8 @@ import { startSyncServer } from '../../../scripts/sync/server.mjs';
 import { setupTeam } from '../../../scripts/sync/team-setup.mjs';
 import { parseBackup } from '../../../pwa/backup.js';
 import { tank } from './records.js';
+import { oldTank } from '../../pwa/fixtures/old-names.js';
+import { NAMED_TANK } from '../../pwa/fixtures/named-records.js';
 import { PouchDB, memoryPouch } from './memory.js';
 
 let server: { url: string; close: () => Promise<void> };
@@ -38,7 +40,7 @@ const importRefusal = (t: unknown) =>
   parseBackup(
     JSON.stringify({
       format: 'tankside-backup',
-      version: 2,
+      version: 3,
       exportedAt: '2026-06-01T00:00:00Z',
       tanks: [t],
       checks: [],
@@ -76,7 +78,7 @@ describe('team server', () => {
   });
 
   it('refuses a malformed record with the reason the backup import gives', async () => {
-    const bad = tank('t2', { nameplate: { waterCapacity: 1.9, designPressure: 5 } });
+    const bad = tank('t2', { nameplate: { waterCapacity: 1.9, designPressureGauge: 5 } });
     const verdict = importRefusal(bad);
     expect(verdict.ok).toBe(false);
     const r = await put(await login('ann', 'ann-pass'), {
@@ -86,10 +88,22 @@ describe('team server', () => {
       record: bad,
     } as never);
     expect(r.status).toBe(403);
-    expect(r.body.reason).toContain('“designPressure” must be a number from 10000 to 100000000');
-    expect(verdict.ok ? '' : verdict.reason).toContain(
-      '“designPressure” must be a number from 10000 to 100000000',
+    expect(r.body.reason).toContain(
+      '“designPressureGauge” must be a number from 10000 to 100000000',
     );
+    expect(verdict.ok ? '' : verdict.reason).toContain(
+      '“designPressureGauge” must be a number from 10000 to 100000000',
+    );
+  });
+
+  it('takes a record under the old pressure names from a teammate whose app is older', async () => {
+    const r = await put(await login('bob', 'bob-pass'), {
+      _id: `tank:${NAMED_TANK.id}`,
+      v: 1,
+      kind: 'tank',
+      record: oldTank(NAMED_TANK),
+    } as never);
+    expect(r.status).toBe(201);
   });
 
   it('refuses a document whose id does not match its record', async () => {
