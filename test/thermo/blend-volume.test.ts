@@ -6,7 +6,7 @@
  * R-410A, R-404A, R-407C; Bell 2023, J. Phys. Chem. Ref. Data 52, 013101 for R-454B).
  */
 import { describe, it } from 'vitest';
-import { resolveProduct } from '../../thermo/product.js';
+import { resolveProduct, type Product } from '../../thermo/product.js';
 import { mixtureAtT, phaseAt, saturationPressure } from '../../thermo/solvers/mixture.js';
 import { pureVolume } from '../../thermo/solvers/pure.js';
 import { checkClose } from '../helpers/check.js';
@@ -39,7 +39,7 @@ describe('mixtureModelVolume', () => {
     ],
     ['R-32 in R-410A (fitted volume excesses)', 'r410a', 0],
     ['R-125 in R-410A', 'r410a', 1],
-  ] as const)(
+  ] as [string, Product, number][])(
     'a blend reduced to %s has the pure fluid’s volume, liquid and vapour',
     (_, prod, k) => {
       const r = resolveProduct(prod);
