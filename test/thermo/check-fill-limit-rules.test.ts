@@ -77,6 +77,9 @@ describe('refrigerated CO2 in a cargo tank: a volume-only rule (49 CFR 173.315(c
     expect(r.fillLimit.binding).toBe('refrigerated-95-volume');
     expect(r.fillLimit.stopAtGaugePercent).toBe(95);
     expect(codes(r)).not.toContain('no-filling-rule');
+    expect(r.fillLimit.bindingNote).toBe(
+      'The rule’s volume limit at this temperature binds: 95 % by volume; 49 CFR 173.315(c)(1).',
+    );
   });
   it('past the critical temperature there is no level: the volume figure is not applied', () => {
     const r = co2(tank, {
@@ -118,6 +121,20 @@ describe('LP-gas DOT cargo tank with a fixed gauge (FACTS.md case 5; 49 CFR 173.
       kind: 'published',
     });
     expect(r.fillLimit.stopAtFixedGauge).toBe(true);
+    // the gauge setting is the only figure by volume here
+    const g = r.fillLimit.limits.find((l) => l.kind === 'gauge-setting')!;
+    expect(r.fillLimit.volumetricMaxPercent).toBe(g.gaugePercent);
+  });
+  it('a weight rule alone is a rule found: ammonia filled by weight has no "no rule" warning', () => {
+    const r = checkTank({
+      tank: { waterCapacity: gal(1000), designPressure: psig(265), fillMethod: 'weight' },
+      product: 'ammonia',
+      liquidTemperature: F(60),
+      contents: { gaugePercent: 30 },
+      peakTemperature: F(60),
+    });
+    expect(r.fillLimit.binding).toBe('nh3-storage-aboveground');
+    expect(codes(r)).not.toContain('no-filling-rule');
   });
 });
 

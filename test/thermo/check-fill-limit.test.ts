@@ -136,7 +136,10 @@ describe('propane at 288.15 K, 1,000 US gal, Table H-27 42 %', () => {
       source: CORE,
       kind: 'identity',
     });
-    expect(p.description).toContain('forecast peak');
+    expect(p.description).toBe(
+      'The tank must not become liquid-full at the forecast peak liquid temperature',
+    );
+    expect(p.citation).toContain('49 CFR 173.304(b)');
   });
 
   it('room left as liquid now, at 60 °F and at 15 °C: mass ÷ the saturated liquid density there', () => {
