@@ -127,7 +127,7 @@ describe('LP-gas DOT cargo tank with a fixed gauge (FACTS.md case 5; 49 CFR 173.
   });
   it('a weight rule alone is a rule found: ammonia filled by weight has no "no rule" warning', () => {
     const r = checkTank({
-      tank: { waterCapacity: gal(1000), designPressure: psig(265), fillMethod: 'weight' },
+      tank: { waterCapacity: gal(1000), designPressureGauge: psig(265), fillMethod: 'weight' },
       product: 'ammonia',
       liquidTemperature: F(60),
       contents: { gaugePercent: 30 },

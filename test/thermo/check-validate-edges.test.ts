@@ -178,13 +178,13 @@ describe('validateInput: every numeric field at and just past its edges', () => 
     ).toBe(-baro);
     expect(validateInput(base({ pressureReadingGauge: 1e8 })).pressureReadingGauge).toBe(1e8);
     const e = refusal(base({ barometricPressureAbs: baro, pressureReadingGauge: below(-baro) }));
-    expect(e.field).toBe('gaugePressure');
+    expect(e.field).toBe('pressureReadingGauge');
     expect(e.validRange).toBe(
       'from −90000 Pa (full vacuum at this barometric pressure) to 100 000 000 Pa gauge',
     );
     expect(e.limits).toEqual({ min: -baro, max: 1e8, quantity: 'gaugePressure' });
-    expect(refusal(base({ pressureReadingGauge: above(1e8) })).field).toBe('gaugePressure');
-    expect(refusal(base({ pressureReadingGauge: Number.NaN })).field).toBe('gaugePressure');
+    expect(refusal(base({ pressureReadingGauge: above(1e8) })).field).toBe('pressureReadingGauge');
+    expect(refusal(base({ pressureReadingGauge: Number.NaN })).field).toBe('pressureReadingGauge');
   });
 });
 
@@ -273,12 +273,12 @@ describe('validateInput: choices and shapes refused with the field and what is a
     [
       'pressureGauge',
       { pressureGauge: null as unknown as TankCheckInput['pressureGauge'] },
-      'an object { fullScale?, accuracy? }',
+      'an object { fullScaleGauge?, accuracy? }',
     ],
     [
       'pressureGauge',
       { pressureGauge: 5 as unknown as TankCheckInput['pressureGauge'] },
-      'an object { fullScale?, accuracy? }',
+      'an object { fullScaleGauge?, accuracy? }',
     ],
     [
       'contents',
