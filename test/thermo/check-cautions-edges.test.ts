@@ -23,7 +23,12 @@ const find = (r: TankCheckResult, code: string) => r.cautions.find((c) => c.code
 
 function propane(over: Partial<TankCheckInput> = {}, tank: Partial<TankCheckInput['tank']> = {}) {
   return checkTank({
-    tank: { waterCapacity: V, designPressureGauge: psig(250), reliefSetPressureGauge: psig(250), ...tank },
+    tank: {
+      waterCapacity: V,
+      designPressureGauge: psig(250),
+      reliefSetPressureGauge: psig(250),
+      ...tank,
+    },
     product: 'propane',
     liquidTemperature: F(60),
     contents: { gaugePercent: 50 },

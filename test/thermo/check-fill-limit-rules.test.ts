@@ -54,7 +54,11 @@ describe('CO2: a DOT-4L cylinder is an insulated cylinder (49 CFR 173.304a(e)(2)
     });
   });
   it('insulated but not a cylinder: no DOT-4L rule, and no table rule at all', () => {
-    const r = co2({ insulated: true, reliefSetPressureGauge: psig(300), containerClass: 'storage' });
+    const r = co2({
+      insulated: true,
+      reliefSetPressureGauge: psig(300),
+      containerClass: 'storage',
+    });
     expect(r.fillLimit.limits.map((l) => l.id)).not.toContain('dot-4l');
     expect(r.fillLimit.binding).toBe('not-liquid-full-at-peak');
     expect(codes(r)).toContain('no-filling-rule');

@@ -174,7 +174,8 @@ describe('validateInput: every numeric field at and just past its edges', () => 
   it('a gauge reading is bounded below by a full vacuum at this site’s barometric pressure', () => {
     const baro = 90_000;
     expect(
-      validateInput(base({ barometricPressureAbs: baro, pressureReadingGauge: -baro })).pressureReadingGauge,
+      validateInput(base({ barometricPressureAbs: baro, pressureReadingGauge: -baro }))
+        .pressureReadingGauge,
     ).toBe(-baro);
     expect(validateInput(base({ pressureReadingGauge: 1e8 })).pressureReadingGauge).toBe(1e8);
     const e = refusal(base({ barometricPressureAbs: baro, pressureReadingGauge: below(-baro) }));
@@ -217,7 +218,9 @@ describe('validateInput: defaults as TankCheckInput documents them (thermo/check
   it('the barometric pressure: as given, else from the elevation, else one standard atmosphere', () => {
     // 1 atm = 101 325 Pa (definition; NIST SP 811, Appendix B).
     expect(validateInput(base()).baro).toBe(101_325);
-    expect(validateInput(base({ barometricPressureAbs: 95_000, elevation: 3000 })).baro).toBe(95_000);
+    expect(validateInput(base({ barometricPressureAbs: 95_000, elevation: 3000 })).baro).toBe(
+      95_000,
+    );
     // U.S. Standard Atmosphere 1976, Table I: 89 875 Pa at 1 000 m geopotential altitude.
     expectRel(validateInput(base({ elevation: 1000 })).baro, 89_875, 1e-3, {
       input: 'elevation 1000 m',
