@@ -16,6 +16,8 @@ describe('the kept tank list', () => {
     const found = (text: string) =>
       page.locator('[data-testid="tank-found"]', { hasText: text }).waitFor();
     await byTestId(page, 'tank-item').first().waitFor();
+    // The whole register is in once the count shows (not "Reading the rest of the register…").
+    await page.locator('[data-testid="tank-found"]', { hasText: /\d+ tanks\./ }).waitFor();
     const total = Number((await byTestId(page, 'tank-found').textContent())!.match(/\d+/)![0]);
 
     // A search, a visit to the tank found, back: the search and its one match are still there.
