@@ -95,6 +95,15 @@ export const checkResultsStyles = css`
   section {
     margin-bottom: 1rem;
   }
+  /* While the user types at the top of a phone screen, the cards and sections below it are
+     off screen: the browser then neither lays them out nor paints them (their last size is kept,
+     so the page does not jump), which keeps a keystroke's frame short. Their text stays in the
+     page for screen readers and find-in-page; print shows them all. */
+  .card,
+  section {
+    content-visibility: auto;
+    contain-intrinsic-block-size: auto 12rem;
+  }
   .missing {
     border: var(--border-width) dashed var(--ink);
     border-radius: 0.5rem;
@@ -106,6 +115,10 @@ export const checkResultsStyles = css`
     .cautions li,
     .standing {
       break-inside: avoid;
+    }
+    .card,
+    section {
+      content-visibility: visible;
     }
   }
 `;

@@ -73,6 +73,15 @@ export const checkScreenStyles = css`
     font-weight: 700;
     background: var(--paper-2);
   }
+  /* Off screen while the readings are typed: skipped in layout and paint (see
+     check-results-styles.ts). */
+  check-chart,
+  check-history,
+  fill-history {
+    display: block;
+    content-visibility: auto;
+    contain-intrinsic-block-size: auto 16rem;
+  }
   .print-only {
     display: none;
   }
@@ -90,6 +99,10 @@ export const checkScreenStyles = css`
     .actions,
     .keybar {
       display: none;
+    }
+    check-chart,
+    fill-history {
+      content-visibility: visible;
     }
   }
 `;
