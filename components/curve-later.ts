@@ -7,8 +7,12 @@ import { curveFor } from './chart-client.js';
 import type { CheckOutcome } from './check-input.js';
 import { productFor } from './products.js';
 
-/** Wait after the last edit before the chart is redrawn, ms. */
-export const CHART_DELAY_MS = 150;
+/**
+ * Wait after the last edit before the chart is redrawn, ms: a pause in typing (the gap between
+ * keystrokes is typically 150–300 ms), so the chart's work never lands between two keys and
+ * delays the second one's figures. The same pause as the draft's write (pwa/drafts.ts).
+ */
+export const CHART_DELAY_MS = 400;
 
 /**
  * Calls `done` with the series of `outcome` (null: no chart) after CHART_DELAY_MS; the returned

@@ -43,8 +43,18 @@ export const NUMBER_FORMAT_LABELS: Record<NumberFormatId, string> = {
   'comma-space': '12 345,6',
 };
 
+/** Formats found per locale tag (building an Intl formatter is slow on a phone). */
+const localeFormats = new Map<string, NumberFormat>();
+
 /** The decimal mark and group separator a locale uses (via Intl), as one of our formats. */
 export function formatOfLocale(locale: string | undefined): NumberFormat {
+  const key = locale ?? '';
+  let fmt = localeFormats.get(key);
+  if (fmt === undefined) localeFormats.set(key, (fmt = readLocaleFormat(locale)));
+  return fmt;
+}
+
+function readLocaleFormat(locale: string | undefined): NumberFormat {
   let decimal = '.';
   let group = ',';
   try {
