@@ -131,6 +131,7 @@ describe('rachfordRiceSteps', () => {
     ['wide K (900 and 0.1), a trace of vapour', [0.001, 0.999], [0.9, 0.1], 0.001],
     ['ternary, a trace of liquid', [0.001, 0.009, 0.99], [0.9, 0.09, 0.01], 0.999],
     ['K of 99 and 0.01, a trace of liquid', [0.01, 0.99], [0.99, 0.01], 0.9995],
+    ['K of 1.5 and 0.1, mostly vapour', [9 / 14, 5 / 14], [27 / 28, 1 / 28], 0.9],
   ] as const)('recovers β of phases chosen by hand in few steps (%s)', (_, x, y, beta) => {
     // z = (1 − β)x + βy and K = y/x define a problem whose root is β (mass balance).
     const z = x.map((xi, i) => (1 - beta) * xi + beta * y[i]!);
@@ -156,6 +157,13 @@ describe('rachfordRiceSteps', () => {
     // Σz(K − 1) ≤ 0: all liquid; Σz(1 − 1/K) ≥ 0: all vapour (the two limits of the sum).
     expect(rachfordRiceSteps([0.5, 0.5], [0.5, 0.8])).toEqual({ beta: 0, iterations: 0 });
     expect(rachfordRiceSteps([0.5, 0.5], [2, 3])).toEqual({ beta: 1, iterations: 0 });
+    // Exactly at the limits (sums exact in binary): Σz(K − 1) = 0.5·0.5 − 0.5·0.5 = 0 is the
+    // bubble point, Σz(1 − 1/K) = 0.5·0.5 − 0.25·1 + 0 = 0 the dew point.
+    expect(rachfordRiceSteps([0.5, 0.5], [1.5, 0.5])).toEqual({ beta: 0, iterations: 0 });
+    expect(rachfordRiceSteps([0.5, 0.25, 0.25], [2, 0.5, 1])).toEqual({
+      beta: 1,
+      iterations: 0,
+    });
   });
 });
 

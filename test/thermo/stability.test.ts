@@ -176,6 +176,20 @@ describe('stabilityTest where both trial phases split the feed', () => {
   });
 });
 
+describe('stabilityTest where a trial phase converges slowly', () => {
+  it('at 401 K, 4.20 MPa (near the critical point) each trial stops at its 200-step cap', () => {
+    // Substitution converges linearly with a ratio that tends to 1 at the critical point; the
+    // documented cap bounds the work at 2 × 200 steps, and the finished trial still decides.
+    const r = product('binary');
+    const p = 4.2e6;
+    const mx = mixtureAtT(r, 401);
+    const s = stabilityTest(mx, r.z, p);
+    expect(s.iterations).toBeLessThanOrEqual(400);
+    expect(s.stable).toBe(false);
+    expectStationaryTrial(mx, r.z, p, s.K!, s.tm);
+  });
+});
+
 describe('stabilityTest mid-envelope and for a pure fluid', () => {
   it.each([
     ['binary', 300, 0.2],
