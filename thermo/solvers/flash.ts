@@ -11,26 +11,31 @@ import { wilsonK } from './wilson.js';
  * when the feed lies outside the two-phase window of these K (then one phase is implied).
  */
 export function rachfordRice(z: ArrayLike<number>, K: ArrayLike<number>): number {
+  return rachfordRiceSteps(z, K).beta;
+}
+
+/**
+ * Rachford–Rice as above, with the number of passes (Newton or bisection steps; 0 when β is
+ * clipped, 101 if the cap of 100 was hit). For positive K the poles 1/(1 − K_i) lie outside
+ * [0, 1], so [0, 1] itself is the bracket: the sum falls monotonically from f(0) > 0 to f(1) < 0.
+ */
+export function rachfordRiceSteps(
+  z: ArrayLike<number>,
+  K: ArrayLike<number>,
+): { beta: number; iterations: number } {
   const n = z.length;
-  let kmin = Infinity;
-  let kmax = -Infinity;
-  for (let i = 0; i < n; i++) {
-    kmin = Math.min(kmin, K[i]!);
-    kmax = Math.max(kmax, K[i]!);
-  }
   const f = (beta: number) => {
     let s = 0;
     for (let i = 0; i < n; i++) s += (z[i]! * (K[i]! - 1)) / (1 + beta * (K[i]! - 1));
     return s;
   };
-  if (f(0) <= 0) return 0;
-  if (f(1) >= 0) return 1;
-  let lo = kmax > 1 ? 1 / (1 - kmax) : 0;
-  let hi = kmin < 1 ? 1 / (1 - kmin) : 1;
-  lo = Math.max(lo, 0);
-  hi = Math.min(hi, 1);
-  let beta = 0.5 * (lo + hi);
-  for (let it = 0; it < 100; it++) {
+  if (f(0) <= 0) return { beta: 0, iterations: 0 };
+  if (f(1) >= 0) return { beta: 1, iterations: 0 };
+  let lo = 0;
+  let hi = 1;
+  let beta = 0.5;
+  let it = 1;
+  for (; it <= 100; it++) {
     let fv = 0;
     let df = 0;
     for (let i = 0; i < n; i++) {
@@ -39,14 +44,14 @@ export function rachfordRice(z: ArrayLike<number>, K: ArrayLike<number>): number
       fv += (z[i]! * d) / den;
       df -= (z[i]! * d * d) / (den * den);
     }
+    const step = fv / df;
+    if (Math.abs(step) < 1e-15) break;
     if (fv > 0) lo = beta;
     else hi = beta;
-    let next = beta - fv / df;
-    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (Math.abs(next - beta) < 1e-15) return next;
-    beta = next;
+    const next = beta - step;
+    beta = next > lo && next < hi ? next : 0.5 * (lo + hi);
   }
-  return beta;
+  return { beta, iterations: it };
 }
 
 export interface FlashResult extends SolverReport {
