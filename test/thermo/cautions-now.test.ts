@@ -290,8 +290,6 @@ describe('cold metal: the minimum design metal temperature (FACTS.md section e)'
       source: FACTS('section e (n-butane at 1 atm at 31.1 °F [EOS])'),
       kind: 'published',
     });
-    expect(codes(cold(40, 30, 'n-butane'))).not.toContain(
-      'autorefrigeration-below-mdmt',
-    );
+    expect(codes(cold(40, 30, 'n-butane'))).not.toContain('autorefrigeration-below-mdmt');
   });
 });

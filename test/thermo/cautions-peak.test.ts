@@ -261,9 +261,9 @@ describe('pressure at the peak against the design and relief settings (FACTS.md 
     expect(codes(r)).not.toContain('relief-near-at-peak');
     const up = hot({ reliefSetPressureGauge: p + 100 }, 115);
     expect(codes(up)).not.toContain('relief-at-peak');
-    expect(param(caution(up, 'relief-near-at-peak'), 'headroom', 'pressureDifference', 'down')).toBe(
-      100,
-    );
+    expect(
+      param(caution(up, 'relief-near-at-peak'), 'headroom', 'pressureDifference', 'down'),
+    ).toBe(100);
   });
   it('relief 220 psig at a 115 °F peak (213.4 psig): little headroom, under 5 %', () => {
     const c = caution(hot({ reliefSetPressureGauge: psig(220) }, 115), 'relief-near-at-peak');
@@ -277,7 +277,12 @@ describe('pressure at the peak against the design and relief settings (FACTS.md 
       param(c, 'headroom', 'pressureDifference', 'down'),
       psig(220) + 101_325 - psia(228.1) * 1.005,
       psi(1.2),
-      { input: 'relief 220 psig, 115 °F', source: `${SAT}; ${FACTS(8)}`, kind: 'published', why: VP },
+      {
+        input: 'relief 220 psig, 115 °F',
+        source: `${SAT}; ${FACTS(8)}`,
+        kind: 'published',
+        why: VP,
+      },
     );
   });
   it('the 5 % edge: headroom just under 5 % of the setting is little, just over is not', () => {
@@ -314,12 +319,17 @@ describe('supercritical at the peak, and a small vapour space', () => {
     expectHeadline(c, 'liquidFraction');
     const rho = 0.42 * WATER_WEIGHT_KG_M3;
     // saturated liquid 428.0, vapour 49.49 kg/m³ at 140 °F
-    expectWithin(param(c, 'liquidFraction', 'fraction', 'up'), (rho - 49.49) / (428 - 49.49), 0.01, {
-      input: '42 %, 140 °F',
-      source: `${SAT}; lever rule`,
-      kind: 'published',
-      why: 'densities within 0.5 %: about 0.6 % in the share',
-    });
+    expectWithin(
+      param(c, 'liquidFraction', 'fraction', 'up'),
+      (rho - 49.49) / (428 - 49.49),
+      0.01,
+      {
+        input: '42 %, 140 °F',
+        source: `${SAT}; lever rule`,
+        kind: 'published',
+        why: 'densities within 0.5 %: about 0.6 % in the share',
+      },
+    );
   });
   it('at 120 °F the lever rule gives 92.3 % (451.0 and 37.59 kg/m³): no caution', () => {
     expect(codes(full42(F(120)))).not.toContain('small-vapour-space-at-peak');
