@@ -148,6 +148,8 @@ describe('liquid-full at or near the peak (FACTS.md case 11: 42 % propane full a
     });
     expect(codes(r)).not.toContain('liquid-full-near-peak');
     expect(codes(r)).not.toContain('dense-fluid-at-peak');
+    // liquid-full is no vapour space at all, said by the danger, not as a small one
+    expect(codes(r)).not.toContain('small-vapour-space-at-peak');
   });
   it('a peak 4.9 K below it: a warning with the 5 K margin; 5.1 K below: none', () => {
     const Tf = full42(F(100)).liquidFullTemperature!;

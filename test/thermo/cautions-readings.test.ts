@@ -240,6 +240,9 @@ describe('notices on the nameplate', () => {
       why: 'the README bubble-pressure target, 2 %',
     });
     expect(codes(propane())).not.toContain('blend-bubble-point');
+    // it has a liquid-full temperature (343 K), so nothing is said about one beyond the model
+    expect(r.liquidFullTemperature).not.toBeNull();
+    expect(codes(r)).not.toContain('liquid-full-beyond-model');
   });
 });
 
