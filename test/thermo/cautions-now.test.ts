@@ -221,6 +221,29 @@ describe('vacuum: n-butane is at 0 psig at 31.1 °F (FACTS.md section e, case 14
   it('at 40 °F it is expected at +2.96 psig: no vacuum', () => {
     expect(codes(butane(40))).not.toContain('vacuum');
   });
+  it('expected exactly at the air pressure (0 psig) is not a vacuum; 150 Pa below it is', () => {
+    // near 31.1 °F n-butane's vapour pressure is about one atmosphere; a barometer reading equal
+    // to it puts the expected pressure at 0 gauge
+    const first = butane(31);
+    expectWithin(first.pAbs, 101_325, 1000, {
+      input: 'n-butane, 31 °F',
+      source: FACTS('section e (1 atm at 31.1 °F)'),
+      kind: 'published',
+    });
+    const at = (baro: number) =>
+      checkTank({
+        tank: { waterCapacity: V1000, designPressureGauge: psig(250) },
+        product: 'n-butane',
+        liquidTemperature: F(31),
+        contents: { gaugePercent: 50 },
+        peakTemperature: F(31),
+        barometricPressureAbs: baro,
+      });
+    const zero = at(first.pAbs);
+    expect(zero.pGauge === 0).toBe(true); // 0 or −0
+    expect(codes(zero)).not.toContain('vacuum');
+    expect(codes(at(first.pAbs + 150))).toContain('vacuum');
+  });
   it('a reading below zero is what it shows, even where a vacuum is expected', () => {
     const c = caution(butane(20, -500), 'vacuum');
     expect(c.params['source']).toBe('reading');

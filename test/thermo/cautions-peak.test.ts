@@ -202,6 +202,9 @@ describe('liquid-full at or near the peak (FACTS.md case 11: 42 % propane full a
     // the check searches up to 400 K, below n-butane's 425.1 K and isobutane's 407.8 K critical
     // temperatures (test/reference/fluids.csv)
     expect(param(c, 'top', 'temperature', 'down')).toBe(400);
+    // and with no liquid-full temperature there is none near the peak either
+    expect(codes(r)).not.toContain('liquid-full-near-peak');
+    expect(codes(r)).not.toContain('liquid-full-at-peak');
     // a fifth full it is thinner than the critical density: it never fills with liquid
     expect(codes(at(20))).not.toContain('liquid-full-beyond-model');
   });
