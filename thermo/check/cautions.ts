@@ -185,7 +185,8 @@ function peakCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
       design: G(c.designPressureGauge),
       over: num(-p.headroomToDesign, 'pressureDifference', 'up'),
     });
-  if (p.headroomToRelief < 0)
+  // No headroom left is the set pressure reached: the valve starts to discharge there.
+  if (p.headroomToRelief <= 0)
     add('warning', 'relief-at-peak', {
       peak: peakT,
       pressure: G(k.peakRaised, 'up'),
