@@ -9,13 +9,15 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { ConvergenceError } from '../../thermo/errors.js';
 import { resolveProduct } from '../../thermo/product.js';
 import { closedTankState } from '../../thermo/solvers/closedTank.js';
-import { mixtureAtT, phaseAt } from '../../thermo/solvers/mixture.js';
+import { mixtureAtT, phaseAt, saturationPointAt } from '../../thermo/solvers/mixture.js';
 import { pureSaturation } from '../../thermo/solvers/pure.js';
 import { checkClose } from '../helpers/check.js';
 
 const hooks = vi.hoisted(() => ({
   /** Factor applied to every pressure the pressure-from-volume solver returns. */
   pFactor: 1,
+  /** The bounds [pLo, pHi] of each pressure-from-volume search. */
+  bounds: [] as [number | undefined, number | undefined][],
   /** An error thrown instead of the saturation point of that kind. */
   fail: undefined as undefined | { kind: 'bubble' | 'dew'; error: () => Error },
 }));
@@ -25,6 +27,7 @@ vi.mock('../../thermo/solvers/inverse.js', async (importOriginal) => {
   return {
     ...real,
     pressureForVolume: (...args: Parameters<typeof real.pressureForVolume>) => {
+      hooks.bounds.push([args[3], args[4]]);
       const r = real.pressureForVolume(...args);
       return { ...r, p: r.p * hooks.pFactor };
     },
@@ -45,6 +48,7 @@ vi.mock('../../thermo/solvers/mixture.js', async (importOriginal) => {
 afterEach(() => {
   hooks.pFactor = 1;
   hooks.fail = undefined;
+  hooks.bounds.length = 0;
 });
 
 const propane = resolveProduct('propane');
@@ -110,6 +114,21 @@ describe('blend: a saturation point that cannot be found', () => {
   const Tb = 293.15;
   const notFound = () => new ConvergenceError('dew pressure', 'made to fail by the test', 0, NaN);
 
+  it('a liquid-full blend is searched at or above its bubble pressure, a vapour-only one at or below its dew pressure', () => {
+    // The single-phase pressure lies on that side of the saturation pressure; searching there
+    // keeps the solver on the right branch of the model.
+    const bubble = saturationPointAt(blend, Tb, 'bubble');
+    const dew = saturationPointAt(blend, Tb, 'dew');
+    hooks.bounds.length = 0;
+    const liquid = closedTankState(blend, Tb, (blend.molarMass / bubble.vBulk) * 1.01);
+    expect(liquid.phase).toBe('liquid');
+    expect(hooks.bounds).toEqual([[bubble.p, undefined]]);
+    hooks.bounds.length = 0;
+    const vapour = closedTankState(blend, Tb, (blend.molarMass / dew.vBulk) * 0.99);
+    expect(vapour.phase).toBe('vapour');
+    expect(hooks.bounds).toEqual([[undefined, dew.p]]);
+  });
+
   it('no dew point (bubble point found): one phase at the model’s pressure for the density', () => {
     hooks.fail = { kind: 'dew', error: notFound };
     // A vapour-like density (below the dew density there), where the one-phase root is continuous.
@@ -122,6 +141,30 @@ describe('blend: a saturation point that cannot be found', () => {
       input: { Tb, rho },
       actual: phaseAt(mixtureAtT(blend, Tb), c.pAbs, blend.z, 'stable').v,
       expected: blend.molarMass / rho,
+      rtol: 1e-9,
+      kind: 'identity',
+      source: 'the mixture model’s root at (T, p)',
+    });
+  });
+
+  it('no dew point near the critical region: dense at the pseudo-critical density (Kay’s rule)', () => {
+    hooks.fail = { kind: 'dew', error: notFound };
+    // At 400 K the bubble point still exists (its liquid is denser than the pseudo-critical
+    // density) and the model has one root at every pressure, so the state is well defined.
+    // Kay's rule (Kay 1936, Ind. Eng. Chem. 28, 1014) on the models' critical densities, summed
+    // as the solver sums it so that the border itself is hit.
+    const mx = mixtureAtT(blend, 400);
+    const M = blend.z.reduce((s, zi, i) => s + zi * mx.M[i]!, 0);
+    const rhoPc =
+      M / blend.components.reduce((s, m, i) => s + blend.z[i]! * (m.molarMass / m.rhoc), 0);
+    const c = closedTankState(blend, 400, rhoPc);
+    expect(c.phase).toBe('supercritical');
+    expect([c.liquidFraction, c.rhoL, c.rhoV, c.vapourMassFraction]).toEqual([1, rhoPc, null, 0]);
+    checkClose({
+      what: 'v at the tank pressure',
+      input: { T: 400, rho: rhoPc },
+      actual: phaseAt(mx, c.pAbs, blend.z, 'stable').v,
+      expected: M / rhoPc,
       rtol: 1e-9,
       kind: 'identity',
       source: 'the mixture model’s root at (T, p)',
