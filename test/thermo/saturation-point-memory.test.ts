@@ -267,9 +267,24 @@ describe('when a solve fails (a deliberately failing solver)', () => {
     const r2 = fresh();
     spy.fail = (T, start) => (start || T < r2.Tmin ? undefined : notFound(T));
     const T = 2 * r2.Tmin - 10;
-    expect(() => solve(r2, T)).toThrow(`no bubble point found at or below T = ${T} K`);
+    expect(() => solve(r2, T)).toThrow(
+      new RegExp(`^bubble pressure did not converge: no bubble point found at or below T = ${T} K`),
+    );
     const colds = spy.calls.map((c) => c.T);
     expect(Math.min(...colds)).toBe(r2.Tmin + 1);
+  });
+
+  it('a remembered start that fails, with nothing below to march from: a cold start at T itself', () => {
+    const r = fresh();
+    solve(r, 330);
+    // Every solve from a start fails; a cold one works.
+    spy.fail = (T, start) => (start ? notFound(T) : undefined);
+    const s = solve(r, 315);
+    expect(spy.calls.map((c) => [c.T, c.start !== undefined])).toEqual([
+      [315, true],
+      [315, false],
+    ]);
+    expectEqualFugacity(r, 315, s);
   });
 
   it('the end of the curve: marched up from the remembered point to within 0.02 K of the end, then reported', () => {
