@@ -15,7 +15,8 @@ import { R_J_molK as R } from '../../thermo/constants.js';
 import { fluidById } from '../../thermo/data/fluids.js';
 import { compressibilityRoots, lnPhiPure } from '../../thermo/eos/cubic.js';
 import { componentModel, type ModelId } from '../../thermo/eos/model.js';
-import { pureCoefficients, pureSaturation } from '../../thermo/solvers/pure.js';
+import { ConvergenceError } from '../../thermo/errors.js';
+import { pureCoefficients, pureSaturation, pureZ } from '../../thermo/solvers/pure.js';
 import { toSI } from '../../thermo/units.js';
 import { checkClose } from '../helpers/check.js';
 import { readTable, TARGETS } from '../reference/measure.js';
@@ -187,4 +188,29 @@ describe('pureSaturation: the Clapeyron equation and equal fugacity', () => {
       });
     },
   );
+});
+
+describe('pureSaturation and pureZ: starts and input outside the model', () => {
+  it('a start at or above 1.5·pc is replaced by 0.99·pc: the same steps and the same pressure', () => {
+    // No saturation pressure exceeds pc, so a start above the bracket's top carries no
+    // information; the solver restarts just below pc, whatever the start was.
+    const m = componentModel(fluidById('propane')!, 'tuned');
+    for (const T of [200, 300]) {
+      const ref = pureSaturation(m, T, m.pc * 0.99);
+      for (const g of [m.pc * 1.5, m.pc * 3, 1e12]) {
+        const s = pureSaturation(m, T, g);
+        expect(s.p, `T ${T}, start ${g}`).toBe(ref.p);
+        expect(s.iterations, `T ${T}, start ${g}`).toBe(ref.iterations);
+      }
+    }
+  });
+
+  it('a pressure that is not a number: an error, never a silent NaN', () => {
+    const m = componentModel(fluidById('propane')!, 'tuned');
+    const k = pureCoefficients(m, 300);
+    expect(() => pureZ(m, k, 300, NaN, 'stable')).toThrow(ConvergenceError);
+    expect(() => pureZ(m, k, 300, NaN, 'liquid')).toThrow(
+      'cubic roots did not converge: no root above the co-volume',
+    );
+  });
 });
