@@ -85,6 +85,7 @@ describe('ProductModel: constants of a pure fluid (propane)', () => {
     expect((err as InputError).field).toBe('product');
     expect((err as InputError).validRange).toMatch(/liquefied gas/);
     expect((err as InputError).validRange).toMatch(/60 °F/);
+    expect((err as InputError).message).toMatch(/\(got "methane"\)$/);
   });
 });
 
@@ -139,6 +140,7 @@ describe('ProductModel: saturation and the top of the curve', () => {
       source: 'fluids.csv Tc_eos; the core’s saturation ends 0.5 K below Tc (thermo/api.ts)',
       kind: 'published',
     });
+    expect(m.sat(m.satTop())).not.toBeNull(); // the top itself still has a saturation state
     expect(m.sat(Tc - 0.6)).not.toBeNull();
     expect(m.sat(Tc - 0.4)).toBeNull();
     expect(m.sat(Tc + 5)).toBeNull();
@@ -174,6 +176,28 @@ describe('ProductModel: saturation and the top of the curve', () => {
     // Between the two critical temperatures (fluids.csv): 369.89 K and 407.81 K, capped at 400 K.
     expect(top).toBeGreaterThan(fluidRow('propane').Tc);
     expect(top).toBeLessThanOrEqual(400);
+  });
+});
+
+describe('ProductModel: shared per product', () => {
+  it('a saturation state is worked out once per product and temperature, for every check', () => {
+    const a = new ProductModel('propane');
+    const b = new ProductModel('propane');
+    expect(b.sat(291.15)).toBe(a.sat(291.15));
+    expect(a.sat(291.15)).toBe(a.sat(291.15));
+    expect(new ProductModel('n-butane').sat(291.15)).not.toBe(a.sat(291.15));
+  });
+
+  it('a blend whose bubble curve runs past 400 K ends at 400 K, the top of the check', () => {
+    // n-butane/n-pentane: both critical temperatures above 400 K (fluids.csv: 425.1 K, 469.7 K)
+    const m = new ProductModel({
+      components: [
+        { id: 'n-butane', moleFraction: 0.5 },
+        { id: 'n-pentane', moleFraction: 0.5 },
+      ],
+    });
+    expect(fluidRow('n-butane').Tc).toBeGreaterThan(400);
+    expect(m.satTop()).toBe(400);
   });
 });
 

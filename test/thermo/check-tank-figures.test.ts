@@ -14,7 +14,6 @@ import {
   checkTank,
   InputError,
   liquidDensity,
-  maxDensity,
   saturation,
   type TankCheckInput,
 } from '../../thermo/index.js';
@@ -28,10 +27,9 @@ const LB_PER_KG = 1 / 0.45359237; // NIST SP 811 (2008), Appendix B: 1 lb = 0.45
 const V = gal(1000);
 const P_STD = 101_325; // Pa, standard atmosphere (ISO 2533)
 const STEP = 100; // Pa, the pressure rounding step stated in thermo/check/types.ts
-// The allowances the project README states ("Limits of validity"): a vapour pressure is raised by
-// 0.5 %, a liquid-full (or dense-fluid) pressure by 10 %. Written here so a changed one fails.
+// The allowance the project README states ("Limits of validity"): a vapour pressure is raised by
+// 0.5 %. Written here so a changed one fails.
 const VAPOUR_ALLOWANCE = 0.005;
-const FULL_ALLOWANCE = 0.1;
 
 const SAT_SRC = 'test/reference/sat/propane.csv (Lemmon, McLinden, Wagner 2009 reference EOS)';
 const TRADE_SRC = 'test/reference/trade/saturation_properties.csv (propane, 60 °F row)';
@@ -234,6 +232,25 @@ describe('checkTank: pressure now and the site barometer', () => {
   });
 });
 
+describe('checkTank: a product that is no liquefied gas', () => {
+  it('is refused as the product, in the words of the product check', () => {
+    // methane: Tc 190.56 K, Pc 4.599 MPa, ω 0.011, M 16.043 g/mol (Poling, Prausnitz, O'Connell,
+    // The Properties of Gases and Liquids, 5th ed., Appendix A): a gas at 60 °F
+    const methane = {
+      custom: { name: 'methane', molarMass: 0.016043, Tc: 190.56, Pc: 4.599e6, omega: 0.011 },
+    };
+    let err: unknown;
+    try {
+      checkTank(propane60({ product: methane }));
+    } catch (e) {
+      err = e;
+    }
+    expect(err).toBeInstanceOf(InputError);
+    expect((err as InputError).field).toBe('product');
+    expect((err as InputError).validRange).toMatch(/^a liquefied gas/);
+  });
+});
+
 describe('checkTank: the peak day (propane 60 % at 293.15 K, peak 313.15 K)', () => {
   it('the peak pressure is the reference vapour pressure at the peak, raised by 0.5 %', () => {
     const r = checkTank(propane60());
@@ -283,6 +300,11 @@ describe('checkTank: the peak day (propane 60 % at 293.15 K, peak 313.15 K)', ()
     expect(r.peak.headroomToRelief).toBe(floor100(psig(220) - r.peak.pGaugeUpper));
     expect(r.peak.headroomToDesign).toBe(floor100(psig(250) - r.peak.pGaugeUpper));
     expect(r.peak.headroomToRelief % STEP).toBe(0);
+    // A design pressure on the 100 Pa grid: the headroom is the plain difference, not a step less.
+    const grid = checkTank(
+      propane60({ tank: { waterCapacity: V, designPressureGauge: 1_700_000 } }),
+    );
+    expect(grid.peak.headroomToDesign).toBe(1_700_000 - grid.peak.pGaugeUpper);
   });
 
   it('a peak equal to the temperature now repeats the state now', () => {

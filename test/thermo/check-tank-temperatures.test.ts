@@ -202,6 +202,10 @@ describe('checkTank: readings it refuses', () => {
     const ref = satRow('propane', 293.15);
     const e = refusal(() => checkTank(byMass('propane', 1.15 * ref.rhoL, 293.15)));
     expect(e.field).toBe('contents.netMass');
+    expect(e.limits!.min).toBe(0);
+    expect(e.limits!.quantity).toBe('mass');
+    expect(e.validRange).toMatch(/110 % of a liquid-full tank/);
+    expect(e.limits!.note).toMatch(/110 % of a liquid-full tank/);
     const max = e.limits!.max!;
     expectRel(max, 1.1 * ref.rhoL * V, 0.005, {
       input: 'propane 293.15 K',
@@ -257,6 +261,9 @@ describe('checkTank: readings it refuses', () => {
     };
     const e = refusal(() => checkTank({ ...base, contents: { levelHeight: 2.6 } }));
     expect(e.field).toBe('contents.levelHeight');
+    expect(e.limits!.quantity).toBe('length');
+    expect(e.limits!.min).toBe(0);
+    expect(e.validRange).toMatch(/inside height/);
     expectWithin(e.limits!.max!, 2.5, 1e-9, {
       input: 'H 2.5 m',
       source: 'the shape entered',
@@ -289,6 +296,9 @@ describe('checkTank: readings it refuses', () => {
       kind: 'published',
     });
     expect(e.limits!.min!).toBe(150);
+    expect(e.limits!.quantity).toBe('temperature');
+    expect(e.limits!.note).toMatch(/weigh the tank/);
+    expect(e.validRange).toMatch(/weigh the tank/);
   });
 
   it('a liquid or peak temperature below the triple point', () => {
@@ -301,8 +311,14 @@ describe('checkTank: readings it refuses', () => {
       kind: 'published',
     });
     expect(e.validRange).toMatch(/this product's lower limit/);
+    // The check takes temperatures up to 400 K (thermo/limits.ts).
+    expect(e.limits!.max).toBe(400);
+    expect(e.limits!.quantity).toBe('temperature');
+    expect(e.limits!.note).toBe('for this product');
     const p = refusal(() => checkTank(byMass('carbon-dioxide', 500, 250, t - 0.5)));
     expect(p.field).toBe('peakTemperature');
+    expect(p.validRange).toMatch(/this product's lower limit/);
+    expect(p.limits!.max).toBe(400);
     expectWithin(p.limits!.min!, t, 0.02, {
       input: 'CO2',
       source: 'test/reference/fluids.csv T_triple',
@@ -317,6 +333,9 @@ describe('checkTank: readings it refuses', () => {
     const rho = 1.05 * ref.rhoL;
     const e = refusal(() => checkTank(byMass('propane', rho, 253.15, 360)));
     expect(e.field).toBe('peakTemperature');
+    expect(e.limits!.quantity).toBe('temperature');
+    expect(e.validRange).toMatch(/^at most \d+\.\d K for this fill: .*cannot hold/);
+    expect(e.limits!.note).toMatch(/cannot hold this much product/);
     const Tmax = e.limits!.max!;
     expect(Tmax).toBeGreaterThan(253.15);
     expect(Tmax).toBeLessThan(360);
