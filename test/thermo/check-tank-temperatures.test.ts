@@ -213,7 +213,8 @@ describe('checkTank: readings it refuses', () => {
       kind: 'published',
     });
     expect(max).toBeLessThanOrEqual(maxDensity('propane', 293.15) * V);
-    // Just under the cap is taken, and weighs what was entered.
+    // Exactly the cap is taken (the range is inclusive), and so is just under it.
+    expect(checkTank(byMass('propane', max / V, 293.15)).phase).toBe('liquid-full');
     const ok = checkTank(byMass('propane', (0.999 * max) / V, 293.15));
     expectRel(ok.contents.totalMass, 0.999 * max, 1e-12, {
       input: 'net mass just under the cap',
@@ -269,6 +270,10 @@ describe('checkTank: readings it refuses', () => {
       source: 'the shape entered',
       kind: 'identity',
     });
+    // Exactly the inside height is taken: a tank full of liquid.
+    expect(
+      checkTank({ ...base, contents: { levelHeight: 2.5 } }).contents.liquidPercent,
+    ).toBeCloseTo(100, 6);
     const r = checkTank({ ...base, contents: { levelHeight: 1.0 } });
     const ref = satRow('propane', 293.15);
     expectRel(r.contents.totalMass, Vt * (0.4 * ref.rhoL + 0.6 * ref.rhoV), 0.005, {
@@ -324,6 +329,10 @@ describe('checkTank: readings it refuses', () => {
       source: 'test/reference/fluids.csv T_triple',
       kind: 'published',
     });
+    // The floor itself is taken: propane's is 150 K, the check's lowest (thermo/limits.ts).
+    const at150 = checkTank(byMass('propane', 300, 150, 150));
+    expect(at150.phase).toBe('two-phase');
+    expect(at150.peak.temperature).toBe(150);
     // Just above the floor is taken.
     expect(checkTank(byMass('carbon-dioxide', 500, t + 0.05, t + 0.05)).phase).toBe('two-phase');
   });
