@@ -187,11 +187,13 @@ describe('ProductModel: shared per product', () => {
     const a = new ProductModel('propane');
     const first = a.sat(291.15);
     expect(a.sat(291.15)).toBe(first);
+    a.sat(292.15); // another temperature is kept beside it
+    expect(a.sat(291.15)).toBe(first);
     const b = new ProductModel('propane');
     expect(b.sat(291.15)).toBe(first);
-    const butane = new ProductModel('n-butane').sat(291.15);
-    expect(butane).not.toBe(first);
-    expect(butane!.pAbs).toBeLessThan(first!.pAbs); // n-butane is the less volatile
+    const other = new ProductModel('isobutene').sat(291.15); // another product, kept beside it
+    expect(other).not.toBe(first);
+    expect(other!.pAbs).toBeLessThan(first!.pAbs); // isobutene is the less volatile
     expect(new ProductModel('propane').sat(291.15)).toBe(first);
   });
 
@@ -286,6 +288,29 @@ describe('ProductModel: closed-tank states', () => {
     }
   });
 
+  it('all liquid at its bubble point is liquid-full, whatever the flash rounds to', () => {
+    // R-410A at 250 K: the flash of exactly the bubble-liquid density can come out a hair short
+    // of full; a tank of liquid at its bubble point has no vapour space.
+    const sat = saturation('r410a', 250);
+    const s = new ProductModel('r410a').state(250, sat.rhoL);
+    expect(s.phase).toBe('liquid-full');
+    expect(s.lf).toBe(1);
+    expect(s.pAbs).toBeGreaterThanOrEqual(sat.pAbs);
+  });
+
+  it('a blend all but empty is an ideal gas at the flash pressure', () => {
+    // R-407C, M = 86.2036 g/mol (test/reference/blends/README.md); R = 8.314462618 J/(mol·K)
+    // (CODATA 2018). At 0.01 kg/m³ the second virial term is below 1e-4 of p.
+    const rho = 0.01;
+    const s = new ProductModel('r407c').state(293.15, rho);
+    expect(s.phase).toBe('vapour-only');
+    expectRel(s.pAbs, (rho * 8.314462618 * 293.15) / 0.0862036, 1e-3, {
+      input: 'R-407C 0.01 kg/m³ at 293.15 K',
+      source: 'ideal-gas law, p = ρRT/M',
+      kind: 'published',
+    });
+  });
+
   it('a blend heated past the vapour end: the pressure never falls, and never below the flash', () => {
     // A closed tank's pressure rises with temperature ((∂p/∂T) at constant density > 0).
     const m = new ProductModel('r407c');
@@ -320,12 +345,14 @@ describe('ProductModel: what the model can hold', () => {
     )!;
     expect(dmax).toBeGreaterThan(Number(liquid5.rho_kg_m3));
     expect(m.stateOrNull(300, dmax * 1.001)).toBeNull();
+    expect(m.stateOrNull(300, dmax)).not.toBeNull(); // the limit itself is held
     expect(m.stateOrNull(300, 0.99 * dmax)!.phase).toBe('liquid-full');
   });
 
   it('maxTemperatureFor: the top of the range when it can hold the fill there, else where it stops', () => {
     const m = new ProductModel('propane');
     expect(m.maxTemperatureFor(300, 250, 340)).toBe(340);
+    expect(m.maxTemperatureFor(maxDensity('propane', 340), 250, 340)).toBe(340); // held at 340 K itself
     const rho = maxDensity('propane', 300);
     const T = m.maxTemperatureFor(rho, 250, 340);
     expectWithin(T, 300, 0.002, {
