@@ -265,6 +265,7 @@ describe('checkTank: readings it refuses', () => {
     expect(e.limits!.quantity).toBe('length');
     expect(e.limits!.min).toBe(0);
     expect(e.validRange).toMatch(/inside height/);
+    expect(e.limits!.note).toMatch(/inside height/);
     expectWithin(e.limits!.max!, 2.5, 1e-9, {
       input: 'H 2.5 m',
       source: 'the shape entered',
