@@ -72,7 +72,7 @@ describe('ProductModel: constants of a pure fluid (propane)', () => {
   });
 
   it('a gas that is not liquid at 60 °F is refused as a product', () => {
-    // methane: M 16.043 g/mol, Tc 190.56 K, Pc 4.599 MPa, ω 0.011 (Poling, Prausnitz,
+    // methane (from memory): M 16.043 g/mol, Tc 190.56 K, Pc 4.599 MPa, ω 0.011 (Poling, Prausnitz,
     // O'Connell, The Properties of Gases and Liquids, 5th ed., Appendix A)
     const methane = {
       custom: { name: 'methane', molarMass: 0.016043, Tc: 190.56, Pc: 4.599e6, omega: 0.011 },

@@ -192,10 +192,11 @@ describe('checkTank: pressure now and the site barometer', () => {
   it('at 1,500 m the gauge pressure is higher by what the air pressure is lower', () => {
     const sea = checkTank(propane60());
     const high = checkTank(propane60({ elevation: 1500 }));
-    // U.S. Standard Atmosphere 1976 (= ISO 2533): 84 556 Pa at 1,500 m geopotential.
+    // U.S. Standard Atmosphere 1976 (= ISO 2533): 84 556 Pa at 1,500 m geopotential (from memory;
+    // the troposphere formula 101 325 · (1 − 2.25577e-5 · h)^5.25588 gives 84 556 Pa too).
     expectWithin(high.barometricPressureAbs, 84_556, 30, {
       input: '1500 m',
-      source: 'U.S. Standard Atmosphere 1976, table at 1,500 m',
+      source: 'U.S. Standard Atmosphere 1976 at 1,500 m (from memory; agrees with its formula)',
       kind: 'published',
     });
     expectWithin(high.pGauge - sea.pGauge, P_STD - high.barometricPressureAbs, STEP, {
@@ -234,7 +235,7 @@ describe('checkTank: pressure now and the site barometer', () => {
 
 describe('checkTank: a product that is no liquefied gas', () => {
   it('is refused as the product, in the words of the product check', () => {
-    // methane: Tc 190.56 K, Pc 4.599 MPa, ω 0.011, M 16.043 g/mol (Poling, Prausnitz, O'Connell,
+    // methane (from memory): Tc 190.56 K, Pc 4.599 MPa, ω 0.011, M 16.043 g/mol (Poling, Prausnitz, O'Connell,
     // The Properties of Gases and Liquids, 5th ed., Appendix A): a gas at 60 °F
     const methane = {
       custom: { name: 'methane', molarMass: 0.016043, Tc: 190.56, Pc: 4.599e6, omega: 0.011 },
