@@ -27,11 +27,12 @@ import { STANDING_CAUTION } from './standing.js';
 import type { PeakResult, TankCheckInput, TankCheckResult } from './types.js';
 import { validateInput, type CleanInput } from './validate.js';
 
-/** x rounded down / up to a multiple of step (steps are powers of ten; dividing by 1/step keeps 0.01 steps exact). */
-const floorTo = (x: number, step: number) =>
-  step < 1 ? Math.floor(x * (1 / step) + 1e-9) / (1 / step) : Math.floor(x / step + 1e-9) * step;
-const ceilTo = (x: number, step: number) =>
-  step < 1 ? Math.ceil(x * (1 / step) - 1e-9) / (1 / step) : Math.ceil(x / step - 1e-9) * step;
+/**
+ * x rounded down / up to a multiple of step. Only whole steps occur here (P_STEP), so x / step
+ * is the plain quotient; a fraction of a step would need the exact form of fillLimit.ts.
+ */
+const floorTo = (x: number, step: number) => Math.floor(x / step + 1e-9) * step;
+const ceilTo = (x: number, step: number) => Math.ceil(x / step - 1e-9) * step;
 /** Pressures are rounded to 100 Pa (0.015 psi): up for pressures, down for headroom. */
 const P_STEP = 100;
 

@@ -62,6 +62,16 @@ export interface ProductBasics {
   rhoc: number;
 }
 
+/**
+ * Stores value under key in a memo, first emptying the memo when it holds more than cap entries
+ * (a bound on memory: a long session checks many products and temperatures). Returns value.
+ */
+function remember<K, V>(memo: Map<K, V>, cap: number, key: K, value: V): V {
+  if (memo.size > cap) memo.clear();
+  memo.set(key, value);
+  return value;
+}
+
 const basicsCache = new Map<string, ProductBasics>();
 
 /** Product constants that do not depend on the readings (memoised by the product's JSON). */
@@ -95,9 +105,7 @@ export function productBasics(product: Product): ProductBasics {
     rho15,
     rhoc: r.rhoc,
   };
-  if (basicsCache.size > 200) basicsCache.clear();
-  basicsCache.set(key, b);
-  return b;
+  return remember(basicsCache, 200, key, b);
 }
 
 /** Top of each product's saturation curve, K (memoised by the product's JSON). */
@@ -121,15 +129,7 @@ const SHARED_SATS = 4000;
 
 function sharedFor(product: Product): Shared {
   const key = JSON.stringify(product);
-  let s = shared.get(key);
-  if (!s) {
-    if (shared.size > 20) shared.clear();
-    s = { sats: new Map(), ends: new Map() };
-    shared.set(key, s);
-  }
-  if (s.sats.size > SHARED_SATS) s.sats.clear();
-  if (s.ends.size > 200) s.ends.clear();
-  return s;
+  return shared.get(key) ?? remember(shared, 20, key, { sats: new Map(), ends: new Map() });
 }
 
 export class ProductModel {
@@ -159,16 +159,13 @@ export class ProductModel {
     // once its bubble point is found again (blendSeeds.ts).
     const seeded = blendSeed(resolveProduct(this.product))?.top;
     if (seeded !== undefined && this.sat(seeded)) {
-      topCache.set(key, seeded);
-      return seeded;
+      return remember(topCache, 200, key, seeded);
     }
     // A liquefied gas has a bubble point at 60 °F (productBasics checked it).
     const lo = this.sat(T_TOP_K)
       ? T_TOP_K
       : bisectBoundary((T) => this.sat(T) !== null, T_60F_K, T_TOP_K, 0.01).x;
-    if (topCache.size > 200) topCache.clear();
-    topCache.set(key, lo);
-    return lo;
+    return remember(topCache, 200, key, lo);
   }
 
   /** Saturation (pure) or bubble point (blend) at T, or null above the critical point / region. */
@@ -187,8 +184,7 @@ export class ProductModel {
           throw e;
       }
     }
-    this.sats.set(T, s);
-    return s;
+    return remember(this.sats, SHARED_SATS, T, s);
   }
 
   /**
@@ -285,7 +281,6 @@ export class ProductModel {
     if (lo >= T || !this.twoPhaseAt(lo, rho) || this.twoPhaseAt(hi, rho)) return null;
     const Tend = bisectBoundary((T) => this.twoPhaseAt(T, rho), lo, hi, 0.001).x;
     const end = { T: Tend, p: this.sat(Tend)!.pAbs };
-    this.ends.set(rho, end);
-    return end;
+    return remember(this.ends, 200, rho, end);
   }
 }
