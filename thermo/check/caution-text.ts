@@ -57,8 +57,10 @@ const TEXT: Record<CautionCode, (f: Fmt, p: MessageParams) => string> = {
     `The tank is under vacuum (${f('pressure')}${p['source'] === 'reading' ? ', gauge reading' : `, expected at ${f('temperature')}`}): no vapour will flow to appliances, and air can be drawn in through a leak or an open valve.`,
   'below-mdmt': (f) =>
     `The liquid at ${f('temperature')} is colder than the minimum design metal temperature ${f('mdmt')}: the shell may be brittle; avoid shocks and pressure changes and follow the site procedure.`,
-  'autorefrigeration-below-mdmt': (f) =>
-    `If the tank is vented or emptied fast, the liquid can chill toward its boiling point at atmospheric pressure, ${f('boiling')}, which is below the minimum design metal temperature ${f('mdmt')}.`,
+  'autorefrigeration-below-mdmt': (f, p) =>
+    p['forms'] === 'dry ice'
+      ? `If the tank is vented or emptied fast, the liquid turns to dry ice and gas and can chill toward ${f('boiling')} (dry ice at atmospheric pressure), which is below the minimum design metal temperature ${f('mdmt')}.`
+      : `If the tank is vented or emptied fast, the liquid can chill toward its boiling point at atmospheric pressure, ${f('boiling')}, which is below the minimum design metal temperature ${f('mdmt')}.`,
   'over-fill-limit': (f, p) =>
     `The contents, ${f('contents')}, are above the fill limit of ${f('limit')} by ${f('over')}${typeof p['description'] === 'string' ? ` (${p['description']}; ${String(p['citation'])})` : ''}.`,
   'no-filling-rule': (f, p) =>

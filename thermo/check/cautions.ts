@@ -7,6 +7,7 @@
  */
 import { checkMinTemperature } from '../limits.js';
 import { CO2_TRIPLE_POINT_PA, cautionMessage } from './caution-text.js';
+import { co2SublimationTemperature } from './sublimation.js';
 import { num, type CautionCode, type MessageParams } from './codes.js';
 import type { ProductModel, State } from './model.js';
 import { siteRuleParams } from './siteRuleNotice.js';
@@ -117,8 +118,16 @@ function nowCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
   }
   const Tlo = checkMinTemperature(k.model.basics.Tmin);
   const Tb = saturationTemperature(k.model, baro, [c.T, c.Tpeak], Tlo);
-  if (Tb !== null && Tb < c.mdmt)
-    add('caution', 'autorefrigeration-below-mdmt', { boiling: T(Tb), mdmt: T(c.mdmt) });
+  // CO2 has no liquid at air pressure: vented, it turns to dry ice and gas at its sublimation
+  // temperature (about −78.5 °C), which is then how cold the metal can get.
+  const dryIce = Tb === null && k.input.product === 'carbon-dioxide';
+  const Tcold = dryIce ? co2SublimationTemperature(baro) : Tb;
+  if (Tcold !== null && Tcold < c.mdmt)
+    add('caution', 'autorefrigeration-below-mdmt', {
+      boiling: T(Tcold),
+      mdmt: T(c.mdmt),
+      ...(dryIce ? { forms: 'dry ice' } : {}),
+    });
 }
 
 function limitCautions(r: TankCheckResult, k: CautionContext, add: Add): void {
