@@ -94,6 +94,17 @@ describe('the temperature glide of a blend', () => {
     expect(blendGlide('r407c', 288.11)).toBe(a);
     expect(blendGlide('r407c', 288.14)).toBe(a);
     expect(blendGlide('r407c', 288.26)).not.toBe(a);
+    // Another step asked in between does not push the first one out.
+    expect(blendGlide('r407c', 288.11)).toBe(a);
+  });
+
+  it('keeps at most 64 answers, the oldest going first', () => {
+    const first = blendGlide('r407c', 250.01);
+    // 64 other steps of 0.1 K (250.1 … 256.4 K): the first answer is no longer kept.
+    for (let i = 1; i <= 64; i++) blendGlide('r407c', 250 + i / 10);
+    const again = blendGlide('r407c', 250.01);
+    expect(again).not.toBe(first);
+    expect(again).toEqual(first);
   });
 });
 
