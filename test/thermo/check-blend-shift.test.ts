@@ -141,6 +141,19 @@ describe('which components are the volatile ones', () => {
     )!;
     expect(g.light).toEqual(['Ethane']);
     expect(g.heavy).toEqual(['Propane', 'n-butane']);
+    expect(
+      compositionShiftCauses(
+        {
+          components: [
+            { id: 'propane', moleFraction: 0.95 },
+            { id: 'ethane', moleFraction: 0.025 },
+            { id: 'n-butane', moleFraction: 0.025 },
+          ],
+        },
+        273.15,
+        'low',
+      )[0],
+    ).toContain('takes more of Ethane and leaves a liquid richer in Propane and n-butane,');
   });
 
   it('R-32 and R-125 in R-407C: their vapour pressures are above the blend’s bubble pressure (Raoult)', () => {
