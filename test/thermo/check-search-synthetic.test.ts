@@ -132,7 +132,18 @@ describe('liquid-full temperature on the critical-scaling stand-in', () => {
 
   it('the end of the curve for contents denser than critical that the liquid has not reached there', () => {
     // ρL at the top (369.5 K) is ρc + 60·0.5^(1/3) = 267.6 kg/m³: 250 kg/m³ would fill at 369.875 K.
-    expect(liquidFullTemperature(model(standIn()), 250, [300], 230)).toBe(TOP);
+    const m = standIn();
+    expect(liquidFullTemperature(model(m), 250, [300], 230)).toBe(TOP);
+    // One look at the top of the curve settles it; no search.
+    expect(m.calls).toBeLessThanOrEqual(2);
+  });
+
+  it('nothing to search, nothing evaluated, when the range is empty', () => {
+    const a = standIn();
+    expect(liquidFullTemperature(model(a), rhoL(330), [300], TOP)).toBeNull();
+    const b = standIn();
+    expect(saturationTemperature(model(b), psat(305), [300], TOP)).toBeNull();
+    expect(a.calls + b.calls).toBe(0);
   });
 });
 
@@ -150,6 +161,19 @@ describe('relief temperature on the stand-in', () => {
     const T = reliefTemperature(model(m), 300, psat(330) * 1.005, allowance, 300, 340, [300])!;
     expect(Math.abs(T - 330)).toBeLessThan(0.002);
     expect(m.calls).toBeLessThanOrEqual(8);
+  });
+
+  it('on the curve, costs the saturation search plus the state now and at the answer', () => {
+    // The shortcut the search documents: while two-phase, the saturation answer stands once the
+    // state there is checked. Any further search would cost more evaluations.
+    const relief = psat(330) * 1.005;
+    for (const Tfull of [null, 340]) {
+      const s = standIn();
+      saturationTemperature(model(s), relief / 1.005, [300], 300);
+      const m = standIn();
+      reliefTemperature(model(m), 300, relief, allowance, 300, Tfull, [300]);
+      expect(m.calls, `Tfull ${Tfull}`).toBeLessThanOrEqual(s.calls + 2);
+    }
   });
 
   it('a blend held below its bubble pressure: where its own pressure reaches the setting, not the bubble curve', () => {
