@@ -45,24 +45,28 @@ interface Options {
   /** Above this temperature the model cannot hold the fill (stateOrNull gives null). */
   heldUpTo?: number;
   top?: number;
+  /** C in ln p = A − B/T − C·(1/T² − 1/Tc²), K²: a curved vapour-pressure line (0: straight). */
+  curvature?: number;
 }
 
 /** A stand-in ProductModel counting its evaluations. */
 function standIn(o: Options = {}) {
   const top = o.top ?? TOP;
+  const C = o.curvature ?? 0;
+  const pOf = (T: number) => psat(T) * Math.exp(-C * (1 / T ** 2 - 1 / TC ** 2));
   const m = {
     calls: 0,
     basics: { rhoc: RHOC },
     satTop: () => top,
     sat(T: number) {
       m.calls++;
-      return T <= top ? { pAbs: psat(T), rhoL: rhoL(T), rhoV: 10 } : null;
+      return T <= top ? { pAbs: pOf(T), rhoL: rhoL(T), rhoV: 10 } : null;
     },
     stateOrNull(T: number, rho: number): State | null {
       m.calls++;
       if (T > (o.heldUpTo ?? Infinity)) return null;
       // Past the top of the curve the pressure keeps rising, 5 % per kelvin.
-      const p = psat(Math.min(T, top)) * (T > top ? 1 + 0.05 * (T - top) : 1);
+      const p = pOf(Math.min(T, top)) * (T > top ? 1 + 0.05 * (T - top) : 1);
       return {
         phase: o.phase ?? 'two-phase',
         pAbs: (o.floor ?? 1) * p,
@@ -138,6 +142,22 @@ describe('liquid-full temperature on the critical-scaling stand-in', () => {
     expect(m.calls).toBeLessThanOrEqual(2);
   });
 
+  it('hints outside the range searched are not evaluated', () => {
+    // Below the lowest temperature searched (200 K) and past the curve (380 K): the same
+    // evaluations as with no hint at all.
+    const cost = (f: (m: ProductModel) => unknown) => {
+      const m = standIn();
+      f(model(m));
+      return m.calls;
+    };
+    expect(cost((m) => saturationTemperature(m, psat(305), [200, 380], 230))).toBe(
+      cost((m) => saturationTemperature(m, psat(305), [], 230)),
+    );
+    expect(cost((m) => liquidFullTemperature(m, rhoL(330), [200, 380], 230))).toBe(
+      cost((m) => liquidFullTemperature(m, rhoL(330), [], 230)),
+    );
+  });
+
   it('nothing to search, nothing evaluated, when the range is empty', () => {
     const a = standIn();
     expect(liquidFullTemperature(model(a), rhoL(330), [300], TOP)).toBeNull();
@@ -166,11 +186,13 @@ describe('relief temperature on the stand-in', () => {
   it('on the curve, costs the saturation search plus the state now and at the answer', () => {
     // The shortcut the search documents: while two-phase, the saturation answer stands once the
     // state there is checked. Any further search would cost more evaluations.
+    // On a curved vapour-pressure line (C = 20 000 K²), so that the saturation answer is not
+    // exact to the last digit and a further search would have something left to do.
     const relief = psat(330) * 1.005;
     for (const Tfull of [null, 340]) {
-      const s = standIn();
+      const s = standIn({ curvature: 2e4 });
       saturationTemperature(model(s), relief / 1.005, [300], 300);
-      const m = standIn();
+      const m = standIn({ curvature: 2e4 });
       reliefTemperature(model(m), 300, relief, allowance, 300, Tfull, [300]);
       expect(m.calls, `Tfull ${Tfull}`).toBeLessThanOrEqual(s.calls + 2);
     }
