@@ -115,9 +115,12 @@ function pressureText(f: Fmt, p: MessageParams, word: string): string {
   return `The gauge reads ${f('reading')}, ${f('differenceAbs')} ${word} than the ${f('expected')} expected for this product at ${f('temperature')} (band ±${f('tolerance')}). Likely: ${cause}${split}`;
 }
 
-/** One parameter in the engine's default units (US first, SI in brackets). */
-function formatParam(x: MessageNumber, name: string, baro: number): string {
-  const r = x.round ?? 'nearest';
+/**
+ * One parameter in the engine's default units (US first, SI in brackets), rounded as its
+ * `round` says (to the nearest when it says nothing).
+ */
+export function formatParam(x: MessageNumber, name: string, baro: number): string {
+  const r = x.round;
   switch (x.quantity) {
     case 'gaugePressure':
       return fmtGauge(x.value, r, baro);
