@@ -273,3 +273,18 @@ describe('flashPT outside the two-phase region', () => {
     expect(f.x[1]!).toBeGreaterThan(r.z[1]!);
   });
 });
+
+describe('Rachford–Rice with a K that underflowed to 0', () => {
+  it('keeps β below 1, so every phase fraction stays finite (found by the api property test)', () => {
+    // z and K as met by a closed-tank flash of propane with traces of n-butane and ethane at
+    // 233.15 K: n-butane's K underflowed to 0, so 1 + β(K − 1) = 1 − β is 0 at β = 1. The root
+    // lies within 1e-17 of 1, closer than a double can show.
+    const z = [1, 1e-323, 1.0607557663309708e-306];
+    const K = [1, 0, 6.236604331249904];
+    const { beta } = rachfordRiceSteps(z, K);
+    expect(beta).toBeGreaterThan(0);
+    expect(beta).toBeLessThan(1);
+    const x = z.map((zi, i) => zi / (1 + beta * (K[i]! - 1)));
+    expect(x.every(Number.isFinite)).toBe(true);
+  });
+});

@@ -49,7 +49,11 @@ export function rachfordRiceSteps(
     if (fv > 0) lo = beta;
     else hi = beta;
     const next = beta - step;
-    beta = next > lo && next < hi ? next : 0.5 * (lo + hi);
+    // β stays strictly inside (lo, hi) ⊂ (0, 1): at β = 1 a component with K = 0 (its K
+    // underflowed) would divide by zero. A root closer to 1 than a double can show ends here.
+    const mid = 0.5 * (lo + hi);
+    if (!(next > lo && next < hi) && !(mid > lo && mid < hi)) break;
+    beta = next > lo && next < hi ? next : mid;
   }
   return { beta, iterations: it };
 }
