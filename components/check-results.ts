@@ -27,6 +27,7 @@ import type { TankCheckResult } from '../thermo/check/types.js';
 import { stopPlace } from './fill-words.js';
 import { cautionText } from './messages.js';
 import { ResultView } from './check-results-parts.js';
+import { OffscreenHold } from './offscreen-hold.js';
 
 /** The standing caution shown when no result exists yet (the engine's own text is used when one does). */
 export const STANDING_FALLBACK =
@@ -62,6 +63,8 @@ export class CheckResults extends LitElement {
   declare _announce: string;
 
   private _timer: ReturnType<typeof setTimeout> | undefined;
+  /** While the figures are far off screen (a reading being typed above), they are redrawn when idle. */
+  private readonly _hold = new OffscreenHold(this);
 
   constructor() {
     super();
@@ -75,6 +78,19 @@ export class CheckResults extends LitElement {
   }
 
   static override styles = [baseStyles, levelStyles, checkResultsStyles];
+
+  protected override shouldUpdate(changed: PropertyValues<this>): boolean {
+    return this._hold.allow(changed);
+  }
+
+  /** Also waits for figures held while off screen, so whoever awaits this sees the current ones. */
+  protected override async getUpdateComplete(): Promise<boolean> {
+    const done = await super.getUpdateComplete();
+    const held = this._hold.pending;
+    if (!held) return done;
+    await held;
+    return this.getUpdateComplete();
+  }
 
   protected override updated(changed: PropertyValues<this>): void {
     if (changed.has('result') || changed.has('missing') || changed.has('error')) {
