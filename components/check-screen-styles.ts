@@ -22,14 +22,18 @@ export const checkScreenStyles = css`
     margin: 0.2rem 0 0;
     overflow-wrap: anywhere;
   }
-  .layout {
-    display: grid;
-    gap: 1rem;
+  .layout > * + * {
+    margin-top: 1rem;
   }
   @media (min-width: 60rem) {
     .layout {
+      display: grid;
+      gap: 1rem;
       grid-template-columns: minmax(18rem, 26rem) minmax(0, 1fr);
       align-items: start;
+    }
+    .layout > * + * {
+      margin-top: 0;
     }
   }
   .actions {

@@ -11,6 +11,8 @@ export const numberFieldStyles = [
     .box {
       display: flex;
       align-items: stretch;
+      contain: size layout style;
+      height: 48px;
     }
     input {
       flex: 1 1 auto;
