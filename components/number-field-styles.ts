@@ -11,8 +11,10 @@ export const numberFieldStyles = [
     .box {
       display: flex;
       align-items: stretch;
+      /* A layout boundary: a typed character lays out this box only, not the page. Its height
+         is fixed, so it follows the text size (larger text settings) instead of its content. */
       contain: size layout style;
-      height: 48px;
+      height: max(48px, calc(1.4em + 1rem + 2 * var(--border-width)));
     }
     input {
       flex: 1 1 auto;
