@@ -47,6 +47,8 @@ interface Options {
   top?: number;
   /** C in ln p = A − B/T − C·(1/T² − 1/Tc²), K²: a curved vapour-pressure line (0: straight). */
   curvature?: number;
+  /** No saturation temperature is remembered between searches. */
+  forget?: boolean;
 }
 
 /** A stand-in ProductModel counting its evaluations. */
@@ -54,10 +56,17 @@ function standIn(o: Options = {}) {
   const top = o.top ?? TOP;
   const C = o.curvature ?? 0;
   const pOf = (T: number) => psat(T) * Math.exp(-C * (1 / T ** 2 - 1 / TC ** 2));
+  const remembered = new Map<number, number | null>();
   const m = {
     calls: 0,
-    basics: { rhoc: RHOC },
+    /** Tmin + 0.01 K (the check's margin above the triple point) = 230 K, the floor searched. */
+    basics: { rhoc: RHOC, Tmin: 229.99 },
     satTop: () => top,
+    /** As the real model: one search per pressure (o.forget: a new search each time). */
+    satTemperature(pAbs: number, solve: () => number | null) {
+      if (o.forget || !remembered.has(pAbs)) remembered.set(pAbs, solve());
+      return remembered.get(pAbs)!;
+    },
     sat(T: number) {
       m.calls++;
       return T <= top ? { pAbs: pOf(T), rhoL: rhoL(T), rhoV: 10 } : null;
@@ -107,6 +116,17 @@ describe('saturation temperature on the Clausius–Clapeyron stand-in', () => {
       expect(Math.abs(T - satT(psat(Tstar))), `${Tstar} K`).toBeLessThan(0.002);
       expect(m.calls, `${Tstar} K`).toBeLessThanOrEqual(8);
     }
+  });
+
+  it('one search per pressure: a later ask with other hints or a higher Tlo costs nothing', () => {
+    const m = standIn();
+    const T = saturationTemperature(model(m), psat(305), [280], 230)!;
+    expect(Math.abs(T - 305)).toBeLessThan(0.002);
+    const calls = m.calls;
+    expect(saturationTemperature(model(m), psat(305), [320, 340], 300)).toBe(T);
+    // The one root lies below a Tlo of 310 K: none at or above it.
+    expect(saturationTemperature(model(m), psat(305), [320], 310)).toBeNull();
+    expect(m.calls).toBe(calls);
   });
 
   it('none past either end of the curve', () => {

@@ -123,25 +123,32 @@ const T_TOP_K = T_CHECK_MAX_K;
 interface Shared {
   sats: Map<number, Sat | null>;
   ends: Map<number, { T: number; p: number } | null>;
+  /** Saturation temperatures by pressure (`satTemperature`). */
+  satTs: Map<number, number | null>;
 }
 const shared = new Map<string, Shared>();
 const SHARED_SATS = 4000;
 
 function sharedFor(product: Product): Shared {
   const key = JSON.stringify(product);
-  return shared.get(key) ?? remember(shared, 20, key, { sats: new Map(), ends: new Map() });
+  return (
+    shared.get(key) ??
+    remember(shared, 20, key, { sats: new Map(), ends: new Map(), satTs: new Map() })
+  );
 }
 
 export class ProductModel {
   readonly basics: ProductBasics;
   private readonly sats: Map<number, Sat | null>;
   private readonly ends: Map<number, { T: number; p: number } | null>;
+  private readonly satTs: Map<number, number | null>;
 
   constructor(readonly product: Product) {
     this.basics = productBasics(product);
     const s = sharedFor(product);
     this.sats = s.sats;
     this.ends = s.ends;
+    this.satTs = s.satTs;
   }
 
   /**
@@ -166,6 +173,21 @@ export class ProductModel {
       ? T_TOP_K
       : bisectBoundary((T) => this.sat(T) !== null, T_60F_K, T_TOP_K, 0.01).x;
     return remember(topCache, 200, key, lo);
+  }
+
+  /**
+   * The temperature at which the saturation (bubble) pressure is pAbs, as `solve` finds it
+   * (searched from the product's floor up); remembered per pressure. Three searches of every check ask for
+   * one at a pressure that typing a temperature leaves alone (the site's air pressure for the
+   * cold-metal caution, the relief setting, a pressure reading), and each took about a third of
+   * a pure fluid's check. The answer is found once to the search's tolerance (1e-8 in −1/T,
+   * under 0.001 K) and then reused; a later search from other hints would land within that
+   * tolerance of it.
+   */
+  satTemperature(pAbs: number, solve: () => number | null): number | null {
+    const hit = this.satTs.get(pAbs);
+    if (hit !== undefined) return hit;
+    return remember(this.satTs, 200, pAbs, solve());
   }
 
   /** Saturation (pure) or bubble point (blend) at T, or null above the critical point / region. */

@@ -13,7 +13,7 @@
  */
 import { MODEL_ALLOWANCE } from '../rules/allowance.js';
 import { bracketedRoot } from '../solvers/root.js';
-import { T_CHECK_MAX_K } from '../limits.js';
+import { T_CHECK_MAX_K, checkMinTemperature } from '../limits.js';
 import type { ProductModel, State } from './model.js';
 
 /** Highest temperature searched, K. */
@@ -88,6 +88,23 @@ function solveIncreasing(
 
 /** Temperature at which the saturation (bubble) pressure equals pAbs, K, or null outside the curve. */
 export function saturationTemperature(
+  model: ProductModel,
+  pAbs: number,
+  hintsT: readonly number[],
+  Tlo: number,
+): number | null {
+  // Searched once per pressure from the product's own floor, then taken only if at or above Tlo
+  // (the function is increasing: its one root is the answer for any Tlo below it).
+  if (satTop(model) <= Tlo) return null; // nothing to search
+  const floor = checkMinTemperature(model.basics.Tmin);
+  const T = model.satTemperature(pAbs, () =>
+    searchSaturationTemperature(model, pAbs, hintsT, Math.min(floor, Tlo)),
+  );
+  return T !== null && T >= Tlo ? T : null;
+}
+
+/** The search behind `saturationTemperature` (not remembered). */
+function searchSaturationTemperature(
   model: ProductModel,
   pAbs: number,
   hintsT: readonly number[],
