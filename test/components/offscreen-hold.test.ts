@@ -63,6 +63,23 @@ async function placed(farBelow: boolean): Promise<CheckResults> {
   return el;
 }
 
+/** Far below the screen, R2 is given and held: the figures drawn stay R1's. Returns those. */
+async function heldR2(): Promise<{ el: CheckResults; before: number }> {
+  const el = await placed(true);
+  const before = shownRoom(el);
+  el.result = R2;
+  await microtasks();
+  expect(holdOf(el).pending !== null, 'held').to.equal(true);
+  expect(shownRoom(el), 'still the figures drawn before').to.equal(before);
+  return { el, before };
+}
+
+/** Nothing is held any more and the figures shown are no longer `before`. */
+function drawn(el: CheckResults, before: number): void {
+  expect(holdOf(el).pending === null, 'nothing held').to.equal(true);
+  expect(shownRoom(el)).to.not.equal(before);
+}
+
 describe('results far off screen are drawn when idle, never stale where seen', () => {
   it('the two results differ in the figure watched (else the test shows nothing)', () => {
     expect(R1.fillLimit.roomLeftMass).to.not.equal(R2.fillLimit.roomLeftMass);
@@ -73,20 +90,13 @@ describe('results far off screen are drawn when idle, never stale where seen', (
     const before = shownRoom(el);
     el.result = R2;
     await microtasks();
-    expect(holdOf(el).pending === null, 'nothing held').to.equal(true);
-    expect(shownRoom(el)).to.not.equal(before);
+    drawn(el, before);
   });
 
   it('far below the screen, it waits for an idle moment; updateComplete waits with it', async () => {
-    const el = await placed(true);
-    const before = shownRoom(el);
-    el.result = R2;
-    await microtasks();
-    expect(holdOf(el).pending !== null, 'held').to.equal(true);
-    expect(shownRoom(el), 'still the figures drawn before').to.equal(before);
+    const { el, before } = await heldR2();
     await el.updateComplete;
-    expect(holdOf(el).pending === null, 'nothing held').to.equal(true);
-    expect(shownRoom(el)).to.not.equal(before);
+    drawn(el, before);
     // A later result goes the same way and is drawn too.
     el.result = R1;
     await el.updateComplete;
@@ -94,27 +104,17 @@ describe('results far off screen are drawn when idle, never stale where seen', (
   });
 
   it('a held result is drawn before printing', async () => {
-    const el = await placed(true);
-    const before = shownRoom(el);
-    el.result = R2;
-    await microtasks();
-    expect(shownRoom(el)).to.equal(before);
+    const { el, before } = await heldR2();
     dispatchEvent(new Event('beforeprint'));
     await microtasks();
-    expect(holdOf(el).pending === null, 'nothing held').to.equal(true);
-    expect(shownRoom(el)).to.not.equal(before);
+    drawn(el, before);
   });
 
   it('a held result is drawn as soon as the element comes near the screen', async () => {
-    const el = await placed(true);
-    const before = shownRoom(el);
-    el.result = R2;
-    await microtasks();
-    expect(shownRoom(el)).to.equal(before);
+    const { el, before } = await heldR2();
     holdOf(el).placed(true);
     await microtasks();
-    expect(holdOf(el).pending === null, 'nothing held').to.equal(true);
-    expect(shownRoom(el)).to.not.equal(before);
+    drawn(el, before);
   });
 
   it('the held change still reaches the screen reader’s summary', async () => {
