@@ -177,12 +177,12 @@ export class ProductModel {
 
   /**
    * The temperature at which the saturation (bubble) pressure is pAbs, as `solve` finds it
-   * (searched from the product's floor up); remembered per pressure. Three searches of every check ask for
-   * one at a pressure that typing a temperature leaves alone (the site's air pressure for the
-   * cold-metal caution, the relief setting, a pressure reading), and each took about a third of
-   * a pure fluid's check. The answer is found once to the search's tolerance (1e-8 in −1/T,
-   * under 0.001 K) and then reused; a later search from other hints would land within that
-   * tolerance of it.
+   * (searched from the product's floor up); remembered per pressure. Three searches of every
+   * check ask for one at a pressure that typing a temperature leaves alone (the site's air
+   * pressure for the cold-metal caution, the relief setting, a pressure reading); together they
+   * were about a third of a pure fluid's check. The answer is found once to the search's
+   * tolerance (1e-8 in −1/T, under 0.001 K) and then reused; a later search from other hints
+   * would land within that tolerance of it.
    */
   satTemperature(pAbs: number, solve: () => number | null): number | null {
     const hit = this.satTs.get(pAbs);
