@@ -129,6 +129,13 @@ describe('saturation temperature on the Clausius–Clapeyron stand-in', () => {
     expect(m.calls).toBe(calls);
   });
 
+  it('a first ask above the root does not hide the root from a later ask below it', () => {
+    const m = standIn();
+    expect(saturationTemperature(model(m), psat(305), [320], 310)).toBeNull();
+    const T = saturationTemperature(model(m), psat(305), [280], 230)!;
+    expect(Math.abs(T - 305)).toBeLessThan(0.002);
+  });
+
   it('none past either end of the curve', () => {
     expect(saturationTemperature(model(standIn()), psat(TOP) * 1.01, [300], 230)).toBeNull();
     expect(saturationTemperature(model(standIn()), psat(230) * 0.99, [300], 230)).toBeNull();

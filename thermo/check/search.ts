@@ -110,8 +110,7 @@ function searchSaturationTemperature(
   hintsT: readonly number[],
   Tlo: number,
 ): number | null {
-  const Thi = satTop(model);
-  if (Thi <= Tlo) return null;
+  const Thi = satTop(model); // above Tlo: saturationTemperature has checked
   // Increasing in −1/T: x = −1/T, y = ln(p/pAbs).
   const f = (x: number) => {
     const s = model.sat(-1 / x);
