@@ -28,11 +28,16 @@ function seedTemperatures(r: ResolvedProduct, top: number): number[] {
     0, 0.25, 0.5, 0.75, 1, 1.5, 2, 2.5, 3, 4, 5, 6.5, 8, 10, 12.5, 15, 20, 25, 30, 40, 50, 60, 70,
     80, 100, 120,
   ].map((d) => top - d);
-  const fixed = [checkMinTemperature(r.Tmin), T_15C_K, T_60F_K];
+  const fixed = fixedTemperatures(r);
   return [...new Set([...fixed, ...below])]
     .filter((T) => T >= r.Tmin + 1 || fixed.includes(T))
     .sort((x, y) => y - x);
 }
+/** Lowest check temperature, 15 °C and 60 °F: solved by every first check of a blend. */
+function fixedTemperatures(r: ResolvedProduct): number[] {
+  return [checkMinTemperature(r.Tmin), T_15C_K, T_60F_K];
+}
+
 const products: Product[] = [
   ...LPG_PRESETS.map((p) => p.product).filter((p) => p.components.length > 1),
   ...REFRIGERANT_BLENDS.map((b) => b.id),
@@ -42,10 +47,18 @@ for (const product of products) {
   const r = resolveProduct(product);
   const top = new ProductModel(product).satTop();
   const bubble = [];
+  const fixed = fixedTemperatures(r);
   for (const T of seedTemperatures(r, top)) {
     const s = saturationPointAt(r, T, 'bubble');
-    const K = s.incipient.map((y, i) => Number((y / r.z[i]!).toPrecision(10)));
-    bubble.push(`[${T}, ${Number(s.p.toPrecision(10))}, ${K.join(', ')}]`);
+    // Ten digits start a solve as well as the full ones, except at the top itself: there the
+    // bubble point sits at the edge of what the solver can find (its K-factors within about
+    // 1e-4 of 1), and only the exact solution is confirmed again. It is written in full.
+    // The fixed temperatures (the product's basics) are written in full too: a start at the
+    // exact answer is confirmed by one evaluation, where ten digits take two.
+    const exact = T === top || fixed.includes(T);
+    const digits = (x: number) => (exact ? x : Number(x.toPrecision(10)));
+    const K = s.incipient.map((y, i) => digits(y / r.z[i]!));
+    bubble.push(`[${T}, ${digits(s.p)}, ${K.join(', ')}]`);
   }
   lines.push(
     `  [\n    '${blendKey(r)}',\n    { top: ${top}, bubble: [${bubble.join(', ')}] },\n  ],`,

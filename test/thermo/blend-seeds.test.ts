@@ -74,6 +74,13 @@ describe('blend seeds', () => {
         atol: 0, // the same computation: exactly equal, else regenerate the seeds
       });
     }
+    // With the seeds on, the check takes each stored top (its bubble point found again from the
+    // stored row) rather than falling back to the bisection: the point of the seeds.
+    const on = await engine(true);
+    for (const p of products) {
+      const seed = on.seeds.blendSeed(on.resolveProduct(p))!;
+      expect(new on.ProductModel(p).satTop(), `seeded top of ${JSON.stringify(p)}`).toBe(seed.top);
+    }
   }, 300_000);
 
   it('leave the figures of a blend check unchanged', async () => {

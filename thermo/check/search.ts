@@ -163,7 +163,8 @@ export function liquidFullTemperature(
   const hints: [number, number][] = [[Thi, yTop]];
   for (const T of hintsT) if (T >= Tlo && T < Thi) hints.push([T, y(T)]);
   // Already denser than the liquid at the lowest temperature searched: full from there on.
-  if (y(Tlo) >= 0) return Tlo;
+  // (y rises with T, so a hint below zero says y(Tlo) is too, without another saturation state.)
+  if (!hints.some(([, v]) => v < 0) && y(Tlo) >= 0) return Tlo;
   const T = solveIncreasing(y, hints, Tlo, Thi, 0.002);
   if (T === null) return ended ? Thi : null;
   const s = model.sat(T);

@@ -2,10 +2,11 @@
  * Bubble and dew pressures of a mixture at T (fugacity coefficients as in mixtureModel.ts).
  */
 import { ConvergenceError } from '../errors.js';
-import { extrapolate, solveDense } from './linear.js';
+import { extrapolate, solveInPlace } from './linear.js';
 import { phaseAt, type MixtureAtT } from './mixtureModel.js';
 import { pureSaturation } from './pure.js';
 import type { SolverReport } from './result.js';
+import { phaseDerivatives } from './phaseDerivatives.js';
 import { wilsonKOf } from './wilson.js';
 
 export interface SaturationPoint extends SolverReport {
@@ -21,12 +22,16 @@ export interface SaturationPoint extends SolverReport {
 
 /**
  * Bubble (kind = 'bubble') or dew (kind = 'dew') pressure at T for the given composition.
- * First successive substitution on K_i = φ_i,L/φ_i,V with the pressure update p ← p·Σ K_i x_i
- * (bubble) or p ← p/Σ y_i/K_i (dew); where that is slow (near the blend's critical region)
- * Newton's method on (ln K_i, ln p) with a finite-difference Jacobian takes over (Michelsen &
- * Mollerup, Thermodynamic Models: Fundamentals and Computational Aspects, ch. 12). Residual:
- * max of |Σ − 1| and the fugacity residuals. Rejects the trivial solution (phases of equal
- * composition), which means T is above the blend's critical region.
+ * Given a start (a neighbouring point of the curve), Newton's method on (ln K_i, ln p) with the
+ * analytic Jacobian, which converges quadratically from there (Michelsen & Mollerup,
+ * Thermodynamic Models: Fundamentals and Computational Aspects, 2nd ed., ch. 12). Without one,
+ * or where Newton fails from it, successive substitution on K_i = φ_i,L/φ_i,V with the pressure
+ * update p ← p·Σ K_i x_i (bubble) or p ← p/Σ y_i/K_i (dew), which converges from far away but
+ * slowly near the blend's critical region, where Newton's method finishes. Converged when every
+ * residual (|Σ − 1| and the fugacity residuals) is below 1e-10 (the substitution: |Σ − 1| below
+ * 1e-11 and K-factors that moved less than 1e-10). Rejects the trivial solution (phases of
+ * equal composition), which means T is above the blend's critical region, and a point of the
+ * other kind (`misoriented`). The iteration count includes every stage.
  */
 export function saturationPressure(
   mx: MixtureAtT,
@@ -34,11 +39,17 @@ export function saturationPressure(
   kind: 'bubble' | 'dew',
   start?: { p: number; K: Float64Array },
 ): SaturationPoint {
-  const it = start ? { p: start.p, K: Float64Array.from(start.K) } : raoultStart(mx, z, kind);
   const ctx = context(mx, z, kind);
-  const ss = substitute(ctx, it);
+  let spent = 0;
+  if (start) {
+    const warm = newton(ctx, start, 12);
+    if ('point' in warm) return warm.point;
+    spent = warm.iterations;
+  }
+  const it = start ? { p: start.p, K: Float64Array.from(start.K) } : raoultStart(mx, z, kind);
+  const ss = substitute(ctx, it, spent);
   if ('point' in ss) return ss.point;
-  const nw = newton(ctx, ss, start?.p);
+  const nw = newton(ctx, ss, 60);
   if ('point' in nw) return nw.point;
   throw new ConvergenceError(
     `${kind} pressure`,
@@ -101,6 +112,15 @@ function finish(c: Context, p: number, K: Float64Array, it: number, resid: numbe
   return { point };
 }
 
+/**
+ * True when a converged point lies on the other curve: near the critical region both phases can
+ * take the cubic's one root, and an iteration can land on the blend's dew point when asked for
+ * its bubble point (the incipient phase the denser one), or the reverse. Not this kind of point.
+ */
+function misoriented(kind: 'bubble' | 'dew', zBulk: number, zIncipient: number): boolean {
+  return kind === 'bubble' ? zIncipient <= zBulk : zIncipient >= zBulk;
+}
+
 /** Raoult-style start from pure vapour pressures (Wilson's estimate above a component's Tc). */
 function raoultStart(
   mx: MixtureAtT,
@@ -132,11 +152,13 @@ function raoultStart(
  * Successive substitution, accelerated every fourth step by the dominant-eigenvalue
  * extrapolation (Crowe & Nishio 1975, AIChE J. 21, 528): the iterates of (ln K, ln p) approach
  * the solution along one direction, with ratio λ; jump ahead by λ/(1 − λ) of the last step.
- * At most 25 steps; returns the point, or the iterate for Newton to finish.
+ * At most 25 steps; returns the point, or the iterate for Newton to finish. `spent`: steps
+ * already taken by an earlier stage (counted in the report).
  */
 function substitute(
   c: Context,
   start: { p: number; K: Float64Array },
+  spent: number,
 ): { point: SaturationPoint } | Iterate {
   const { mx, z, kind, w } = c;
   const n = mx.n;
@@ -153,16 +175,24 @@ function substitute(
     const inc = phaseAt(mx, p, w, c.incChoice, false);
     let S2 = 0;
     let trivial = 0;
+    let moved = 0;
     for (let i = 0; i < n; i++) {
       const lnK =
         kind === 'bubble' ? bulk.lnPhi[i]! - inc.lnPhi[i]! : inc.lnPhi[i]! - bulk.lnPhi[i]!;
+      moved = Math.max(moved, Math.abs(lnK - Math.log(K[i]!)));
       K[i] = Math.exp(lnK);
       trivial += lnK * lnK;
       S2 += kind === 'bubble' ? K[i]! * z[i]! : z[i]! / K[i]!;
     }
     resid = Math.abs(S2 - 1);
     if (trivial < 1e-8) break;
-    if (resid < 1e-11) return finish(c, p, K, it + 1, resid);
+    // Converged when Σ = 1 and the K-factors have stopped moving (equal fugacities, the test
+    // Newton's method applies). Near the critical region the substitution creeps: Σ can sit at 1
+    // while the K-factors still drift, by 1e-6 a step, towards the trivial solution.
+    if (resid < 1e-11 && moved < 1e-10) {
+      if (misoriented(kind, bulk.Z, inc.Z)) break;
+      return finish(c, p, K, spent + it + 1, resid);
+    }
     const pNew = kind === 'bubble' ? p * S2 : p / S2;
     // Damp large jumps so a poor start cannot throw the iteration out of the two-root region.
     p = Math.min(Math.max(pNew, p / 3), p * 3);
@@ -176,72 +206,90 @@ function substitute(
       p = Math.exp(u2[n]!);
     }
   }
-  return { p, K, iterations: it, residual: resid };
+  return { p, K, iterations: spent + it, residual: resid };
 }
 
-/** Residuals of equal fugacity and Σ = 1 at u = (ln K, ln p); false on the trivial solution. */
-function residuals(c: Context, u: Float64Array, out: Float64Array): boolean {
-  const { mx, z, kind, w } = c;
-  const n = mx.n;
-  const pp = Math.exp(u[n]!);
-  const Kv = u.subarray(0, n).map(Math.exp);
-  const S = incipientOf(c, Kv, w);
-  const bulk = phaseAt(mx, pp, z, c.bulkChoice, false);
-  const inc = phaseAt(mx, pp, w, c.incChoice, false);
-  if (bulk.nRoots === 1 && inc.nRoots === 1 && Math.abs(bulk.Z - inc.Z) < 1e-9) return false;
-  for (let i = 0; i < n; i++) {
-    out[i] =
-      kind === 'bubble'
-        ? u[i]! + inc.lnPhi[i]! - bulk.lnPhi[i]!
-        : u[i]! + bulk.lnPhi[i]! - inc.lnPhi[i]!;
-  }
-  out[n] = S - 1;
-  return true;
-}
-
-/** Newton on u = (ln K_1 … ln K_n, ln p) with a finite-difference Jacobian; at most 60 steps. */
+/**
+ * Newton's method on u = (ln K_1 … ln K_n, ln p) with the analytic Jacobian (phaseDerivatives.ts):
+ *   f_i = ln K_i ± (ln φ_i(incipient) − ln φ_i(bulk)),  f_n = Σ − 1,
+ *   ∂f_i/∂ln K_j = δ_ij + Φ_ij·w_j  (Φ = n·∂ln φ/∂n of the incipient phase, w its composition;
+ *   ln φ is homogeneous of degree 0 in the mole numbers, so normalising w adds nothing),
+ *   ∂f_i/∂ln p = ±p·(∂ln φ_i/∂p(incipient) − ∂ln φ_i/∂p(bulk)),
+ *   ∂f_n/∂ln K_j = K_j·z_j (bubble) or −z_j/K_j (dew),  ∂f_n/∂ln p = 0,
+ * with + for a bubble point and − for a dew point. Converges quadratically, so a start near the
+ * answer (a neighbouring point on the curve) takes two or three steps where successive
+ * substitution takes ten or more in the critical region. Stops when every residual is below
+ * 1e-10; steps are cut to at most 0.3 in any variable. Fails (returns the iterate) on the
+ * trivial solution, a singular Jacobian or after maxSteps.
+ */
 function newton(
   c: Context,
-  from: Iterate,
-  pStart: number | undefined,
+  from: { p: number; K: Float64Array; iterations?: number; residual?: number },
+  maxSteps: number,
 ): { point: SaturationPoint } | Iterate {
-  const n = c.mx.n;
-  let { p, iterations: it, residual: resid } = from;
-  const K = from.K;
-  const u = new Float64Array(n + 1);
-  if (!Number.isFinite(p) || p <= 0) p = pStart ?? c.mx.product.components[0]!.pc * 0.5;
-  for (let i = 0; i < n; i++) u[i] = Math.log(K[i]!);
-  u[n] = Math.log(p);
-  const f0 = new Float64Array(n + 1);
-  const f1 = new Float64Array(n + 1);
-  for (let nit = 0; nit < 60; nit++, it++) {
-    if (!residuals(c, u, f0)) break;
-    resid = Math.max(...f0.map(Math.abs));
+  const { mx, z, kind, w } = c;
+  const n = mx.n;
+  let it = from.iterations ?? 0;
+  let resid = from.residual ?? Infinity;
+  let p = from.p;
+  const K = Float64Array.from(from.K);
+  if (!Number.isFinite(p) || p <= 0) p = mx.product.components[0]!.pc * 0.5;
+  const sign = kind === 'bubble' ? 1 : -1;
+  const f = new Float64Array(n + 1);
+  // The last point a full step was taken from, for backtracking.
+  let back: { K: Float64Array; p: number; d: Float64Array; scale: number } | null = null;
+  // Jacobian and step, (n + 1)×(n + 1) and n + 1, reused by every step.
+  const m = n + 1;
+  const J = new Float64Array(m * m);
+  const d = new Float64Array(m);
+  for (let step = 0; step < maxSteps; step++, it++) {
+    const S = incipientOf(c, K, w);
+    const bulk = phaseAt(mx, p, z, c.bulkChoice, false);
+    const inc = phaseAt(mx, p, w, c.incChoice, false);
+    const same = bulk.nRoots === 1 && inc.nRoots === 1 && Math.abs(bulk.Z - inc.Z) < 1e-9;
     let trivial = 0;
-    for (let i = 0; i < n; i++) trivial += u[i]! * u[i]!;
-    if (trivial < 1e-8) break;
-    if (resid < 1e-10) {
-      for (let i = 0; i < n; i++) K[i] = Math.exp(u[i]!);
-      return finish(c, Math.exp(u[n]!), K, it + 1, resid);
+    resid = Math.abs(S - 1);
+    for (let i = 0; i < n; i++) {
+      const lnK = Math.log(K[i]!);
+      trivial += lnK * lnK;
+      f[i] = lnK + sign * (inc.lnPhi[i]! - bulk.lnPhi[i]!);
+      resid = Math.max(resid, Math.abs(f[i]!));
     }
-    const J: number[][] = Array.from({ length: n + 1 }, () => new Array<number>(n + 1).fill(0));
-    for (let k = 0; k <= n; k++) {
-      const h = 1e-7;
-      const uk = u[k]!;
-      u[k] = uk + h;
-      const ok = residuals(c, u, f1);
-      u[k] = uk;
-      if (!ok) break;
-      for (let r = 0; r <= n; r++) J[r]![k] = (f1[r]! - f0[r]!) / h;
+    f[n] = S - 1;
+    const lost = same || trivial < 1e-8 || !Number.isFinite(resid);
+    if (!lost && resid < 1e-10) {
+      if (misoriented(kind, bulk.Z, inc.Z)) break;
+      return finish(c, p, K, it + 1, resid);
     }
-    const step = solveDense(
-      J,
-      Array.from(f0, (x) => -x),
-    );
-    if (!step) break;
-    const big = Math.max(...step.map(Math.abs));
+    // Close to the critical region Newton's basin is narrow: a step that lands on the trivial
+    // solution (or where the cubic gives both phases one root and the same volume) is halved, up
+    // to four times, from where it was taken. A step that only raises the residual is kept: the
+    // residual's parts differ in scale, and holding it down stalls the iteration there.
+    if (back && lost && back.scale > 0.1) {
+      back.scale /= 2;
+      for (let i = 0; i < n; i++) K[i] = back.K[i]! * Math.exp(back.scale * back.d[i]!);
+      p = back.p * Math.exp(back.scale * back.d[n]!);
+      continue;
+    }
+    if (lost) break;
+    const dInc = phaseDerivatives(mx, p, w, inc.Z);
+    const dBulk = phaseDerivatives(mx, p, z, bulk.Z, false);
+    const Phi = dInc.dlnPhidn!;
+    for (let i = 0; i < n; i++) {
+      for (let j = 0; j < n; j++) J[i * m + j] = (i === j ? 1 : 0) + Phi[i * n + j]! * w[j]!;
+      J[i * m + n] = sign * p * (dInc.dlnPhidp[i]! - dBulk.dlnPhidp[i]!);
+      d[i] = -f[i]!;
+    }
+    for (let j = 0; j < n; j++) J[n * m + j] = kind === 'bubble' ? K[j]! * z[j]! : -z[j]! / K[j]!;
+    J[n * m + n] = 0;
+    d[n] = -f[n]!;
+    if (!solveInPlace(J, d, m)) break;
+    let big = 0;
+    for (let k = 0; k < m; k++) big = Math.max(big, Math.abs(d[k]!));
     const scale = big > 0.3 ? 0.3 / big : 1;
-    for (let k = 0; k <= n; k++) u[k] = u[k]! + scale * step[k]!;
+    back = { K: Float64Array.from(K), p, d: Float64Array.from(d), scale };
+    for (let i = 0; i < n; i++) K[i] = K[i]! * Math.exp(scale * d[i]!);
+    p *= Math.exp(scale * d[n]!);
   }
   return { p, K, iterations: it, residual: resid };
 }

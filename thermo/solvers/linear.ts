@@ -3,25 +3,46 @@
 /** Gaussian elimination with partial pivoting; null when singular. */
 export function solveDense(A: number[][], b: number[]): number[] | null {
   const n = b.length;
+  const M = new Float64Array(n * n);
+  for (let r = 0; r < n; r++) for (let c = 0; c < n; c++) M[r * n + c] = A[r]![c]!;
+  const x = Float64Array.from(b);
+  return solveInPlace(M, x, n) ? Array.from(x) : null;
+}
+
+/**
+ * Gaussian elimination with partial pivoting on an n×n row-major matrix M and right-hand side
+ * x, both overwritten (x by the solution): no allocation, for the inner loops of Newton's
+ * method. False when M is singular or the solution is not finite.
+ */
+export function solveInPlace(M: Float64Array, x: Float64Array, n: number): boolean {
   for (let c = 0; c < n; c++) {
     let piv = c;
-    for (let r = c + 1; r < n; r++) if (Math.abs(A[r]![c]!) > Math.abs(A[piv]![c]!)) piv = r;
-    if (Math.abs(A[piv]![c]!) < 1e-300) return null;
-    [A[c], A[piv]] = [A[piv]!, A[c]!];
-    [b[c], b[piv]] = [b[piv]!, b[c]!];
+    for (let r = c + 1; r < n; r++)
+      if (Math.abs(M[r * n + c]!) > Math.abs(M[piv * n + c]!)) piv = r;
+    if (Math.abs(M[piv * n + c]!) < 1e-300) return false;
+    if (piv !== c) {
+      for (let k = 0; k < n; k++) {
+        const t = M[c * n + k]!;
+        M[c * n + k] = M[piv * n + k]!;
+        M[piv * n + k] = t;
+      }
+      const t = x[c]!;
+      x[c] = x[piv]!;
+      x[piv] = t;
+    }
     for (let r = c + 1; r < n; r++) {
-      const f = A[r]![c]! / A[c]![c]!;
-      for (let k = c; k < n; k++) A[r]![k]! -= f * A[c]![k]!;
-      b[r]! -= f * b[c]!;
+      const f = M[r * n + c]! / M[c * n + c]!;
+      for (let k = c; k < n; k++) M[r * n + k]! -= f * M[c * n + k]!;
+      x[r]! -= f * x[c]!;
     }
   }
-  const x = new Array<number>(n).fill(0);
   for (let r = n - 1; r >= 0; r--) {
-    let s = b[r]!;
-    for (let k = r + 1; k < n; k++) s -= A[r]![k]! * x[k]!;
-    x[r] = s / A[r]![r]!;
+    let s = x[r]!;
+    for (let k = r + 1; k < n; k++) s -= M[r * n + k]! * x[k]!;
+    x[r] = s / M[r * n + r]!;
+    if (!Number.isFinite(x[r]!)) return false;
   }
-  return x.every(Number.isFinite) ? x : null;
+  return true;
 }
 
 /**
