@@ -125,6 +125,8 @@ interface Shared {
   ends: Map<number, { T: number; p: number } | null>;
   /** Saturation temperatures by pressure (`satTemperature`). */
   satTs: Map<number, number | null>;
+  /** Top of a blend's bubble curve once found (`satTop`), K. */
+  top?: number;
 }
 const shared = new Map<string, Shared>();
 const SHARED_SATS = 4000;
@@ -142,10 +144,14 @@ export class ProductModel {
   private readonly sats: Map<number, Sat | null>;
   private readonly ends: Map<number, { T: number; p: number } | null>;
   private readonly satTs: Map<number, number | null>;
+  private readonly shared: Shared;
+  /** True while `satTop` is searching (its own saturation states are not cut at the top). */
+  private findingTop = false;
 
   constructor(readonly product: Product) {
     this.basics = productBasics(product);
     const s = sharedFor(product);
+    this.shared = s;
     this.sats = s.sats;
     this.ends = s.ends;
     this.satTs = s.satTs;
@@ -159,6 +165,17 @@ export class ProductModel {
   satTop(): number {
     const b = this.basics;
     if (b.pure) return Math.min(T_TOP_K, b.Tc - 0.5);
+    if (this.shared.top !== undefined) return this.shared.top;
+    this.findingTop = true;
+    try {
+      return (this.shared.top = this.findTop());
+    } finally {
+      this.findingTop = false;
+    }
+  }
+
+  /** The search behind a blend's `satTop` (memoised by the product's JSON). */
+  private findTop(): number {
     const key = JSON.stringify(this.product);
     const hit = topCache.get(key);
     if (hit !== undefined) return hit;
@@ -195,7 +212,12 @@ export class ProductModel {
     const hit = this.sats.get(T);
     if (hit !== undefined) return hit;
     let s: Sat | null = null;
-    if (!(this.basics.pure && T > this.basics.Tc - 0.5)) {
+    // A blend has no saturation state above the top of its bubble curve (by that top's
+    // definition); asking the core there costs every stage of the solver and a march up the
+    // curve before it gives up, and the searches ask there often (the relief search up to
+    // 400 K, the two-phase end's bisection).
+    const above = !this.basics.pure && !this.findingTop && T > this.satTop();
+    if (!above && !(this.basics.pure && T > this.basics.Tc - 0.5)) {
       try {
         const r = saturation(this.product, T);
         s = { pAbs: r.pAbs, rhoL: r.rhoL, rhoV: r.rhoV };

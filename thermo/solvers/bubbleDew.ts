@@ -242,6 +242,8 @@ function newton(
   const m = n + 1;
   const J = new Float64Array(m * m);
   const d = new Float64Array(m);
+  let best = Infinity;
+  let sinceBest = 0;
   for (let step = 0; step < maxSteps; step++, it++) {
     const S = incipientOf(c, K, w);
     const bulk = phaseAt(mx, p, z, c.bulkChoice, false);
@@ -272,6 +274,14 @@ function newton(
       continue;
     }
     if (lost) break;
+    // Past the end of the curve there is nothing to converge to and the steps wander (measured:
+    // the pressure swinging between two values, the residual flat); a genuine point close to
+    // the critical region can also take a few steps before its residual falls, but it has
+    // fallen to nine tenths of its best within six steps in every case measured.
+    if (resid < 0.9 * best) {
+      best = resid;
+      sinceBest = 0;
+    } else if (++sinceBest >= 6) break;
     const dInc = phaseDerivatives(mx, p, w, inc.Z);
     const dBulk = phaseDerivatives(mx, p, z, bulk.Z, false);
     const Phi = dInc.dlnPhidn!;
