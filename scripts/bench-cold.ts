@@ -1,5 +1,6 @@
 /**
- * `npx tsx scripts/bench-cold.ts [thermo-dir] [--cpu]`: the first tank check of a 4-component
+ * `node --import tsx scripts/bench-cold.ts [thermo-dir] [--cpu]` (or `npx tsx …`, which runs it
+ * beside a relay process and reads a few ms higher): the first tank check of a 4-component
  * LP-gas blend (the HD-5 limit preset) in this fresh process — nothing solved yet, the code not
  * yet compiled by the JIT — in ms, printed alone on one line. Module loading is not counted. Run
  * by scripts/bench/cold.ts in fresh processes (`npm run bench`); given another copy of thermo/ it
