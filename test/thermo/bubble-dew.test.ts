@@ -393,6 +393,30 @@ describe('saturationPressure: a point of the asked kind, never the other curve',
     }
   });
 
+  it('and the reverse: a dew solve started from the bubble point’s own solution', () => {
+    const r = resolveProduct(LPG_PRESETS.find((p) => p.id === 'hd5-limit')!.product);
+    let checked = 0;
+    for (const T of [368, 369, 369.6]) {
+      const mx = mixtureAtT(r, T);
+      const bubble = saturationPointAt(r, T, 'bubble');
+      if (phaseAt(mx, bubble.p, r.z, 'liquid').nRoots !== 1) continue;
+      checked++;
+      let s;
+      try {
+        // At a dew point K_i = z_i/x_i with x the incipient liquid: here the bubble point's vapour.
+        s = saturationPressure(mx, r.z, 'dew', {
+          p: bubble.p,
+          K: Float64Array.from(bubble.incipient, (y, i) => r.z[i]! / y),
+        });
+      } catch (e) {
+        expect(e).toBeInstanceOf(ConvergenceError);
+        continue;
+      }
+      expect(s.vIncipient, `incipient liquid denser at ${T} K`).toBeLessThan(s.vBulk);
+    }
+    expect(checked, 'one-root cases tried').toBeGreaterThan(0);
+  });
+
   it('near the top of an offered LP-gas blend’s curve: the incipient phase is the vapour', () => {
     // By definition of a bubble point (Michelsen & Mollerup, Thermodynamic Models, 2nd ed.,
     // ch. 12): the incipient vapour is less dense than the liquid and richer in the most
@@ -422,6 +446,30 @@ describe('saturationPressure: a point of the asked kind, never the other curve',
         ).toBeGreaterThan(r.z[eth]!);
       }
       expect(found, `${id}: bubble points found`).toBeGreaterThan(50);
+    }
+  });
+});
+
+describe('saturationPressure: past the end of the curve', () => {
+  it('from the curve’s last point, gives up after a few steps rather than wandering', () => {
+    // Above the top of the HD-5 blend's bubble curve there is nothing to converge to: Newton's
+    // steps swing the pressure between two values with a flat residual. The check asks there
+    // often (the core's flash above the curve), so a failure must be cheap: measured 6 steps
+    // in all (Newton gives up after six without progress; substitution then lands on the
+    // trivial solution at once), 12 without the stall rule.
+    const r = resolveProduct(LPG_PRESETS.find((p) => p.id === 'hd5-limit')!.product);
+    const top = new ProductModel(LPG_PRESETS.find((p) => p.id === 'hd5-limit')!.product).satTop();
+    const last = saturationPointAt(r, top, 'bubble');
+    const start = { p: last.p, K: Float64Array.from(last.incipient, (y, i) => y / r.z[i]!) };
+    for (const T of [top + 1, top + 5, top + 20]) {
+      let err: unknown;
+      try {
+        saturationPressure(mixtureAtT(r, T), r.z, 'bubble', start);
+      } catch (e) {
+        err = e;
+      }
+      expect(err, `no bubble point at ${T} K`).toBeInstanceOf(ConvergenceError);
+      expect((err as ConvergenceError).iterations, `steps at ${T} K`).toBeLessThanOrEqual(8);
     }
   });
 });

@@ -236,8 +236,6 @@ function newton(
   if (!Number.isFinite(p) || p <= 0) p = mx.product.components[0]!.pc * 0.5;
   const sign = kind === 'bubble' ? 1 : -1;
   const f = new Float64Array(n + 1);
-  // The last point a full step was taken from, for backtracking.
-  let back: { K: Float64Array; p: number; d: Float64Array; scale: number } | null = null;
   // Jacobian and step, (n + 1)×(n + 1) and n + 1, reused by every step.
   const m = n + 1;
   const J = new Float64Array(m * m);
@@ -258,22 +256,11 @@ function newton(
       resid = Math.max(resid, Math.abs(f[i]!));
     }
     f[n] = S - 1;
-    const lost = same || trivial < 1e-8 || !Number.isFinite(resid);
-    if (!lost && resid < 1e-10) {
+    if (same || trivial < 1e-8 || !Number.isFinite(resid)) break;
+    if (resid < 1e-10) {
       if (misoriented(kind, bulk.Z, inc.Z)) break;
       return finish(c, p, K, it + 1, resid);
     }
-    // Close to the critical region Newton's basin is narrow: a step that lands on the trivial
-    // solution (or where the cubic gives both phases one root and the same volume) is halved, up
-    // to four times, from where it was taken. A step that only raises the residual is kept: the
-    // residual's parts differ in scale, and holding it down stalls the iteration there.
-    if (back && lost && back.scale > 0.1) {
-      back.scale /= 2;
-      for (let i = 0; i < n; i++) K[i] = back.K[i]! * Math.exp(back.scale * back.d[i]!);
-      p = back.p * Math.exp(back.scale * back.d[n]!);
-      continue;
-    }
-    if (lost) break;
     // Past the end of the curve there is nothing to converge to and the steps wander (measured:
     // the pressure swinging between two values, the residual flat); a genuine point close to
     // the critical region can also take a few steps before its residual falls, but it has
@@ -297,7 +284,6 @@ function newton(
     let big = 0;
     for (let k = 0; k < m; k++) big = Math.max(big, Math.abs(d[k]!));
     const scale = big > 0.3 ? 0.3 / big : 1;
-    back = { K: Float64Array.from(K), p, d: Float64Array.from(d), scale };
     for (let i = 0; i < n; i++) K[i] = K[i]! * Math.exp(scale * d[i]!);
     p *= Math.exp(scale * d[n]!);
   }
