@@ -77,6 +77,23 @@ describe('solveDense', () => {
     close(solveDense(A, b), x, 'built from the solution');
   });
 
+  it('pivots in a later column too (a zero left on the diagonal after the first step)', () => {
+    // 2x + y + z = 7, x + 0.5y + 3z = 11, x + 2y + z = 8 → (1, 2, 3). Eliminating x leaves
+    // 0·y + 2.5z = 7.5 and 1.5y + 0.5z = 4.5: the second step must take the third row's pivot.
+    close(
+      solveDense(
+        [
+          [2, 1, 1],
+          [1, 0.5, 3],
+          [1, 2, 1],
+        ],
+        [7, 11, 8],
+      ),
+      [1, 2, 3],
+      'solved by hand',
+    );
+  });
+
   it('returns null for a singular matrix and for a result that is not finite', () => {
     expect(
       solveDense(
