@@ -137,7 +137,9 @@ export class TanksideApp extends LitElement {
   private async _askPersistence(): Promise<void> {
     const granted = await requestPersistentStorage();
     this._persisted = granted;
-    if (this._store && this._meta) {
+    // Removed while the browser was asked: its store is closed (disconnectedCallback), and a
+    // write now would throw from a closing database.
+    if (this._store && this._meta && this.isConnected) {
       this._meta = { ...this._meta, persisted: granted };
       await this._store.putMeta(this._meta);
     }
